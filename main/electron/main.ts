@@ -1,0 +1,114 @@
+/**
+ * Electron main process: one locked-down window showing the built renderer, and one IPC handler
+ * per API channel. Kept thin: the work is in the engine (app/) and the operations (main/server/).
+ *
+ * Compiled by `npm run build:main` to build/main/electron/main.js (package.json "main").
+ */
+import { app, BrowserWindow, ipcMain, session, type IpcMainInvokeEvent, type WebContents } from 'electron';
+import path from 'node:path';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import type { IpcReply } from '../../app/api/contract.js';
+import { API_CHANNELS, InvalidRequestError, createOperations } from '../server/operations.js';
+import { PRODUCT_NAME } from '../server/app-identity.js';
+import { CONTENT_SECURITY_POLICY } from '../server/security-policy.js';
+
+const here = path.dirname(fileURLToPath(import.meta.url));
+/** build/main/electron/ -> build/renderer/index.html */
+const RENDERER_PAGE = path.join(here, '..', '..', 'renderer', 'index.html');
+const RENDERER_URL = pathToFileURL(RENDERER_PAGE).href;
+const PRELOAD = path.join(here, 'preload.cjs');
+
+// Every renderer runs sandboxed, whatever a window's own options say.
+app.enableSandbox();
+
+function lockDownSession(): void {
+  const ses = session.defaultSession;
+  // No remote content at all: the app is offline and loads only its own files.
+  ses.webRequest.onBeforeRequest({ urls: ['http://*/*', 'https://*/*', 'ws://*/*', 'wss://*/*'] }, (_details, callback) =>
+    callback({ cancel: true }),
+  );
+  ses.webRequest.onHeadersReceived((details, callback) =>
+    callback({
+      responseHeaders: { ...details.responseHeaders, 'Content-Security-Policy': [CONTENT_SECURITY_POLICY] },
+    }),
+  );
+  ses.setPermissionRequestHandler((_contents, _permission, callback) => callback(false));
+  ses.setPermissionCheckHandler(() => false);
+}
+
+/** Applies to every web contents, including any a future feature creates. */
+function refuseLeavingTheApp(contents: WebContents): void {
+  contents.setWindowOpenHandler(() => ({ action: 'deny' }));
+  contents.on('will-navigate', (event, url) => {
+    if (url !== RENDERER_URL) event.preventDefault();
+  });
+  contents.on('will-redirect', (event) => event.preventDefault());
+  contents.on('will-attach-webview', (event) => event.preventDefault());
+}
+
+function isTrustedSender(event: IpcMainInvokeEvent): boolean {
+  const url = event.senderFrame?.url ?? '';
+  return url.split('#', 1)[0] === RENDERER_URL;
+}
+
+function registerIpcHandlers(): void {
+  const operations = createOperations({ name: PRODUCT_NAME, version: app.getVersion() });
+  for (const channel of API_CHANNELS) {
+    ipcMain.handle(channel, async (event, request: unknown): Promise<IpcReply<unknown>> => {
+      if (!isTrustedSender(event)) return { ok: false, error: 'Requests from pages other than Lamina are refused.' };
+      try {
+        return { ok: true, value: await operations[channel](request) };
+      } catch (error) {
+        if (error instanceof InvalidRequestError) return { ok: false, error: error.message };
+        console.error(`Lamina: ${channel} failed:`, error);
+        return { ok: false, error: `The ${channel} operation failed; see the terminal for details.` };
+      }
+    });
+  }
+}
+
+function createMainWindow(): BrowserWindow {
+  const window = new BrowserWindow({
+    width: 1120,
+    height: 800,
+    minWidth: 640,
+    minHeight: 480,
+    title: 'Lamina',
+    show: false,
+    backgroundColor: '#f7f6f2',
+    webPreferences: {
+      preload: PRELOAD,
+      contextIsolation: true,
+      sandbox: true,
+      nodeIntegration: false,
+      nodeIntegrationInWorker: false,
+      webSecurity: true,
+      allowRunningInsecureContent: false,
+      webviewTag: false,
+      navigateOnDragDrop: false,
+      spellcheck: false,
+    },
+  });
+  window.once('ready-to-show', () => window.show());
+  void window.loadFile(RENDERER_PAGE);
+  return window;
+}
+
+app.on('web-contents-created', (_event, contents) => refuseLeavingTheApp(contents));
+app.on('window-all-closed', () => app.quit());
+
+app.whenReady().then(
+  () => {
+    lockDownSession();
+    registerIpcHandlers();
+    createMainWindow();
+    // macOS: re-create the window when the dock icon is clicked and none is open.
+    app.on('activate', () => {
+      if (BrowserWindow.getAllWindows().length === 0) createMainWindow();
+    });
+  },
+  (error: unknown) => {
+    console.error('Lamina could not start:', error);
+    app.exit(1);
+  },
+);

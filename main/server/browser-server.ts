@@ -1,0 +1,223 @@
+/**
+ * Browser mode: Lamina's built renderer served on the loopback interface, with the same Content
+ * Security Policy as the desktop window and one JSON endpoint per API channel (POST /api/<name>).
+ *
+ * Only 127.0.0.1 (or ::1) is ever bound, and requests must name that host, so a web page elsewhere
+ * cannot reach the API by rebinding a DNS name to this machine.
+ */
+import http from 'node:http';
+import { createReadStream } from 'node:fs';
+import { realpath, stat } from 'node:fs/promises';
+import path from 'node:path';
+import type { AddressInfo } from 'node:net';
+import { mimeTypeFor } from './mime-types.js';
+import { SECURITY_HEADERS } from './security-policy.js';
+import { API_CHANNELS, InvalidRequestError, createOperations, httpPathFor, type OperationHandlers } from './operations.js';
+import { PROJECT_ROOT, readAppIdentity } from './app-identity.js';
+
+export const DEFAULT_PORT = 5178;
+const LOOPBACK_HOSTS = new Set(['127.0.0.1', '::1']);
+const MAX_BODY_BYTES = 1 << 20;
+
+export interface BrowserServerOptions {
+  /** TCP port; 0 picks a free one. Default 5178. */
+  readonly port?: number;
+  /** Loopback address to bind: '127.0.0.1' (default) or '::1'. */
+  readonly host?: string;
+  /** Folder with the built renderer. Default build/renderer in the project root. */
+  readonly root?: string;
+}
+
+export interface BrowserServer {
+  /** e.g. http://127.0.0.1:5178/ */
+  readonly url: string;
+  readonly host: string;
+  readonly port: number;
+  close(): Promise<void>;
+}
+
+export async function startBrowserServer(options: BrowserServerOptions = {}): Promise<BrowserServer> {
+  const host = options.host ?? '127.0.0.1';
+  if (!LOOPBACK_HOSTS.has(host)) {
+    throw new Error(`The host must be a loopback address (127.0.0.1 or ::1), not "${host}"; Lamina never listens on a network.`);
+  }
+  const port = options.port ?? DEFAULT_PORT;
+  if (!Number.isInteger(port) || port < 0 || port > 65535) {
+    throw new Error(`The port must be a whole number from 0 to 65535 (0 picks a free port), not "${port}".`);
+  }
+  const root = await realpath(path.resolve(options.root ?? path.join(PROJECT_ROOT, 'build', 'renderer')));
+  const operations = createOperations(readAppIdentity());
+  const routes = new Map(API_CHANNELS.map((channel) => [httpPathFor(channel), channel] as const));
+
+  const server = http.createServer((request, response) => {
+    handle(request, response).catch((error: unknown) => {
+      console.error('Lamina browser server:', error);
+      if (!response.headersSent) sendText(response, 500, 'The server failed while answering this request.');
+      else response.destroy();
+    });
+  });
+
+  async function handle(request: http.IncomingMessage, response: http.ServerResponse): Promise<void> {
+    const boundPort = (server.address() as AddressInfo).port;
+    if (!isOwnHost(request.headers.host, boundPort)) {
+      sendText(response, 403, 'This server answers only to 127.0.0.1, localhost or [::1] on its own port.');
+      return;
+    }
+    const pathname = new URL(request.url ?? '/', 'http://127.0.0.1').pathname;
+    const channel = routes.get(pathname);
+    if (channel) return handleApi(channel, request, response, boundPort, operations);
+    if (pathname.startsWith('/api/')) {
+      sendJson(response, 404, { error: `There is no operation at ${pathname}.` });
+      return;
+    }
+    return serveFile(root, request, response);
+  }
+
+  await new Promise<void>((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(port, host, () => {
+      server.off('error', reject);
+      resolve();
+    });
+  });
+
+  const address = server.address() as AddressInfo;
+  const urlHost = address.family === 'IPv6' ? `[${address.address}]` : address.address;
+  return {
+    url: `http://${urlHost}:${address.port}/`,
+    host: address.address,
+    port: address.port,
+    close: () =>
+      new Promise<void>((resolve, reject) => {
+        server.close((error) => (error ? reject(error) : resolve()));
+        server.closeAllConnections();
+      }),
+  };
+}
+
+function isOwnHost(hostHeader: string | undefined, port: number): boolean {
+  if (!hostHeader) return false;
+  return [`127.0.0.1:${port}`, `localhost:${port}`, `[::1]:${port}`].includes(hostHeader.toLowerCase());
+}
+
+async function handleApi(
+  channel: keyof OperationHandlers,
+  request: http.IncomingMessage,
+  response: http.ServerResponse,
+  port: number,
+  operations: OperationHandlers,
+): Promise<void> {
+  if (request.method !== 'POST') {
+    response.setHeader('Allow', 'POST');
+    sendJson(response, 405, { error: `${httpPathFor(channel)} accepts POST only.` });
+    return;
+  }
+  // A page on another origin may still send a request; refuse it unless it comes from this origin.
+  const origin = request.headers.origin;
+  if (origin !== undefined && !isOwnHost(origin.replace(/^http:\/\//, ''), port)) {
+    sendJson(response, 403, { error: 'Requests from other origins are refused.' });
+    return;
+  }
+  const body = await readBody(request);
+  if (body === undefined) {
+    sendJson(response, 413, { error: `The request body must be at most ${MAX_BODY_BYTES} bytes.` });
+    return;
+  }
+  let input: unknown = undefined;
+  if (body.length > 0) {
+    if (!/^application\/json\b/i.test(request.headers['content-type'] ?? '')) {
+      sendJson(response, 415, { error: 'The request body must be sent as application/json.' });
+      return;
+    }
+    try {
+      input = JSON.parse(body);
+    } catch {
+      sendJson(response, 400, { error: 'The request body is not valid JSON.' });
+      return;
+    }
+  }
+  try {
+    sendJson(response, 200, await operations[channel](input));
+  } catch (error) {
+    if (error instanceof InvalidRequestError) sendJson(response, 400, { error: error.message });
+    else throw error;
+  }
+}
+
+async function readBody(request: http.IncomingMessage): Promise<string | undefined> {
+  const chunks: Buffer[] = [];
+  let size = 0;
+  for await (const chunk of request as AsyncIterable<Buffer>) {
+    size += chunk.length;
+    if (size > MAX_BODY_BYTES) return undefined;
+    chunks.push(chunk);
+  }
+  return Buffer.concat(chunks).toString('utf8');
+}
+
+async function serveFile(root: string, request: http.IncomingMessage, response: http.ServerResponse): Promise<void> {
+  if (request.method !== 'GET' && request.method !== 'HEAD') {
+    response.setHeader('Allow', 'GET, HEAD');
+    sendText(response, 405, 'Only GET and HEAD are served here.');
+    return;
+  }
+  const file = await resolveInside(root, request.url ?? '/');
+  const type = file ? mimeTypeFor(path.extname(file)) : undefined;
+  if (!file || !type) {
+    sendText(response, 404, 'Not found.');
+    return;
+  }
+  const info = await stat(file);
+  response.writeHead(200, { ...SECURITY_HEADERS, 'Content-Type': type, 'Content-Length': info.size });
+  if (request.method === 'HEAD') {
+    response.end();
+    return;
+  }
+  createReadStream(file).pipe(response);
+}
+
+/** The file a URL names inside root, or undefined when it does not exist or would lie outside root. */
+async function resolveInside(root: string, rawUrl: string): Promise<string | undefined> {
+  let pathname: string;
+  try {
+    // Decode the raw path ourselves: encoded dots and slashes must not slip past the check below.
+    pathname = decodeURIComponent(rawUrl.split(/[?#]/, 1)[0] ?? '/');
+  } catch {
+    return undefined;
+  }
+  if (pathname.includes('\0') || !pathname.startsWith('/')) return undefined;
+  if (pathname.endsWith('/')) pathname += 'index.html';
+  const candidate = path.resolve(root, `.${pathname}`);
+  if (!isInside(root, candidate)) return undefined;
+  try {
+    // Follow links, then check again: a symbolic link must not lead out of the build folder.
+    const real = await realpath(candidate);
+    if (!isInside(root, real) || !(await stat(real)).isFile()) return undefined;
+    return real;
+  } catch {
+    return undefined;
+  }
+}
+
+function isInside(root: string, candidate: string): boolean {
+  return candidate.startsWith(root + path.sep);
+}
+
+function sendJson(response: http.ServerResponse, status: number, value: unknown): void {
+  const body = JSON.stringify(value);
+  response.writeHead(status, {
+    ...SECURITY_HEADERS,
+    'Content-Type': 'application/json; charset=utf-8',
+    'Content-Length': Buffer.byteLength(body),
+  });
+  response.end(body);
+}
+
+function sendText(response: http.ServerResponse, status: number, text: string): void {
+  response.writeHead(status, {
+    ...SECURITY_HEADERS,
+    'Content-Type': 'text/plain; charset=utf-8',
+    'Content-Length': Buffer.byteLength(text),
+  });
+  response.end(text);
+}

@@ -1,0 +1,102 @@
+import { InvalidInputError } from './service-errors.js';
+import { isPlainObject, requireId, requireNumber } from './validate.js';
+
+/**
+ * The stored inputs of a case: versioned JSON, checked here only as an envelope (the calculation
+ * inputs themselves are the engine's business and are kept as given):
+ *   { "schemaVersion": 1, "kind": "pipe" | "flat" | "wall", ..., "layers": [{ "materialId": 3, "thickness": 0.05 }, ...] }
+ * Any property named `materialId` or ending in `MaterialId` (e.g. a pipe's wall or a cladding)
+ * anywhere in the inputs is a reference to a material and must name one that exists.
+ */
+export const CASE_INPUTS_SCHEMA_VERSION = 1;
+export const CASE_KINDS = ['pipe', 'flat', 'wall'] as const;
+export type CaseKind = (typeof CASE_KINDS)[number];
+
+export interface CaseInputs {
+  readonly schemaVersion: number;
+  readonly kind: CaseKind;
+  readonly layers: readonly { readonly materialId: number; readonly thickness: number; readonly [key: string]: unknown }[];
+  readonly [key: string]: unknown;
+}
+
+const MAX_INPUTS_BYTES = 1_000_000;
+const MAX_LAYERS = 50;
+const MAX_DEPTH = 32;
+
+export function isMaterialReferenceKey(key: string): boolean {
+  return key === 'materialId' || key.endsWith('MaterialId');
+}
+
+/** Checks the envelope and that the value is plain JSON (finite numbers, no functions, bounded depth). */
+export function validateCaseInputs(value: unknown, field = 'inputs'): CaseInputs {
+  if (!isPlainObject(value)) throw new InvalidInputError(field, `${field} must be an object.`);
+  assertPlainJson(value, field, 0);
+  if (value['schemaVersion'] !== CASE_INPUTS_SCHEMA_VERSION) {
+    throw new InvalidInputError(`${field}.schemaVersion`, `${field}.schemaVersion must be ${CASE_INPUTS_SCHEMA_VERSION}.`);
+  }
+  if (typeof value['kind'] !== 'string' || !(CASE_KINDS as readonly string[]).includes(value['kind'])) {
+    throw new InvalidInputError(`${field}.kind`, `${field}.kind must be one of ${CASE_KINDS.join(', ')}.`);
+  }
+  const layers = value['layers'];
+  if (!Array.isArray(layers) || layers.length < 1 || layers.length > MAX_LAYERS) {
+    throw new InvalidInputError(`${field}.layers`, `${field}.layers must list 1 to ${MAX_LAYERS} layers.`);
+  }
+  layers.forEach((layer, i) => {
+    const where = `${field}.layers[${i}]`;
+    if (!isPlainObject(layer)) throw new InvalidInputError(where, `${where} must be an object.`);
+    requireId(layer['materialId'], `${where}.materialId`);
+    requireNumber(layer['thickness'], `${where}.thickness`, { min: 0, minExclusive: true, max: 10, unit: 'm' });
+  });
+  for (const [key, range] of [['length', 'm'], ['area', 'm²']] as const) {
+    if (value[key] !== undefined) requireNumber(value[key], `${field}.${key}`, { min: 0, minExclusive: true, max: 1e6, unit: range });
+  }
+  for (const { path, id } of materialReferences(value)) requireId(id, `${field}${path}`);
+  if (JSON.stringify(value).length > MAX_INPUTS_BYTES) throw new InvalidInputError(field, `${field} must be at most ${MAX_INPUTS_BYTES} characters of JSON.`);
+  return value as unknown as CaseInputs;
+}
+
+function assertPlainJson(value: unknown, path: string, depth: number): void {
+  if (depth > MAX_DEPTH) throw new InvalidInputError(path, `${path} is nested more than ${MAX_DEPTH} levels deep.`);
+  if (value === null || typeof value === 'string' || typeof value === 'boolean') return;
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) throw new InvalidInputError(path, `${path} must be a finite number.`);
+    return;
+  }
+  if (Array.isArray(value)) {
+    value.forEach((v, i) => assertPlainJson(v, `${path}[${i}]`, depth + 1));
+    return;
+  }
+  if (isPlainObject(value)) {
+    for (const [k, v] of Object.entries(value)) assertPlainJson(v, `${path}.${k}`, depth + 1);
+    return;
+  }
+  throw new InvalidInputError(path, `${path} must be plain JSON data (text, numbers, true/false, lists, objects).`);
+}
+
+/** Every material reference in the inputs, with where it sits. */
+export function materialReferences(value: unknown, path = ''): { path: string; id: unknown }[] {
+  const found: { path: string; id: unknown }[] = [];
+  if (Array.isArray(value)) value.forEach((v, i) => found.push(...materialReferences(v, `${path}[${i}]`)));
+  else if (isPlainObject(value)) {
+    for (const [k, v] of Object.entries(value)) {
+      if (isMaterialReferenceKey(k)) found.push({ path: `${path}.${k}`, id: v });
+      else found.push(...materialReferences(v, `${path}.${k}`));
+    }
+  }
+  return found;
+}
+
+export function materialIdsOf(inputs: CaseInputs): number[] {
+  return [...new Set(materialReferences(inputs).map((r) => r.id as number))];
+}
+
+/** A copy of the inputs with every material reference passed through `map`. */
+export function remapMaterialIds(value: unknown, map: (id: number) => number): unknown {
+  if (Array.isArray(value)) return value.map((v) => remapMaterialIds(v, map));
+  if (isPlainObject(value)) {
+    const out: Record<string, unknown> = {};
+    for (const [k, v] of Object.entries(value)) out[k] = isMaterialReferenceKey(k) && typeof v === 'number' ? map(v) : remapMaterialIds(v, map);
+    return out;
+  }
+  return value;
+}

@@ -1,0 +1,90 @@
+import { materialReferences, validateCaseInputs, type CaseInputs } from './case-inputs.js';
+import type { MaterialInput } from './material-types.js';
+import { validateMaterialInput } from './material-validation.js';
+import { validateProjectFields, validateCaseDraft } from './project-validation.js';
+import type { ProjectFields } from './project-types.js';
+import { InvalidInputError } from './service-errors.js';
+import { rejectUnknownKeys, requireId, requireObject } from './validate.js';
+
+/**
+ * The project exchange file: one JSON document holding the project's fields, its cases' inputs
+ * and every material those inputs use, so it can be opened on a machine with a different library.
+ * Case inputs refer to materials by `fileId`, which only means something inside the file.
+ */
+export const PROJECT_FILE_FORMAT = 'lamina-project';
+export const PROJECT_FILE_VERSION = 1;
+
+export interface ProjectFile {
+  readonly format: typeof PROJECT_FILE_FORMAT;
+  readonly formatVersion: number;
+  readonly exportedAt: string;
+  readonly project: ProjectFields;
+  readonly materials: readonly ({ readonly fileId: number } & MaterialInput)[];
+  readonly cases: readonly { readonly name: string; readonly inputs: CaseInputs }[];
+}
+
+export interface CheckedProjectFile {
+  readonly project: ProjectFields;
+  readonly materials: readonly { fileId: number; material: MaterialInput }[];
+  readonly cases: readonly { name: string; inputs: CaseInputs }[];
+}
+
+const MAX_FILE_MATERIALS = 1000;
+const MAX_FILE_CASES = 1000;
+
+/** JSON has no Infinity: a vapour-tight μ is written as the string "inf". */
+export function projectFileToJson(file: ProjectFile): string {
+  return JSON.stringify(file, (key, value) => (key === 'vapourResistanceFactor' && value === Infinity ? 'inf' : value), 2) + '\n';
+}
+
+export function projectFileFromJson(text: string): unknown {
+  try {
+    return JSON.parse(text, (key, value) => (key === 'vapourResistanceFactor' && value === 'inf' ? Infinity : value));
+  } catch (error) {
+    throw new InvalidInputError('file', `The project file is not valid JSON (${(error as Error).message}).`);
+  }
+}
+
+/** Checks the whole file before anything is written. */
+export function readProjectFile(value: unknown): CheckedProjectFile {
+  const raw = requireObject(value, 'file');
+  if (raw['format'] !== PROJECT_FILE_FORMAT) throw new InvalidInputError('format', `format must be "${PROJECT_FILE_FORMAT}"; this is not a Lamina project file.`);
+  if (raw['formatVersion'] !== PROJECT_FILE_VERSION) {
+    throw new InvalidInputError('formatVersion', `formatVersion must be ${PROJECT_FILE_VERSION} (the file was written by a Lamina this version cannot read).`);
+  }
+  rejectUnknownKeys(raw, 'file', ['format', 'formatVersion', 'exportedAt', 'project', 'materials', 'cases']);
+  const project = validateProjectFields(raw['project']);
+  const rawMaterials = raw['materials'];
+  if (!Array.isArray(rawMaterials) || rawMaterials.length > MAX_FILE_MATERIALS) {
+    throw new InvalidInputError('materials', `materials must be a list of at most ${MAX_FILE_MATERIALS} materials.`);
+  }
+  const fileIds = new Set<number>();
+  const materials = rawMaterials.map((m, i) => {
+    const { fileId, ...rest } = requireObject(m, `materials[${i}]`);
+    const id = requireId(fileId, `materials[${i}].fileId`);
+    if (fileIds.has(id)) throw new InvalidInputError(`materials[${i}].fileId`, `materials[${i}].fileId ${id} is used twice in the file.`);
+    fileIds.add(id);
+    try {
+      return { fileId: id, material: validateMaterialInput(rest) };
+    } catch (error) {
+      if (error instanceof InvalidInputError) throw new InvalidInputError(`materials[${i}].${error.field}`, `materials[${i}]: ${error.message}`);
+      throw error;
+    }
+  });
+  const rawCases = raw['cases'];
+  if (!Array.isArray(rawCases) || rawCases.length > MAX_FILE_CASES) throw new InvalidInputError('cases', `cases must be a list of at most ${MAX_FILE_CASES} cases.`);
+  const cases = rawCases.map((c, i) => {
+    let draft;
+    try {
+      draft = validateCaseDraft(c, `cases[${i}]`);
+    } catch (error) {
+      if (error instanceof InvalidInputError) throw new InvalidInputError(`cases[${i}].${error.field}`, `cases[${i}]: ${error.message}`);
+      throw error;
+    }
+    for (const ref of materialReferences(draft.inputs)) {
+      if (!fileIds.has(ref.id as number)) throw new InvalidInputError(`cases[${i}].inputs${ref.path}`, `cases[${i}].inputs${ref.path} refers to material ${String(ref.id)}, which the file does not include.`);
+    }
+    return { name: draft.name, inputs: validateCaseInputs(draft.inputs) };
+  });
+  return { project, materials, cases };
+}

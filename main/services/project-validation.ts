@@ -1,0 +1,52 @@
+import { validateCaseInputs, type CaseInputs } from './case-inputs.js';
+import { PROJECT_FIELDS, UNIT_SYSTEMS, type ProjectFields } from './project-types.js';
+import { InvalidInputError } from './service-errors.js';
+import { optionalText, rejectUnknownKeys, requireObject, requireOneOf, requireText } from './validate.js';
+
+export const PROJECT_LIMITS = { name: 200, text: 200, revision: 40, notes: 10000, caseName: 200 } as const;
+
+function validateDate(value: unknown): string {
+  const text = optionalText(value, 'date', 10);
+  if (text === '') return '';
+  const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text);
+  const d = m ? new Date(Date.UTC(+m[1]!, +m[2]! - 1, +m[3]!)) : undefined;
+  if (!m || !d || d.getUTCFullYear() !== +m[1]! || d.getUTCMonth() !== +m[2]! - 1 || d.getUTCDate() !== +m[3]!) {
+    throw new InvalidInputError('date', 'date must be a calendar date written YYYY-MM-DD, or empty.');
+  }
+  return text;
+}
+
+/** Validates new project fields; only `name` is required. */
+export function validateProjectFields(value: unknown): ProjectFields {
+  const raw = requireObject(value, 'project');
+  rejectUnknownKeys(raw, 'project', PROJECT_FIELDS);
+  return {
+    name: requireText(raw['name'], 'name', { min: 1, max: PROJECT_LIMITS.name }),
+    client: optionalText(raw['client'], 'client', PROJECT_LIMITS.text),
+    site: optionalText(raw['site'], 'site', PROJECT_LIMITS.text),
+    reference: optionalText(raw['reference'], 'reference', PROJECT_LIMITS.text),
+    engineer: optionalText(raw['engineer'], 'engineer', PROJECT_LIMITS.text),
+    revision: optionalText(raw['revision'], 'revision', PROJECT_LIMITS.revision),
+    date: validateDate(raw['date']),
+    unitSystem: raw['unitSystem'] === undefined ? 'SI' : requireOneOf(raw['unitSystem'], 'unitSystem', UNIT_SYSTEMS),
+    notes: optionalText(raw['notes'], 'notes', PROJECT_LIMITS.notes),
+  };
+}
+
+/** Validates a partial update and merges it over the current fields. */
+export function mergeProjectFields(current: ProjectFields, changes: unknown): ProjectFields {
+  const raw = requireObject(changes, 'changes');
+  rejectUnknownKeys(raw, 'changes', PROJECT_FIELDS);
+  const base: Record<string, unknown> = {};
+  for (const key of PROJECT_FIELDS) base[key] = current[key];
+  return validateProjectFields({ ...base, ...raw });
+}
+
+export function validateCaseDraft(value: unknown, field = 'case'): { name: string; inputs: CaseInputs } {
+  const raw = requireObject(value, field);
+  rejectUnknownKeys(raw, field, ['name', 'inputs']);
+  return {
+    name: requireText(raw['name'], 'name', { min: 1, max: PROJECT_LIMITS.caseName }),
+    inputs: validateCaseInputs(raw['inputs']),
+  };
+}
