@@ -1,0 +1,59 @@
+/**
+ * Surface condensation: does water vapour in the surrounding air condense on the surface?
+ * It does when the surface is at or below the dew point of the air (the frost point below 0 °C,
+ * app/physics dewPoint with the ISO 13788 saturation formulas). The margin is θ_surface − θ_dew
+ * in K, positive on the safe side.
+ */
+import { dewPoint } from '../physics/humidity.js';
+import type { CheckResult } from './check-result.js';
+
+/**
+ * Below this margin the verdict is a warning: air humidity and surface temperature vary in
+ * service, so a surface less than 1 K above the dew point is not a reliable design
+ * (common practice, no source).
+ */
+export const CONDENSATION_WARNING_MARGIN = 1;
+
+export const SURFACE_CONDENSATION_CAUTION =
+  'Condensation on cold surfaces can wet insulation, corrode pipework and drip onto people and property; this check is a ' +
+  'steady-state estimate for the stated air conditions. Confirm the design conditions and the vapour barrier detailing ' +
+  'against local codes and licensed professional practice.';
+
+export interface SurfaceCondensationInput {
+  /** °C */
+  readonly surfaceTemperature: number;
+  /** °C */
+  readonly airTemperature: number;
+  /** Fraction above 0 and at most 1. */
+  readonly relativeHumidity: number;
+}
+
+export interface SurfaceCondensationResult extends CheckResult {
+  readonly check: 'surface-condensation';
+  /** Dew (frost) point of the air, °C. */
+  readonly dewPoint: number;
+}
+
+export function surfaceCondensationCheck(input: SurfaceCondensationInput): SurfaceCondensationResult {
+  const dew = dewPoint(input.airTemperature, input.relativeHumidity);
+  const margin = input.surfaceTemperature - dew;
+  const figures =
+    `the surface is at ${input.surfaceTemperature.toFixed(2)} °C and the dew point of the air ` +
+    `(${input.airTemperature} °C, ${(input.relativeHumidity * 100).toFixed(1)} % RH) is ${dew.toFixed(2)} °C`;
+  const verdict = margin <= 0 ? 'fail' : margin < CONDENSATION_WARNING_MARGIN ? 'warning' : 'pass';
+  const reason =
+    verdict === 'fail'
+      ? `Water condenses: ${figures}, so the surface is at or below the dew point.`
+      : verdict === 'warning'
+        ? `No condensation at the design conditions, but the margin is under ${CONDENSATION_WARNING_MARGIN} K: ${figures}.`
+        : `No condensation: ${figures}.`;
+  return {
+    check: 'surface-condensation',
+    title: 'Surface condensation',
+    verdict,
+    margin: { value: margin, unit: 'K' },
+    reason,
+    caution: SURFACE_CONDENSATION_CAUTION,
+    dewPoint: dew,
+  };
+}

@@ -1,0 +1,89 @@
+/**
+ * lamina solve CASE.json [--format json|text] [--db PATH]
+ *
+ * Reads a case file (or "-" for standard input), validates it, solves it and prints the result.
+ * Materials in a case file are inline, or referenced by id from the library (--db).
+ */
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { InputError } from '../../../app/fe/errors.js';
+import type { MaterialProperties } from '../../../app/materials/material-properties.js';
+import type { CliCommand, CliIO } from '../command.js';
+import { caseKindOf, CASE_KINDS, type SolvedCase } from '../case-kinds.js';
+import { parseArgs, withServices } from './materials.js';
+
+const SOLVE_HELP = `lamina solve CASE.json [--format json|text] [--db PATH]
+
+Solves one case file and prints the result: JSON by default (every figure at full precision,
+SI units, temperatures in °C), or a readable summary with --format text. Use "-" to read the
+case from standard input. Case kinds (the "kind" field):
+${CASE_KINDS.map((k) => `  ${k.kind.padEnd(11)} ${k.summary}`).join('\n')}
+
+A case file is JSON with "schemaVersion": 1 and "kind". JSON Schemas for every kind are in
+data/schemas/ (case.schema.json covers them all); examples are in data/examples/.
+Materials are given inline ("material": {...}) or by library id ("materialId": 12, read from
+--db PATH, else $LAMINA_DB, else the default database).
+
+Exit codes: 0 solved; 1 the solve failed (for example no convergence); 2 invalid input, reported
+in one line that names the field and the allowed range.
+`;
+
+export const solveCommand: CliCommand = async (args, io) => {
+  const parsed = parseArgs(args, ['format', 'db'], ['help']);
+  if (typeof parsed === 'string') return usage(io, parsed);
+  if (parsed.flags.has('help')) {
+    io.stdout(SOLVE_HELP);
+    return 0;
+  }
+  const format = parsed.options.get('format') ?? 'json';
+  if (format !== 'json' && format !== 'text') return usage(io, `--format must be json or text, not "${format}".`);
+  if (parsed.positional.length !== 1) return usage(io, 'give exactly one case file (or - for standard input).');
+
+  const file = parsed.positional[0]!;
+  let json: unknown;
+  try {
+    const text = file === '-' ? readFileSync(0, 'utf8') : readFileSync(path.resolve(io.cwd, file), 'utf8');
+    json = JSON.parse(text);
+  } catch (error) {
+    const reason = error instanceof SyntaxError ? `is not valid JSON (${error.message})` : `cannot be read (${(error as Error).message})`;
+    io.stderr(`lamina solve: ${file} ${reason}.\n`);
+    return 2;
+  }
+
+  const kind = caseKindOf(json);
+  if (typeof kind === 'string') {
+    io.stderr(`lamina solve: ${kind}\n`);
+    return 2;
+  }
+  const needsLibrary = JSON.stringify(json).includes('"materialId"');
+  const solveWith = (resolveMaterial: (id: number) => MaterialProperties | undefined): number => {
+    let solved: SolvedCase;
+    try {
+      solved = kind.solve(json, resolveMaterial);
+    } catch (error) {
+      if (error instanceof InputError) {
+        io.stderr(`lamina solve: ${error.message}\n`);
+        return 2;
+      }
+      io.stderr(`lamina solve: ${(error as Error).message}\n`);
+      return 1;
+    }
+    io.stdout(format === 'json' ? `${JSON.stringify(solved.json, null, 2)}\n` : solved.text());
+    return 0;
+  };
+  if (!needsLibrary) return solveWith(() => undefined);
+  return withServices(io, parsed.options.get('db'), (services) =>
+    solveWith((id) => {
+      try {
+        return services.materials.get(id);
+      } catch {
+        return undefined; // the case parser names the field whose material is missing
+      }
+    }),
+  );
+};
+
+function usage(io: CliIO, message: string): number {
+  io.stderr(`lamina solve: ${message} (lamina solve --help)\n`);
+  return 2;
+}
