@@ -3,7 +3,7 @@
  * plus the contact conductances that join the two nodes of an interface with a contact resistance.
  */
 import { BandedMatrix } from './banded-matrix.js';
-import { elementMatrices } from './element-matrices.js';
+import { elementMatrices, newElementWorkspace } from './element-matrices.js';
 import type { Measure } from './measure.js';
 import type { Mesh } from './mesh.js';
 import type { Layer } from './problem.js';
@@ -31,9 +31,10 @@ export function assembleSystem(mesh: Mesh, layers: readonly Layer[], measure: Me
   const conductance = new BandedMatrix(n, mesh.order);
   const capacity = new BandedMatrix(n, mesh.order);
   const load = new Float64Array(n);
+  const workspace = newElementWorkspace(mesh.order);
   for (let e = 0; e < mesh.elements.length; e++) {
     const nodes = mesh.elements[e]!.nodes;
-    const local = elementMatrices(mesh, layers, measure, e, excess, reference);
+    const local = elementMatrices(mesh, layers, measure, e, excess, reference, workspace);
     const m = nodes.length;
     for (let a = 0; a < m; a++) {
       load[nodes[a]!] += local.load[a]!;

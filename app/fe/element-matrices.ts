@@ -26,14 +26,18 @@ export function elementMatrices(
   elementIndex: number,
   excess: ArrayLike<number>,
   reference: number,
+  workspace?: ElementMatrices,
 ): ElementMatrices {
   const element = mesh.elements[elementIndex]!;
   const layer = layers[element.layer]!;
   const shapes = referenceElement(mesh.order);
   const n = shapes.nodeCount;
-  const conductance = new Float64Array(n * n);
-  const capacity = new Float64Array(n * n);
-  const load = new Float64Array(n);
+  // A caller looping over many elements passes one workspace, so a million-element mesh does not
+  // allocate three arrays per element.
+  const { conductance, capacity, load } = workspace ?? newElementWorkspace(mesh.order);
+  conductance.fill(0);
+  capacity.fill(0);
+  load.fill(0);
 
   const xStart = mesh.positions[element.nodes[0]!]!;
   const xEnd = mesh.positions[element.nodes[n - 1]!]!;
@@ -67,4 +71,9 @@ export function elementMatrices(
     }
   }
   return { conductance, capacity, load };
+}
+
+export function newElementWorkspace(order: 1 | 2): ElementMatrices {
+  const n = order + 1;
+  return { conductance: new Float64Array(n * n), capacity: new Float64Array(n * n), load: new Float64Array(n) };
 }
