@@ -7,6 +7,11 @@ import { parseConductionCaseFile } from '../../app/cases/conduction-case-file.js
 import { solveSteady, solveTransient } from '../../app/fe/index.js';
 import type { MaterialProperties } from '../../app/materials/material-properties.js';
 import { conductionSteadyText, conductionTransientText } from './format/conduction-text.js';
+import { flatText, pipeText } from './format/pipe-and-flat-text.js';
+import { parsePipeCaseFile } from '../../app/cases/pipe-case-file.js';
+import { parseFlatCaseFile } from '../../app/cases/flat-case-file.js';
+import { calculatePipe } from '../../app/assemblies/pipe-calculation.js';
+import { calculateFlatSurface } from '../../app/assemblies/flat-surface-calculation.js';
 
 export interface SolvedCase {
   readonly json: unknown;
@@ -33,7 +38,29 @@ const conduction: CaseKind = {
   },
 };
 
-export const CASE_KINDS: readonly CaseKind[] = [conduction];
+const pipe: CaseKind = {
+  kind: 'pipe',
+  summary: 'an insulated pipe run: heat loss, surface temperature, condensation and touch checks',
+  solve(json, resolveMaterial) {
+    const input = parsePipeCaseFile(json, resolveMaterial);
+    const result = calculatePipe(input);
+    const title = input.title ?? 'Pipe';
+    return { json: { kind: 'pipe', title, result }, text: () => pipeText(title, result) };
+  },
+};
+
+const flat: CaseKind = {
+  kind: 'flat',
+  summary: 'an insulated flat surface (duct, tank or equipment wall)',
+  solve(json, resolveMaterial) {
+    const input = parseFlatCaseFile(json, resolveMaterial);
+    const result = calculateFlatSurface(input);
+    const title = input.title ?? 'Flat surface';
+    return { json: { kind: 'flat', title, result }, text: () => flatText(title, result) };
+  },
+};
+
+export const CASE_KINDS: readonly CaseKind[] = [conduction, pipe, flat];
 
 /** The case kind a parsed file declares, or a one-sentence reason it has none we know. */
 export function caseKindOf(json: unknown): CaseKind | string {

@@ -7,7 +7,7 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import Ajv2020 from 'ajv/dist/2020.js';
+import Ajv2020Module from 'ajv/dist/2020.js';
 import { describe, expect, it } from 'vitest';
 
 const root = path.resolve(__dirname, '..', '..');
@@ -20,12 +20,21 @@ function lamina(args: string[], input?: string) {
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 
+// ajv's CommonJS default export, as NodeNext module resolution sees it.
+const Ajv2020 = Ajv2020Module.default;
+
 function schemaValidator() {
   const ajv = new Ajv2020({ allErrors: true, strict: false });
   for (const file of readdirSync(path.join(root, 'data', 'schemas'))) {
     if (file !== 'case.schema.json') ajv.addSchema(JSON.parse(readFileSync(path.join(root, 'data', 'schemas', file), 'utf8')));
   }
   return ajv.compile(JSON.parse(readFileSync(path.join(root, 'data', 'schemas', 'case.schema.json'), 'utf8')));
+}
+
+/** The energy-balance residual each kind of result carries. */
+function relativeResidualOf(out: { kind: string; result: Record<string, any> }): number {
+  if (out.kind === 'conduction') return out.result.balance.relativeResidual;
+  return out.result.energyBalance.relativeResidual;
 }
 
 describe('lamina solve', () => {
@@ -45,14 +54,21 @@ describe('lamina solve', () => {
     expect(validate({ ...base, layers: [{ conductivity: { kind: 'constant', value: 1 } }] })).toBe(false);
   });
 
-  for (const file of examples.filter((f) => f.startsWith('conduction-'))) {
+  for (const file of examples) {
     it(`solves ${file} to JSON with a closed energy balance`, () => {
       const r = lamina(['solve', path.join('data', 'examples', file)]);
       expect(r.stderr).toBe('');
       expect(r.code).toBe(0);
       const out = JSON.parse(r.stdout);
-      expect(out.kind).toBe('conduction');
-      expect(out.result.balance.relativeResidual).toBeLessThan(1e-9);
+      expect(out.kind).toBe(file.split('-')[0]);
+      expect(relativeResidualOf(out)).toBeLessThan(1e-9);
+    });
+    it(`prints ${file} as text with its energy balance and, for surfaces, the checks with their cautions`, () => {
+      const r = lamina(['solve', path.join('data', 'examples', file), '--format', 'text']);
+      expect(r.code).toBe(0);
+      expect(r.stdout).toMatch(/[Ee]nergy balance/);
+      expect(r.stdout).not.toMatch(/NaN|undefined|Infinity/);
+      if (!file.startsWith('conduction-')) expect(r.stdout).toMatch(/local codes and licensed professional practice/);
     });
   }
 

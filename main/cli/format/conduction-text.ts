@@ -3,9 +3,10 @@
  * here, at the edge, for reading; the JSON output keeps full precision.
  */
 import type { SteadyResult, TransientResult } from '../../../app/fe/index.js';
+import { fixed, scientific } from './text-helpers.js';
 
-const fixed = (value: number, digits: number) => (Object.is(Math.round(value * 10 ** digits), -0) ? 0 : value).toFixed(digits).replace('-', '−');
-const sci = (value: number) => value.toExponential(2).replace('-', '−');
+
+
 
 export function conductionSteadyText(title: string, r: SteadyResult): string {
   const perBasis = r.basis === 'per-metre' ? 'W/m' : 'W/m²';
@@ -21,7 +22,7 @@ export function conductionSteadyText(title: string, r: SteadyResult): string {
     ),
     `  Outer face  ${fixed(r.faces.outer.temperature, 2).padStart(9)} °C   heat in ${fixed(r.faces.outer.heatIn, 3).padStart(11)} ${perBasis}`,
     '',
-    `Energy balance: in through faces ${fixed(r.balance.heatInInner + r.balance.heatInOuter, 6)} + generated ${fixed(r.balance.generated, 6)} = residual ${sci(r.balance.residual)} ${perBasis} (relative ${sci(r.balance.relativeResidual)}).`,
+    `Energy balance: in through faces ${fixed(r.balance.heatInInner + r.balance.heatInOuter, 6)} + generated ${fixed(r.balance.generated, 6)} = residual ${scientific(r.balance.residual)} ${perBasis} (relative ${scientific(r.balance.relativeResidual)}).`,
     '',
   ];
   return lines.join('\n');
@@ -43,7 +44,7 @@ export function conductionTransientText(title: string, r: TransientResult): stri
       return `${fixed(r.times[s]!, 0).padStart(12)} ${fixed(r.temperatures[s]![0]!, 2).padStart(11)} ${fixed(r.temperatures[s]![n]!, 2).padStart(11)} ${qi.padStart(16)} ${qo.padStart(16)}`;
     }),
     '',
-    `Energy balance over the run: stored ${fixed(r.balance.stored, 3)} J, net in ${fixed(r.balance.netIn, 3)} J ${r.basis === 'per-metre' ? 'per metre' : 'per m²'}; residual ${sci(r.balance.residual)} (relative ${sci(r.balance.relativeResidual)}).`,
+    `Energy balance over the run: stored ${fixed(r.balance.stored, 3)} J, net in ${fixed(r.balance.netIn, 3)} J ${r.basis === 'per-metre' ? 'per metre' : 'per m²'}; residual ${scientific(r.balance.residual)} (relative ${scientific(r.balance.relativeResidual)}).`,
     '',
   ];
   return lines.join('\n');

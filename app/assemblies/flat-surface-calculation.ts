@@ -1,0 +1,76 @@
+/**
+ * Heat loss (or gain) through an insulated flat surface, per m² and for the area, and the surface
+ * checks. Planar FE problem: wall sheet (optional), insulation, jacket, from the process side
+ * outwards; the outer film from app/physics outerSurfaceExchange is iterated by the engine.
+ * Heat flows are positive outwards (heat lost); a cold surface gives negative values.
+ */
+import { outerSurfaceExchange, type OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
+import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity } from './pipe-and-flat-inputs.js';
+import { solveStack, type StackLayer, type StackSolution } from './pipe-and-flat-solve.js';
+import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
+import { DEFAULT_SURFACE_METHOD } from './pipe-input.js';
+
+export interface FlatSurfaceResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
+  /** W/m² of surface; positive = heat lost. */
+  readonly heatFlowDensity: number;
+  /** W over the whole area. */
+  readonly heatLoss: number;
+  /** kWh per year: heatLoss × operating hours / 1000. */
+  readonly annualEnergy: number;
+  /** m²·K/W from the inner face to the outer surface (layers only, no films). */
+  readonly layerResistance: number;
+  readonly emissivity: ResolvedEmissivity | null;
+  readonly assumptions: readonly string[];
+}
+
+export function calculateFlatSurface(input: FlatSurfaceInput): FlatSurfaceResult {
+  validateFlatSurfaceInput(input);
+  const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
+  const assumptions: string[] = [];
+  const stack: StackLayer[] = [
+    ...(input.wall ? [{ role: 'wall' as const, name: `wall (${input.wall.material.name})`, material: input.wall.material, thickness: input.wall.thickness }] : []),
+    ...input.layers.map((l, i): StackLayer => ({ role: 'insulation', name: `insulation layer ${i + 1} (${l.material.name})`, material: l.material, thickness: l.thickness })),
+    ...(input.jacket ? [{ role: 'jacket' as const, name: `jacket (${input.jacket.material.name})`, material: input.jacket.material, thickness: input.jacket.thickness }] : []),
+  ];
+  const shape: OuterSurfaceShape =
+    input.surface.kind === 'vertical'
+      ? { kind: 'vertical-wall', height: input.surface.height }
+      : { kind: 'horizontal-surface', facing: input.surface.facing, characteristicLength: input.surface.characteristicLength };
+
+  const emissivity = methodNeedsEmissivity(method) ? outerSurfaceEmissivity(input.layers, input.jacket) : null;
+  if (input.ambient.surroundingsTemperature === undefined) assumptions.push('surroundings (radiant) temperature taken equal to the air temperature');
+  if (input.surfaceMethod === undefined) assumptions.push('outer surface coefficient from the general correlations (natural, forced and mixed convection) plus radiation');
+  if (input.ambient.exposure.kind === 'outdoor' && input.ambient.exposure.windSpeed > 0) {
+    assumptions.push('wind taken along the surface over its height (vertical) or characteristic length (horizontal)');
+  }
+
+  const exchange = outerSurfaceExchange({
+    shape,
+    exposure: input.ambient.exposure,
+    method,
+    airTemperature: input.ambient.airTemperature,
+    ...(input.ambient.surroundingsTemperature !== undefined ? { surroundingsTemperature: input.ambient.surroundingsTemperature } : {}),
+    ...(emissivity ? { emissivity: emissivity.value } : {}),
+  });
+
+  const { engine: _engine, heatOut, ...solution } = solveStack({
+    geometry: { kind: 'planar' },
+    stack,
+    inner: input.inner,
+    exchange,
+    ambient: input.ambient,
+    ...(input.touchLimit !== undefined ? { touchLimit: input.touchLimit } : {}),
+  });
+  const heatLoss = heatOut * input.area;
+  // Σ d/λ_eff over the layers, from the engine's per-layer resistances where they are defined.
+  const layerResistance = solution.layers.reduce((sum, l) => sum + (l.thermalResistance ?? l.thickness / (l.effectiveConductivity ?? l.conductivityAtMeanTemperature)), 0);
+  return {
+    ...solution,
+    heatFlowDensity: heatOut,
+    heatLoss,
+    annualEnergy: (heatLoss * input.operatingHours) / 1000,
+    layerResistance,
+    emissivity,
+    assumptions,
+  };
+}

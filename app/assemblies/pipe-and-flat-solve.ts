@@ -1,0 +1,184 @@
+/**
+ * The solve both the pipe and the flat-surface calculations run once their geometry is known:
+ * build the layer stack (wall, insulation, jacket), put the inner condition on the inner face and
+ * the temperature-dependent outer film (app/physics outerSurfaceExchange) on the outer face, let the
+ * engine iterate the film and any λ(T) to convergence, then read back temperatures, the film split
+ * into convection and radiation at the converged surface temperature, and the checks.
+ */
+import type { FaceCondition, Geometry } from '../fe/problem.js';
+import type { SteadyResult } from '../fe/result.js';
+import { solveSteady } from '../fe/steady-solve.js';
+import type { MaterialProperties } from '../materials/material-properties.js';
+import type { OuterSurfaceExchangeFunction } from '../physics/outer-surface-exchange.js';
+import { personnelProtectionCheck, type PersonnelProtectionResult } from '../checks/personnel-protection.js';
+import { serviceTemperatureCheck, type ServiceTemperatureResult } from '../checks/service-temperature.js';
+import { surfaceCondensationCheck, type SurfaceCondensationResult } from '../checks/surface-condensation.js';
+import { toEngineLayers } from './layer-build.js';
+import type { AmbientConditions, InnerCondition } from './pipe-and-flat-inputs.js';
+
+export type LayerRole = 'pipe-wall' | 'wall' | 'insulation' | 'jacket';
+
+export interface StackLayer {
+  readonly role: LayerRole;
+  /** Name people read, e.g. "insulation layer 1 (Rock wool)". */
+  readonly name: string;
+  readonly material: MaterialProperties;
+  readonly thickness: number;
+}
+
+export interface LayerTemperatures {
+  readonly name: string;
+  readonly role: LayerRole;
+  readonly material: string;
+  /** m */
+  readonly thickness: number;
+  /** m: radius (pipe) or distance from the inner face (flat). */
+  readonly innerPosition: number;
+  readonly outerPosition: number;
+  /** °C */
+  readonly innerTemperature: number;
+  readonly outerTemperature: number;
+  /** Arithmetic mean of the face temperatures, °C. */
+  readonly meanTemperature: number;
+  /** λ at the mean temperature, W/(m·K). */
+  readonly conductivityAtMeanTemperature: number;
+  /** The integral-mean λ that carries the layer's heat flow, W/(m·K); absent with no temperature difference. */
+  readonly effectiveConductivity?: number;
+  /** m·K/W per metre of pipe, or m²·K/W for a flat surface; absent with no heat flow. */
+  readonly thermalResistance?: number;
+}
+
+export interface InterfaceTemperature {
+  /** The layers on each side, by name. */
+  readonly innerLayer: string;
+  readonly outerLayer: string;
+  /** m: radius (pipe) or distance from the inner face (flat). */
+  readonly position: number;
+  /** °C */
+  readonly temperature: number;
+}
+
+export interface SurfaceCoefficient {
+  /** h_se = h_c + h_r, W/(m²·K), at the converged surface temperature. */
+  readonly total: number;
+  readonly convection: number;
+  readonly radiation: number;
+  /** °C, the combined sink temperature (h_c θ_air + h_r θ_surroundings)/h_se. */
+  readonly sinkTemperature: number;
+}
+
+export interface SolveChecks {
+  readonly surfaceCondensation: SurfaceCondensationResult;
+  readonly personnelProtection: PersonnelProtectionResult;
+  readonly serviceTemperature: ServiceTemperatureResult;
+}
+
+export interface StackSolution {
+  readonly engine: SteadyResult;
+  /** Heat leaving the outer surface: W/m (pipe) or W/m² (flat); negative = heat gained. */
+  readonly heatOut: number;
+  readonly innerSurfaceTemperature: number;
+  readonly surfaceTemperature: number;
+  readonly layers: readonly LayerTemperatures[];
+  readonly interfaces: readonly InterfaceTemperature[];
+  readonly surfaceCoefficient: SurfaceCoefficient;
+  /** Sentences from correlations used outside their validity range, at the converged state. */
+  readonly warnings: readonly string[];
+  readonly energyBalance: { readonly residual: number; readonly relativeResidual: number };
+  readonly iterations: number;
+  readonly dewPoint: number;
+  readonly checks: SolveChecks;
+}
+
+export interface StackProblem {
+  readonly geometry: Geometry;
+  readonly stack: readonly StackLayer[];
+  readonly inner: InnerCondition;
+  readonly exchange: OuterSurfaceExchangeFunction;
+  readonly ambient: AmbientConditions;
+  readonly touchLimit?: number;
+}
+
+function innerFace(inner: InnerCondition): FaceCondition {
+  return inner.kind === 'fluid'
+    ? { kind: 'film', coefficient: inner.coefficient, ambient: inner.temperature }
+    : { kind: 'temperature', temperature: inner.temperature };
+}
+
+export function solveStack(problem: StackProblem): StackSolution {
+  const { stack, exchange, ambient } = problem;
+  const engine = solveSteady({
+    geometry: problem.geometry,
+    layers: toEngineLayers(stack).map((layer, i) => ({ ...layer, name: stack[i]!.name })),
+    inner: innerFace(problem.inner),
+    outer: { kind: 'film', coefficient: exchange, ambient: ambient.airTemperature },
+  });
+
+  const surfaceTemperature = engine.faces.outer.temperature;
+  const converged = exchange(surfaceTemperature);
+  const layers = engine.layers.map((l, i): LayerTemperatures => ({
+    name: stack[i]!.name,
+    role: stack[i]!.role,
+    material: stack[i]!.material.name,
+    thickness: stack[i]!.thickness,
+    innerPosition: l.innerPosition,
+    outerPosition: l.outerPosition,
+    innerTemperature: l.innerTemperature,
+    outerTemperature: l.outerTemperature,
+    meanTemperature: l.meanTemperature,
+    conductivityAtMeanTemperature: l.conductivityAtMeanTemperature,
+    ...(l.effectiveConductivity !== undefined ? { effectiveConductivity: l.effectiveConductivity } : {}),
+    ...(l.thermalResistance !== undefined ? { thermalResistance: l.thermalResistance } : {}),
+  }));
+  const interfaces = engine.interfaces.map(
+    (f): InterfaceTemperature => ({
+      innerLayer: stack[f.index]!.name,
+      outerLayer: stack[f.index + 1]!.name,
+      position: f.position,
+      // No contact resistance between these layers, so both sides share one temperature.
+      temperature: f.temperatureInnerSide,
+    }),
+  );
+
+  const surfaceCondensation = surfaceCondensationCheck({
+    surfaceTemperature,
+    airTemperature: ambient.airTemperature,
+    relativeHumidity: ambient.relativeHumidity,
+  });
+  const checks: SolveChecks = {
+    surfaceCondensation,
+    personnelProtection: personnelProtectionCheck({
+      surfaceTemperature,
+      ...(problem.touchLimit !== undefined ? { touchLimit: problem.touchLimit } : {}),
+    }),
+    serviceTemperature: serviceTemperatureCheck(
+      layers.map((l, i) => ({
+        name: l.name,
+        innerTemperature: l.innerTemperature,
+        outerTemperature: l.outerTemperature,
+        minServiceTemperature: stack[i]!.material.minServiceTemperature ?? null,
+        maxServiceTemperature: stack[i]!.material.maxServiceTemperature ?? null,
+      })),
+    ),
+  };
+
+  return {
+    engine,
+    heatOut: -engine.faces.outer.heatIn,
+    innerSurfaceTemperature: engine.faces.inner.temperature,
+    surfaceTemperature,
+    layers,
+    interfaces,
+    surfaceCoefficient: {
+      total: converged.coefficient,
+      convection: converged.convection,
+      radiation: converged.radiation,
+      sinkTemperature: converged.ambient,
+    },
+    warnings: converged.warnings,
+    energyBalance: { residual: engine.balance.residual, relativeResidual: engine.balance.relativeResidual },
+    iterations: engine.iterations,
+    dewPoint: surfaceCondensation.dewPoint,
+    checks,
+  };
+}

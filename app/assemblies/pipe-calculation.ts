@@ -1,0 +1,101 @@
+/**
+ * Heat loss (or gain) of an insulated pipe, and the surface checks.
+ *
+ * The pipe wall, the insulation layers and the jacket become an axisymmetric FE problem from the
+ * pipe's inner radius outwards. The inner face carries the fluid film (or a fixed temperature);
+ * the outer face carries the surface film from app/physics outerSurfaceExchange, whose coefficient
+ * depends on the surface temperature and which the engine iterates to convergence together with
+ * any temperature-dependent conductivity. Results keep full precision; rounding is for display.
+ * Heat flows are positive outwards (heat lost by the pipe); a chilled line gives negative values.
+ */
+import { outerSurfaceExchange, type OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
+import {
+  methodNeedsEmissivity,
+  outerSurfaceEmissivity,
+  type ResolvedEmissivity,
+} from './pipe-and-flat-inputs.js';
+import { solveStack, type StackLayer, type StackSolution } from './pipe-and-flat-solve.js';
+import { DEFAULT_SURFACE_METHOD, validatePipeInput, verticalPipeHeight, type PipeInput } from './pipe-input.js';
+
+export interface PipeResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
+  /** W/m; positive = heat lost by the pipe. */
+  readonly heatLossPerMetre: number;
+  /** W over the whole run. */
+  readonly heatLoss: number;
+  /** W/m² of outer (jacket or insulation) surface. */
+  readonly heatFlowDensityAtSurface: number;
+  /** kWh per year: heatLoss × operating hours / 1000. */
+  readonly annualEnergy: number;
+  /** m, of the insulated pipe including the jacket. */
+  readonly outerDiameter: number;
+  /** m² of outer surface per metre of pipe: π·outerDiameter. */
+  readonly surfaceAreaPerMetre: number;
+  /** The emissivity used for radiation and where it came from; null for a fixed coefficient or resistance. */
+  readonly emissivity: ResolvedEmissivity | null;
+  /** m, the height used for convection on a vertical pipe; null when horizontal. */
+  readonly height: number | null;
+  /** Defaults and choices the calculation made, in words. */
+  readonly assumptions: readonly string[];
+}
+
+export function calculatePipe(input: PipeInput): PipeResult {
+  validatePipeInput(input);
+  const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
+  const assumptions: string[] = [];
+
+  const innerRadius = input.pipe.outerDiameter / 2 - input.pipe.wallThickness;
+  const stack: StackLayer[] = [
+    { role: 'pipe-wall', name: `pipe wall (${input.pipe.material.name})`, material: input.pipe.material, thickness: input.pipe.wallThickness },
+    ...input.layers.map((l, i): StackLayer => ({ role: 'insulation', name: `insulation layer ${i + 1} (${l.material.name})`, material: l.material, thickness: l.thickness })),
+    ...(input.jacket ? [{ role: 'jacket' as const, name: `jacket (${input.jacket.material.name})`, material: input.jacket.material, thickness: input.jacket.thickness }] : []),
+  ];
+  const outerDiameter = 2 * stack.reduce((r, l) => r + l.thickness, innerRadius);
+
+  let height: number | null = null;
+  if (input.orientation === 'vertical') {
+    const chosen = verticalPipeHeight(input);
+    height = chosen.height;
+    assumptions.push(chosen.note);
+  }
+  const shape: OuterSurfaceShape =
+    input.orientation === 'vertical'
+      ? { kind: 'pipe', orientation: 'vertical', outerDiameter, height: height! }
+      : { kind: 'pipe', orientation: 'horizontal', outerDiameter };
+
+  const emissivity = methodNeedsEmissivity(method) ? outerSurfaceEmissivity(input.layers, input.jacket) : null;
+  if (input.ambient.surroundingsTemperature === undefined) assumptions.push('surroundings (radiant) temperature taken equal to the air temperature');
+  if (input.surfaceMethod === undefined) assumptions.push('outer surface coefficient from the general correlations (natural, forced and mixed convection) plus radiation');
+
+  const exchange = outerSurfaceExchange({
+    shape,
+    exposure: input.ambient.exposure,
+    method,
+    airTemperature: input.ambient.airTemperature,
+    ...(input.ambient.surroundingsTemperature !== undefined ? { surroundingsTemperature: input.ambient.surroundingsTemperature } : {}),
+    ...(emissivity ? { emissivity: emissivity.value } : {}),
+  });
+
+  const { engine: _engine, heatOut, ...solution } = solveStack({
+    geometry: { kind: 'axisymmetric', innerRadius },
+    stack,
+    inner: input.inner,
+    exchange,
+    ambient: input.ambient,
+    ...(input.touchLimit !== undefined ? { touchLimit: input.touchLimit } : {}),
+  });
+
+  const surfaceAreaPerMetre = Math.PI * outerDiameter;
+  const heatLoss = heatOut * input.length;
+  return {
+    ...solution,
+    heatLossPerMetre: heatOut,
+    heatLoss,
+    heatFlowDensityAtSurface: heatOut / surfaceAreaPerMetre,
+    annualEnergy: (heatLoss * input.operatingHours) / 1000,
+    outerDiameter,
+    surfaceAreaPerMetre,
+    emissivity,
+    height,
+    assumptions,
+  };
+}

@@ -1,0 +1,139 @@
+/**
+ * The pipe case file: a pipe calculation written as JSON, SI units, temperatures in °C,
+ * relative humidity as a fraction 0..1. Schema: data/schemas/pipe-case.schema.json.
+ *
+ *   { "kind": "pipe", "schemaVersion": 1, "title": "…",
+ *     "pipe": { "outerDiameter": 0.1143, "wallThickness": 0.0036, "materialId": 3 },
+ *     "inner": { "kind": "fluid", "temperature": 80, "coefficient": 1500 },
+ *     "layers": [ { "material": { "name": "…", "conductivity": { "kind": "constant", "value": 0.04 } }, "thickness": 0.05 } ],
+ *     "jacket": { "materialId": 7, "thickness": 0.0007, "emissivity": 0.13 },
+ *     "orientation": "horizontal",
+ *     "ambient": { "airTemperature": 20, "relativeHumidity": 0.6, "exposure": { "kind": "indoor" } },
+ *     "length": 40, "operatingHours": 8760 }
+ *
+ * Each material is given inline ("material": {…}) or by library id ("materialId": n, resolved by
+ * the caller's callback), never both. The field names are those of PipeInput, so an error from
+ * the parser and one from calculatePipe name the same path.
+ */
+import { InputError } from '../fe/errors.js';
+import type { MaterialProperties } from '../materials/material-properties.js';
+import { validatePipeInput, type PipeInput } from '../assemblies/pipe-input.js';
+import { rejectUnknownKeys, requireObject, requireSchemaVersion, requireString, type JsonObject } from './case-fields.js';
+
+export const PIPE_CASE_SCHEMA_VERSION = 1;
+
+export type MaterialResolver = (id: number) => MaterialProperties | undefined;
+
+const MATERIAL_KEYS = [
+  'name',
+  'category',
+  'conductivity',
+  'density',
+  'specificHeat',
+  'vapourResistanceFactor',
+  'equivalentAirLayerThickness',
+  'emissivity',
+  'minServiceTemperature',
+  'maxServiceTemperature',
+  'source',
+];
+const NULLABLE_MATERIAL_FIELDS = MATERIAL_KEYS.filter((k) => !['name', 'category', 'conductivity', 'source'].includes(k));
+
+/** An inline material with the optional fields filled in as null ("not given"); the calculation validates the values. */
+function inlineMaterial(value: unknown, field: string): MaterialProperties {
+  const m = requireObject(value, field);
+  rejectUnknownKeys(m, MATERIAL_KEYS, field);
+  const filled: JsonObject = { category: 'other', ...m };
+  for (const key of NULLABLE_MATERIAL_FIELDS) if (filled[key] === undefined) filled[key] = null;
+  if (m['source'] !== undefined) requireString(m['source'], `${field}.source`, 1000);
+  return filled as unknown as MaterialProperties;
+}
+
+/**
+ * The material of an entry holding either "material" (inline) or "materialId" (library id).
+ * `field` is the entry's path, e.g. "layers[0]"; errors name `${field}.material` or `${field}.materialId`.
+ */
+export function resolveCaseMaterial(entry: JsonObject, field: string, resolve: MaterialResolver): MaterialProperties {
+  const hasInline = entry['material'] !== undefined;
+  const hasId = entry['materialId'] !== undefined;
+  if (hasInline === hasId) {
+    throw new InputError(`${field}.material`, `${field} must give either "material" (inline) or "materialId" (library id), not ${hasInline ? 'both' : 'neither'}.`);
+  }
+  if (hasInline) return inlineMaterial(entry['material'], `${field}.material`);
+  const id = entry['materialId'];
+  if (typeof id !== 'number' || !Number.isInteger(id) || id < 1) {
+    throw new InputError(`${field}.materialId`, `${field}.materialId must be a whole number of 1 or more (got ${JSON.stringify(id)}).`);
+  }
+  const material = resolve(id);
+  if (material === undefined) {
+    throw new InputError(`${field}.materialId`, `${field}.materialId ${id} names no material in the library; choose an existing material or give it inline.`);
+  }
+  return material;
+}
+
+/** An entry with a material and a thickness (and any extra keys allowed), material resolved. */
+export function caseMaterialLayer(value: unknown, field: string, resolve: MaterialResolver, extraKeys: readonly string[] = []): JsonObject {
+  const entry = requireObject(value, field);
+  rejectUnknownKeys(entry, ['material', 'materialId', 'thickness', ...extraKeys], field);
+  const { materialId: _id, ...rest } = entry;
+  return { ...rest, material: resolveCaseMaterial(entry, field, resolve) };
+}
+
+export function caseLayers(value: unknown, resolve: MaterialResolver): JsonObject[] {
+  if (!Array.isArray(value)) throw new InputError('layers', 'layers must list 1 to 20 insulation layers, inside first.');
+  return value.map((layer, i) => caseMaterialLayer(layer, `layers[${i}]`, resolve));
+}
+
+/** Checks the shared envelope and the shapes of the nested objects; returns the file object. */
+export function caseEnvelope(json: unknown, kind: 'pipe' | 'flat', schemaVersion: number, topKeys: readonly string[]): JsonObject {
+  const file = requireObject(json, 'case');
+  rejectUnknownKeys(file, topKeys, '');
+  requireSchemaVersion(file, schemaVersion);
+  if (file['kind'] !== kind) throw new InputError('kind', `kind must be "${kind}" for this case file; got ${JSON.stringify(file['kind'])}.`);
+  if (file['title'] !== undefined) requireString(file['title'], 'title');
+  if (file['notes'] !== undefined) requireString(file['notes'], 'notes', 5000);
+  if (file['inner'] !== undefined) rejectUnknownKeys(requireObject(file['inner'], 'inner'), ['kind', 'temperature', 'coefficient'], 'inner');
+  if (file['surfaceMethod'] !== undefined) {
+    rejectUnknownKeys(requireObject(file['surfaceMethod'], 'surfaceMethod'), ['kind', 'coefficient', 'resistance'], 'surfaceMethod');
+  }
+  const ambient = requireObject(file['ambient'], 'ambient');
+  rejectUnknownKeys(ambient, ['airTemperature', 'surroundingsTemperature', 'relativeHumidity', 'exposure'], 'ambient');
+  rejectUnknownKeys(requireObject(ambient['exposure'], 'ambient.exposure'), ['kind', 'windSpeed'], 'ambient.exposure');
+  return file;
+}
+
+const PIPE_TOP_KEYS = [
+  '$schema',
+  'schemaVersion',
+  'kind',
+  'title',
+  'notes',
+  'pipe',
+  'inner',
+  'layers',
+  'jacket',
+  'orientation',
+  'height',
+  'ambient',
+  'surfaceMethod',
+  'length',
+  'operatingHours',
+  'touchLimit',
+];
+
+/** Parses and validates a pipe case file; throws InputError naming the field. */
+export function parsePipeCaseFile(json: unknown, resolveMaterial: MaterialResolver): PipeInput {
+  const file = caseEnvelope(json, 'pipe', PIPE_CASE_SCHEMA_VERSION, PIPE_TOP_KEYS);
+  const pipe = requireObject(file['pipe'], 'pipe');
+  rejectUnknownKeys(pipe, ['outerDiameter', 'wallThickness', 'material', 'materialId'], 'pipe');
+  const { materialId: _id, ...pipeRest } = pipe;
+  const input: JsonObject = {
+    ...file,
+    pipe: { ...pipeRest, material: resolveCaseMaterial(pipe, 'pipe', resolveMaterial) },
+    layers: caseLayers(file['layers'], resolveMaterial),
+  };
+  if (file['jacket'] !== undefined) input['jacket'] = caseMaterialLayer(file['jacket'], 'jacket', resolveMaterial, ['emissivity']);
+  for (const key of ['$schema', 'schemaVersion', 'kind', 'notes']) delete input[key];
+  validatePipeInput(input);
+  return input;
+}
