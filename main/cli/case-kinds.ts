@@ -12,6 +12,9 @@ import { parsePipeCaseFile } from '../../app/cases/pipe-case-file.js';
 import { parseFlatCaseFile } from '../../app/cases/flat-case-file.js';
 import { calculatePipe } from '../../app/assemblies/pipe-calculation.js';
 import { calculateFlatSurface } from '../../app/assemblies/flat-surface-calculation.js';
+import { analyseWall } from '../../app/assemblies/wall-analysis.js';
+import { parseWallCaseFile } from '../../app/cases/wall-case-file.js';
+import { wallText } from './format/wall-text.js';
 
 export interface SolvedCase {
   readonly json: unknown;
@@ -60,7 +63,18 @@ const flat: CaseKind = {
   },
 };
 
-export const CASE_KINDS: readonly CaseKind[] = [conduction, pipe, flat];
+const wall: CaseKind = {
+  kind: 'wall',
+  summary: 'a wall or roof build-up: U-value, temperatures, mould and condensation checks',
+  solve(json, resolveMaterial) {
+    const input = parseWallCaseFile(json, resolveMaterial);
+    const result = analyseWall(input);
+    const title = input.name ?? 'Wall or roof';
+    return { json: { kind: 'wall', title, result }, text: () => wallText(title, result) };
+  },
+};
+
+export const CASE_KINDS: readonly CaseKind[] = [conduction, pipe, flat, wall];
 
 /** The case kind a parsed file declares, or a one-sentence reason it has none we know. */
 export function caseKindOf(json: unknown): CaseKind | string {
