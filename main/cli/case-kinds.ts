@@ -15,6 +15,7 @@ import { calculateFlatSurface } from '../../app/assemblies/flat-surface-calculat
 import { analyseWall } from '../../app/assemblies/wall-analysis.js';
 import { parseWallCaseFile } from '../../app/cases/wall-case-file.js';
 import { wallText } from './format/wall-text.js';
+import { resolvePipeSizeInCase } from '../pipe-sizes/pipe-size-catalogue.js';
 
 export interface SolvedCase {
   readonly json: unknown;
@@ -45,10 +46,11 @@ const pipe: CaseKind = {
   kind: 'pipe',
   summary: 'an insulated pipe run: heat loss, surface temperature, condensation and touch checks',
   solve(json, resolveMaterial) {
-    const input = parsePipeCaseFile(json, resolveMaterial);
+    const { json: resolved, size } = resolvePipeSizeInCase(json);
+    const input = parsePipeCaseFile(resolved, resolveMaterial);
     const result = calculatePipe(input);
     const title = input.title ?? 'Pipe';
-    return { json: { kind: 'pipe', title, result }, text: () => pipeText(title, result) };
+    return { json: { kind: 'pipe', title, pipeSize: size, result }, text: () => pipeText(title, result) };
   },
 };
 

@@ -13,6 +13,7 @@ import { parseFlatCaseFile } from '../../app/cases/flat-case-file.js';
 import { parsePipeCaseFile } from '../../app/cases/pipe-case-file.js';
 import type { MaterialProperties } from '../../app/materials/material-properties.js';
 import { validateCaseInputs } from '../../main/services/case-inputs.js';
+import { resolvePipeSizeInCase } from '../../main/pipe-sizes/pipe-size-catalogue.js';
 import { aluminium, inputErrorOf, mineralWool, steel } from './pipe-fixtures.js';
 
 const root = path.resolve(import.meta.dirname, '../..');
@@ -41,7 +42,7 @@ describe('shipped examples', () => {
       expect(json.notes).toMatch(/Invented demo scenario/);
       const result =
         json.kind === 'pipe'
-          ? calculatePipe(parsePipeCaseFile(json, noLibrary))
+          ? calculatePipe(parsePipeCaseFile(resolvePipeSizeInCase(json).json, noLibrary))
           : calculateFlatSurface(parseFlatCaseFile(json, noLibrary));
       expect(Number.isFinite(result.surfaceTemperature)).toBe(true);
       expect(result.energyBalance.relativeResidual).toBeLessThan(1e-9);
