@@ -32,6 +32,11 @@ export function requireArray(value: unknown, field: string, min: number, max: nu
   return value;
 }
 
+/** A value as it reads in an error message. */
+export function shown(value: unknown): string {
+  return typeof value === 'number' ? String(value) : (JSON.stringify(value) ?? String(value));
+}
+
 export function requireString(value: unknown, field: string, maxLength = 200): string {
   if (typeof value !== 'string' || value.length > maxLength) {
     throw new InputError(field, `${field} must be text of at most ${maxLength} characters.`);

@@ -16,67 +16,20 @@
  * the parser and one from calculatePipe name the same path.
  */
 import { InputError } from '../fe/errors.js';
-import type { MaterialProperties } from '../materials/material-properties.js';
+import { resolveCaseMaterial, type MaterialResolver } from './case-material.js';
 import { validatePipeInput, type PipeInput } from '../assemblies/pipe-input.js';
 import { rejectUnknownKeys, requireObject, requireSchemaVersion, requireString, type JsonObject } from './case-fields.js';
 
+export type { MaterialResolver } from './case-material.js';
+
 export const PIPE_CASE_SCHEMA_VERSION = 1;
-
-export type MaterialResolver = (id: number) => MaterialProperties | undefined;
-
-const MATERIAL_KEYS = [
-  'name',
-  'category',
-  'conductivity',
-  'density',
-  'specificHeat',
-  'vapourResistanceFactor',
-  'equivalentAirLayerThickness',
-  'emissivity',
-  'minServiceTemperature',
-  'maxServiceTemperature',
-  'source',
-];
-const NULLABLE_MATERIAL_FIELDS = MATERIAL_KEYS.filter((k) => !['name', 'category', 'conductivity', 'source'].includes(k));
-
-/** An inline material with the optional fields filled in as null ("not given"); the calculation validates the values. */
-function inlineMaterial(value: unknown, field: string): MaterialProperties {
-  const m = requireObject(value, field);
-  rejectUnknownKeys(m, MATERIAL_KEYS, field);
-  const filled: JsonObject = { category: 'other', ...m };
-  for (const key of NULLABLE_MATERIAL_FIELDS) if (filled[key] === undefined) filled[key] = null;
-  if (m['source'] !== undefined) requireString(m['source'], `${field}.source`, 1000);
-  return filled as unknown as MaterialProperties;
-}
-
-/**
- * The material of an entry holding either "material" (inline) or "materialId" (library id).
- * `field` is the entry's path, e.g. "layers[0]"; errors name `${field}.material` or `${field}.materialId`.
- */
-export function resolveCaseMaterial(entry: JsonObject, field: string, resolve: MaterialResolver): MaterialProperties {
-  const hasInline = entry['material'] !== undefined;
-  const hasId = entry['materialId'] !== undefined;
-  if (hasInline === hasId) {
-    throw new InputError(`${field}.material`, `${field} must give either "material" (inline) or "materialId" (library id), not ${hasInline ? 'both' : 'neither'}.`);
-  }
-  if (hasInline) return inlineMaterial(entry['material'], `${field}.material`);
-  const id = entry['materialId'];
-  if (typeof id !== 'number' || !Number.isInteger(id) || id < 1) {
-    throw new InputError(`${field}.materialId`, `${field}.materialId must be a whole number of 1 or more (got ${JSON.stringify(id)}).`);
-  }
-  const material = resolve(id);
-  if (material === undefined) {
-    throw new InputError(`${field}.materialId`, `${field}.materialId ${id} names no material in the library; choose an existing material or give it inline.`);
-  }
-  return material;
-}
 
 /** An entry with a material and a thickness (and any extra keys allowed), material resolved. */
 export function caseMaterialLayer(value: unknown, field: string, resolve: MaterialResolver, extraKeys: readonly string[] = []): JsonObject {
   const entry = requireObject(value, field);
   rejectUnknownKeys(entry, ['material', 'materialId', 'thickness', ...extraKeys], field);
   const { materialId: _id, ...rest } = entry;
-  return { ...rest, material: resolveCaseMaterial(entry, field, resolve) };
+  return { ...rest, material: resolveCaseMaterial(entry, field, resolve, 'other') };
 }
 
 export function caseLayers(value: unknown, resolve: MaterialResolver): JsonObject[] {
@@ -129,7 +82,7 @@ export function parsePipeCaseFile(json: unknown, resolveMaterial: MaterialResolv
   const { materialId: _id, ...pipeRest } = pipe;
   const input: JsonObject = {
     ...file,
-    pipe: { ...pipeRest, material: resolveCaseMaterial(pipe, 'pipe', resolveMaterial) },
+    pipe: { ...pipeRest, material: resolveCaseMaterial(pipe, 'pipe', resolveMaterial, 'pipe') },
     layers: caseLayers(file['layers'], resolveMaterial),
   };
   if (file['jacket'] !== undefined) input['jacket'] = caseMaterialLayer(file['jacket'], 'jacket', resolveMaterial, ['emissivity']);

@@ -9,89 +9,16 @@ import { demoClimateByName, DEMO_CLIMATES } from '../assemblies/wall-demo-climat
 import type { MonthlyClimate } from '../assemblies/wall-climate.js';
 import type { InsideHumiditySource, WallInput, WallLayer } from '../assemblies/wall-input.js';
 import { validateWallInput } from '../assemblies/wall-validation.js';
-import type { ConductivityModel } from '../fe/conductivity.js';
 import { InputError } from '../fe/errors.js';
-import { validateConductivity } from '../fe/validate.js';
-import { MATERIAL_CATEGORIES, type MaterialCategory, type MaterialProperties } from '../materials/material-properties.js';
+import type { MaterialProperties } from '../materials/material-properties.js';
+import { resolveCaseMaterial } from './case-material.js';
+import { isObject, rejectUnknownKeys, shown, type JsonObject } from './case-fields.js';
 
 export const WALL_CASE_SCHEMA_VERSION = 1;
 
-type Json = Record<string, unknown>;
+type Json = JsonObject;
 
-function isObject(v: unknown): v is Json {
-  return typeof v === 'object' && v !== null && !Array.isArray(v);
-}
-
-function shown(v: unknown): string {
-  return typeof v === 'number' ? String(v) : (JSON.stringify(v) ?? String(v));
-}
-
-function onlyKeys(o: Json, field: string, allowed: readonly string[]): void {
-  for (const key of Object.keys(o)) {
-    if (!allowed.includes(key)) {
-      const path = field ? `${field}.${key}` : key;
-      throw new InputError(path, `${path} is not a known field here; allowed: ${allowed.join(', ')}.`);
-    }
-  }
-}
-
-function optionalNumber(o: Json, key: string, field: string, unit: string): number | null {
-  const v = o[key];
-  if (v === undefined || v === null) return null;
-  if (typeof v !== 'number' || !Number.isFinite(v)) throw new InputError(`${field}.${key}`, `${field}.${key} must be a number in ${unit} or null (got ${shown(v)}).`);
-  return v;
-}
-
-const MATERIAL_KEYS = [
-  'name',
-  'category',
-  'conductivity',
-  'density',
-  'specificHeat',
-  'vapourResistanceFactor',
-  'equivalentAirLayerThickness',
-  'emissivity',
-  'minServiceTemperature',
-  'maxServiceTemperature',
-  'source',
-] as const;
-
-/** An inline material: conductivity as a number (W/(m·K)) or a conductivity model; μ a number or "vapour-tight". */
-function parseMaterial(value: unknown, field: string): MaterialProperties {
-  if (!isObject(value)) throw new InputError(field, `${field} must be an object with at least a name and a conductivity in W/(m·K).`);
-  onlyKeys(value, field, MATERIAL_KEYS);
-  if (typeof value.name !== 'string' || value.name.trim() === '') throw new InputError(`${field}.name`, `${field}.name must be a non-empty text.`);
-  const category = value.category ?? 'building';
-  if (!(MATERIAL_CATEGORIES as readonly unknown[]).includes(category)) {
-    throw new InputError(`${field}.category`, `${field}.category must be one of ${MATERIAL_CATEGORIES.join(', ')} (got ${shown(category)}).`);
-  }
-  const c = value.conductivity;
-  const conductivity: ConductivityModel = typeof c === 'number' ? { kind: 'constant', value: c } : (c as ConductivityModel);
-  validateConductivity(conductivity, `${field}.conductivity`);
-  let mu: number | null;
-  if (value.vapourResistanceFactor === 'vapour-tight') mu = Number.POSITIVE_INFINITY;
-  else {
-    mu = optionalNumber(value, 'vapourResistanceFactor', field, 'dimensionless (or "vapour-tight")');
-    if (mu !== null && !(mu > 0)) throw new InputError(`${field}.vapourResistanceFactor`, `${field}.vapourResistanceFactor must be greater than 0 (1 for still air) or "vapour-tight" (got ${mu}).`);
-  }
-  const sd = optionalNumber(value, 'equivalentAirLayerThickness', field, 'm');
-  if (sd !== null && !(sd > 0)) throw new InputError(`${field}.equivalentAirLayerThickness`, `${field}.equivalentAirLayerThickness must be greater than 0 m (got ${sd}).`);
-  const emissivity = optionalNumber(value, 'emissivity', field, 'fraction 0..1');
-  if (emissivity !== null && (emissivity < 0 || emissivity > 1)) throw new InputError(`${field}.emissivity`, `${field}.emissivity must be from 0 to 1 (got ${emissivity}).`);
-  return {
-    name: value.name,
-    category: category as MaterialCategory,
-    conductivity,
-    density: optionalNumber(value, 'density', field, 'kg/m³'),
-    specificHeat: optionalNumber(value, 'specificHeat', field, 'J/(kg·K)'),
-    vapourResistanceFactor: mu,
-    equivalentAirLayerThickness: sd,
-    emissivity,
-    minServiceTemperature: optionalNumber(value, 'minServiceTemperature', field, '°C'),
-    maxServiceTemperature: optionalNumber(value, 'maxServiceTemperature', field, '°C'),
-    ...(typeof value.source === 'string' ? { source: value.source } : {}),
-  };
-}
+const onlyKeys = (o: Json, field: string, allowed: readonly string[]) => rejectUnknownKeys(o, allowed, field);
 
 function parseLayer(value: unknown, field: string, resolveMaterial: (id: number) => MaterialProperties | undefined): WallLayer {
   if (!isObject(value)) throw new InputError(field, `${field} must be an object: a material layer { material or materialId, thickness } or an air layer { kind: "air-layer", … }.`);
@@ -103,18 +30,7 @@ function parseLayer(value: unknown, field: string, resolveMaterial: (id: number)
     throw new InputError(`${field}.kind`, `${field}.kind must be "material" or "air-layer" (got ${shown(value.kind)}).`);
   }
   onlyKeys(value, field, ['kind', 'name', 'material', 'materialId', 'thickness']);
-  let material: MaterialProperties;
-  if (value.material !== undefined && value.materialId !== undefined) {
-    throw new InputError(field, `${field} must give either material or materialId, not both.`);
-  } else if (value.materialId !== undefined) {
-    const id = value.materialId;
-    if (typeof id !== 'number' || !Number.isInteger(id) || id < 1) throw new InputError(`${field}.materialId`, `${field}.materialId must be a whole number of 1 or more (got ${shown(id)}).`);
-    const found = resolveMaterial(id);
-    if (!found) throw new InputError(`${field}.materialId`, `${field}.materialId ${id} is not in the material library.`);
-    material = found;
-  } else {
-    material = parseMaterial(value.material, `${field}.material`);
-  }
+  const material = resolveCaseMaterial(value, field, resolveMaterial, 'building');
   return {
     kind: 'material',
     ...(typeof value.name === 'string' ? { name: value.name } : {}),
