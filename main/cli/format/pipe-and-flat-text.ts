@@ -32,12 +32,9 @@ function notesText(r: Stack): string[] {
   return notes.length ? ['', ...notes] : [];
 }
 
-export function pipeText(title: string, r: PipeResult): string {
+/** What every pipe and flat-surface summary shows after its headline. */
+function bodyText(r: Stack): string[] {
   return [
-    title,
-    `Pipe, outer diameter over insulation ${fixed(r.outerDiameter * 1000, 1)} mm`,
-    '',
-    `${lossOrGain(r.heatLossPerMetre, 2, 'W/m')}; ${fixed(Math.abs(r.heatLoss), 0)} W for the run; ${fixed(Math.abs(r.heatFlowDensityAtSurface), 2)} W/m² at the outer surface; ${fixed(Math.abs(r.annualEnergy), 0)} kWh per year.`,
     ...surfaceText(r),
     '',
     ...layersText(r),
@@ -45,6 +42,16 @@ export function pipeText(title: string, r: PipeResult): string {
     ...checksText([r.checks.surfaceCondensation, r.checks.personnelProtection, r.checks.serviceTemperature]),
     ...notesText(r),
     '',
+  ];
+}
+
+export function pipeText(title: string, r: PipeResult): string {
+  return [
+    title,
+    `Pipe, outer diameter over insulation ${fixed(r.outerDiameter * 1000, 1)} mm`,
+    '',
+    `${lossOrGain(r.heatLossPerMetre, 2, 'W/m')}; ${fixed(Math.abs(r.heatLoss), 0)} W for the run; ${fixed(Math.abs(r.heatFlowDensityAtSurface), 2)} W/m² at the outer surface; ${fixed(Math.abs(r.annualEnergy), 0)} kWh per year.`,
+    ...bodyText(r),
   ].join('\n');
 }
 
@@ -54,12 +61,6 @@ export function flatText(title: string, r: FlatSurfaceResult): string {
     'Flat surface',
     '',
     `${lossOrGain(r.heatFlowDensity, 2, 'W/m²')}; ${fixed(Math.abs(r.heatLoss), 0)} W over the area; ${fixed(Math.abs(r.annualEnergy), 0)} kWh per year; layer resistance ${fixed(r.layerResistance, 3)} m²·K/W.`,
-    ...surfaceText(r),
-    '',
-    ...layersText(r),
-    '',
-    ...checksText([r.checks.surfaceCondensation, r.checks.personnelProtection, r.checks.serviceTemperature]),
-    ...notesText(r),
-    '',
+    ...bodyText(r),
   ].join('\n');
 }
