@@ -4,9 +4,9 @@
  * outwards; the outer film from app/physics outerSurfaceExchange is iterated by the engine.
  * Heat flows are positive outwards (heat lost); a cold surface gives negative values.
  */
-import { outerSurfaceExchange, type OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
+import type { OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity } from './pipe-and-flat-inputs.js';
-import { solveStack, type StackLayer, type StackSolution } from './pipe-and-flat-solve.js';
+import { solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from './pipe-and-flat-solve.js';
 import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
 import { DEFAULT_SURFACE_METHOD } from './pipe-input.js';
 
@@ -44,14 +44,7 @@ export function calculateFlatSurface(input: FlatSurfaceInput): FlatSurfaceResult
     assumptions.push('wind taken along the surface over its height (vertical) or characteristic length (horizontal)');
   }
 
-  const exchange = outerSurfaceExchange({
-    shape,
-    exposure: input.ambient.exposure,
-    method,
-    airTemperature: input.ambient.airTemperature,
-    ...(input.ambient.surroundingsTemperature !== undefined ? { surroundingsTemperature: input.ambient.surroundingsTemperature } : {}),
-    ...(emissivity ? { emissivity: emissivity.value } : {}),
-  });
+  const exchange = surfaceExchangeFor(shape, input.ambient, method, emissivity);
 
   const { engine: _engine, heatOut, ...solution } = solveStack({
     geometry: { kind: 'planar' },

@@ -9,7 +9,7 @@ import type { FaceCondition, Geometry } from '../fe/problem.js';
 import type { SteadyResult } from '../fe/result.js';
 import { solveSteady } from '../fe/steady-solve.js';
 import type { MaterialProperties } from '../materials/material-properties.js';
-import type { OuterSurfaceExchangeFunction } from '../physics/outer-surface-exchange.js';
+import { outerSurfaceExchange, type OuterSurfaceExchangeFunction, type OuterSurfaceShape, type SurfaceMethod } from '../physics/outer-surface-exchange.js';
 import { personnelProtectionCheck, type PersonnelProtectionResult } from '../checks/personnel-protection.js';
 import { serviceTemperatureCheck, type ServiceTemperatureResult } from '../checks/service-temperature.js';
 import { surfaceCondensationCheck, type SurfaceCondensationResult } from '../checks/surface-condensation.js';
@@ -181,4 +181,21 @@ export function solveStack(problem: StackProblem): StackSolution {
     dewPoint: surfaceCondensation.dewPoint,
     checks,
   };
+}
+
+/** The outer film of a pipe or flat surface in its ambient conditions (convection + radiation). */
+export function surfaceExchangeFor(
+  shape: OuterSurfaceShape,
+  ambient: AmbientConditions,
+  method: SurfaceMethod,
+  emissivity: { readonly value: number } | null,
+): OuterSurfaceExchangeFunction {
+  return outerSurfaceExchange({
+    shape,
+    exposure: ambient.exposure,
+    method,
+    airTemperature: ambient.airTemperature,
+    ...(ambient.surroundingsTemperature !== undefined ? { surroundingsTemperature: ambient.surroundingsTemperature } : {}),
+    ...(emissivity ? { emissivity: emissivity.value } : {}),
+  });
 }

@@ -8,13 +8,13 @@
  * any temperature-dependent conductivity. Results keep full precision; rounding is for display.
  * Heat flows are positive outwards (heat lost by the pipe); a chilled line gives negative values.
  */
-import { outerSurfaceExchange, type OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
+import type { OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
 import {
   methodNeedsEmissivity,
   outerSurfaceEmissivity,
   type ResolvedEmissivity,
 } from './pipe-and-flat-inputs.js';
-import { solveStack, type StackLayer, type StackSolution } from './pipe-and-flat-solve.js';
+import { solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from './pipe-and-flat-solve.js';
 import { DEFAULT_SURFACE_METHOD, validatePipeInput, verticalPipeHeight, type PipeInput } from './pipe-input.js';
 
 export interface PipeResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
@@ -66,14 +66,7 @@ export function calculatePipe(input: PipeInput): PipeResult {
   if (input.ambient.surroundingsTemperature === undefined) assumptions.push('surroundings (radiant) temperature taken equal to the air temperature');
   if (input.surfaceMethod === undefined) assumptions.push('outer surface coefficient from the general correlations (natural, forced and mixed convection) plus radiation');
 
-  const exchange = outerSurfaceExchange({
-    shape,
-    exposure: input.ambient.exposure,
-    method,
-    airTemperature: input.ambient.airTemperature,
-    ...(input.ambient.surroundingsTemperature !== undefined ? { surroundingsTemperature: input.ambient.surroundingsTemperature } : {}),
-    ...(emissivity ? { emissivity: emissivity.value } : {}),
-  });
+  const exchange = surfaceExchangeFor(shape, input.ambient, method, emissivity);
 
   const { engine: _engine, heatOut, ...solution } = solveStack({
     geometry: { kind: 'axisymmetric', innerRadius },
