@@ -2,7 +2,9 @@
 /**
  * `npm start`: open Lamina in Electron when its binary is installed; otherwise serve the same
  * renderer on 127.0.0.1 and say so in one line. Options for browser mode: --port <n> (or
- * LAMINA_PORT; 0 picks a free port); --browser serves in the browser even when Electron is there.
+ * LAMINA_PORT; 0 picks a free port); --db <file> (or LAMINA_DB; default: see
+ * main/storage/database-path.ts) names the library database; --browser serves in the browser even
+ * when Electron is there.
  *
  * The Electron binary is detected without `require('electron')`, which throws (or starts a
  * download) when the binary is missing: its package records the binary's path in path.txt.
@@ -39,6 +41,17 @@ function requestedPort(argv, env) {
   return port;
 }
 
+function requestedDatabase(argv) {
+  let chosen;
+  for (let i = 0; i < argv.length; i++) {
+    const arg = argv[i];
+    if (arg === '--db') chosen = argv[++i];
+    else if (arg.startsWith('--db=')) chosen = arg.slice('--db='.length);
+  }
+  if (chosen === '') fail('The --db option needs a file path.', 2);
+  return chosen;
+}
+
 function fail(message, code = 1) {
   console.error(message);
   process.exit(code);
@@ -61,14 +74,16 @@ async function startDesktop(binary) {
   child.on('close', (code, signal) => process.exit(code ?? (signal ? 0 : 1)));
 }
 
-async function startBrowserMode(port, why) {
+async function startBrowserMode(port, databaseOption, why) {
   const { tsImport } = await import('tsx/esm/api');
+  const { resolveDatabasePath } = await tsImport('./storage/database-path.ts', import.meta.url);
+  const databasePath = resolveDatabasePath(databaseOption, process.env, process.cwd());
   const { ensureRendererBuilt } = await tsImport('./server/renderer-build.ts', import.meta.url);
   const { startBrowserServer } = await tsImport('./server/browser-server.ts', import.meta.url);
   await ensureRendererBuilt();
   let server;
   try {
-    server = await startBrowserServer({ port, host: '127.0.0.1' });
+    server = await startBrowserServer({ port, host: '127.0.0.1', databasePath });
   } catch (error) {
     if (error && error.code === 'EADDRINUSE') {
       fail(`Port ${port} is already in use; pass --port <number> or set LAMINA_PORT (0 picks a free port).`);
@@ -79,6 +94,12 @@ async function startBrowserMode(port, why) {
     why === 'no-electron'
       ? `Electron's binary is not installed here; serving Lamina in your browser at ${server.url} instead.`
       : `Serving Lamina in your browser at ${server.url} (Ctrl-C stops it).`,
+  );
+  const status = server.library.status();
+  console.log(
+    status.state === 'open'
+      ? `Library database: ${status.databasePath}`
+      : `The library database could not be opened: ${status.message} The page offers the backups to restore.`,
   );
   let stopping = false;
   const stop = () => {
@@ -97,7 +118,7 @@ const argv = process.argv.slice(2);
 const binary = argv.includes('--browser') ? undefined : electronBinary();
 try {
   if (binary) await startDesktop(binary);
-  else await startBrowserMode(requestedPort(argv, process.env), argv.includes('--browser') ? 'asked' : 'no-electron');
+  else await startBrowserMode(requestedPort(argv, process.env), requestedDatabase(argv), argv.includes('--browser') ? 'asked' : 'no-electron');
 } catch (error) {
   fail(error instanceof Error ? error.message : String(error));
 }

@@ -1,11 +1,22 @@
 /**
- * The typed API between the UI and the Node side, one entry per operation.
+ * The typed API between the UI and the Node side, one channel per operation.
  *
  * Pure types: the renderer imports this with `import type`, the Electron preload and main process
  * use it to type their single channel per operation, and the browser-mode server mirrors each
- * channel as `POST /api/<name>` (the channel name with ':' replaced by '-', e.g. `app:info` ->
- * `/api/app-info`). Every request and response is plain JSON-serialisable data.
+ * channel as `POST /api/<name>` (the channel name with ':' replaced by '-', e.g. `materials:list`
+ * -> `/api/materials-list`). Every request is one JSON object whose fields are named below, and
+ * every response is plain data. Over HTTP a vapour-tight μ (Infinity) travels as "inf"
+ * (app/api/wire-json.ts); Electron's IPC carries Infinity as it is.
  */
+import type { BackupInfo, DatabaseStatus, RestoreResult } from './backup-types.js';
+import type {
+  ConductivityFit, CsvImportResult, Material, MaterialFilter, MaterialInput, MaterialUsage,
+} from './material-types.js';
+import type { CaseDraft, Project, ProjectCase, ProjectFields, ProjectSummary } from './project-types.js';
+
+export type * from './backup-types.js';
+export type * from './material-types.js';
+export type * from './project-types.js';
 
 /** What the running program is, for the title bar and the report footer. */
 export interface AppInfo {
@@ -13,9 +24,67 @@ export interface AppInfo {
   readonly version: string;
 }
 
+type NoFields = Record<string, never>;
+type Id = { readonly id: number };
+
 /** Channel name -> request and response. Add one entry per operation. */
 export interface ApiChannels {
-  'app:info': { readonly request: Record<string, never>; readonly response: AppInfo };
+  'app:info': { readonly request: NoFields; readonly response: AppInfo };
+  'database:status': { readonly request: NoFields; readonly response: DatabaseStatus };
+
+  'materials:list': { readonly request: MaterialFilter; readonly response: readonly Material[] };
+  'materials:get': { readonly request: Id; readonly response: Material };
+  'materials:create': { readonly request: { readonly material: MaterialInput }; readonly response: Material };
+  'materials:update': { readonly request: Id & { readonly material: MaterialInput }; readonly response: Material };
+  /** A user copy of any material, named "<name> (copy)" unless a name is given. */
+  'materials:duplicate': { readonly request: Id & { readonly name?: string }; readonly response: Material };
+  /** Refused while a case uses the material, unless `replaceWith` names the material to use instead. */
+  'materials:remove': {
+    readonly request: Id & { readonly replaceWith?: number };
+    readonly response: { readonly replacedInCases: number };
+  };
+  'materials:usage': { readonly request: Id; readonly response: readonly MaterialUsage[] };
+  'materials:import-csv': { readonly request: { readonly csv: string }; readonly response: CsvImportResult };
+  'materials:export-csv': { readonly request: MaterialFilter; readonly response: { readonly csv: string } };
+  'materials:fit-conductivity': {
+    readonly request: {
+      /** [mean temperature °C, conductivity W/(m·K)] pairs from a data sheet. */
+      readonly points: readonly (readonly [number, number])[];
+      readonly degree: 1 | 2 | 3;
+      readonly minServiceTemperature: number;
+      readonly maxServiceTemperature: number;
+    };
+    readonly response: ConductivityFit;
+  };
+
+  'projects:list': { readonly request: NoFields; readonly response: readonly ProjectSummary[] };
+  'projects:list-recycle-bin': { readonly request: NoFields; readonly response: readonly ProjectSummary[] };
+  'projects:open': { readonly request: Id; readonly response: Project };
+  'projects:create': { readonly request: { readonly fields: Partial<ProjectFields> & { readonly name: string } }; readonly response: Project };
+  'projects:update': { readonly request: Id & { readonly changes: Partial<ProjectFields> }; readonly response: Project };
+  'projects:rename': { readonly request: Id & { readonly name: string }; readonly response: Project };
+  'projects:duplicate': { readonly request: Id & { readonly name?: string }; readonly response: Project };
+  /** Moves the project to the recycle bin. */
+  'projects:remove': { readonly request: Id; readonly response: null };
+  'projects:restore': { readonly request: Id; readonly response: Project };
+  'projects:empty-recycle-bin': { readonly request: NoFields; readonly response: { readonly deleted: number } };
+  'projects:add-case': { readonly request: { readonly projectId: number; readonly draft: CaseDraft }; readonly response: ProjectCase };
+  'projects:update-case': {
+    readonly request: { readonly caseId: number; readonly changes: { readonly name?: string; readonly inputs?: unknown } };
+    readonly response: ProjectCase;
+  };
+  'projects:remove-case': { readonly request: { readonly caseId: number }; readonly response: null };
+  /** The project as one self-contained file (JSON text) and a suggested file name. */
+  'projects:export-file': { readonly request: Id; readonly response: { readonly fileName: string; readonly text: string } };
+  'projects:import-file': {
+    readonly request: { readonly text: string };
+    readonly response: { readonly project: Project; readonly materialsReused: number; readonly materialsCreated: number };
+  };
+
+  'backups:list': { readonly request: NoFields; readonly response: readonly BackupInfo[] };
+  'backups:create': { readonly request: NoFields; readonly response: BackupInfo };
+  /** Closes the library, replaces it by the backup (moving the current file aside) and reopens it. */
+  'backups:restore': { readonly request: { readonly file: string }; readonly response: RestoreResult };
 }
 
 export type ApiChannel = keyof ApiChannels;
@@ -25,18 +94,62 @@ export type ApiResponse<C extends ApiChannel> = ApiChannels[C]['response'];
 /** A failed call, as both transports report it: one sentence naming what was wrong. */
 export interface ApiError {
   readonly error: string;
+  /** The request field at fault, when one is. */
+  readonly field?: string;
 }
+
+/** One function of the API: channels without fields may be called with no argument. */
+export type ApiCall<C extends ApiChannel> = NoFields extends ApiRequest<C>
+  ? (request?: ApiRequest<C>) => Promise<ApiResponse<C>>
+  : (request: ApiRequest<C>) => Promise<ApiResponse<C>>;
 
 /**
  * The functions the preload exposes as `window.lamina` in the desktop app, one per channel. The
  * renderer's transport in browser mode implements the same interface over HTTP.
  */
 export interface LaminaApi {
-  appInfo(): Promise<AppInfo>;
+  appInfo: ApiCall<'app:info'>;
+  databaseStatus: ApiCall<'database:status'>;
+  materials: {
+    list: ApiCall<'materials:list'>;
+    get: ApiCall<'materials:get'>;
+    create: ApiCall<'materials:create'>;
+    update: ApiCall<'materials:update'>;
+    duplicate: ApiCall<'materials:duplicate'>;
+    remove: ApiCall<'materials:remove'>;
+    usage: ApiCall<'materials:usage'>;
+    importCsv: ApiCall<'materials:import-csv'>;
+    exportCsv: ApiCall<'materials:export-csv'>;
+    fitConductivity: ApiCall<'materials:fit-conductivity'>;
+  };
+  projects: {
+    list: ApiCall<'projects:list'>;
+    listRecycleBin: ApiCall<'projects:list-recycle-bin'>;
+    open: ApiCall<'projects:open'>;
+    create: ApiCall<'projects:create'>;
+    update: ApiCall<'projects:update'>;
+    rename: ApiCall<'projects:rename'>;
+    duplicate: ApiCall<'projects:duplicate'>;
+    remove: ApiCall<'projects:remove'>;
+    restore: ApiCall<'projects:restore'>;
+    emptyRecycleBin: ApiCall<'projects:empty-recycle-bin'>;
+    addCase: ApiCall<'projects:add-case'>;
+    updateCase: ApiCall<'projects:update-case'>;
+    removeCase: ApiCall<'projects:remove-case'>;
+    exportProject: ApiCall<'projects:export-file'>;
+    importProject: ApiCall<'projects:import-file'>;
+  };
+  backups: {
+    list: ApiCall<'backups:list'>;
+    create: ApiCall<'backups:create'>;
+    restore: ApiCall<'backups:restore'>;
+  };
 }
 
 /**
  * What an IPC handler returns: the response, or the one-sentence refusal. Handlers return this
  * envelope instead of throwing, because Electron rewrites thrown errors' messages in transit.
  */
-export type IpcReply<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly error: string };
+export type IpcReply<T> =
+  | { readonly ok: true; readonly value: T }
+  | { readonly ok: false; readonly error: string; readonly field?: string };

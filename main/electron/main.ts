@@ -8,8 +8,10 @@ import { app, BrowserWindow, ipcMain, session, type IpcMainInvokeEvent, type Web
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import type { IpcReply } from '../../app/api/contract.js';
-import { API_CHANNELS, InvalidRequestError, createOperations } from '../server/operations.js';
+import { API_CHANNELS, createOperations, describeFailure } from '../server/operations.js';
 import { PRODUCT_NAME } from '../server/app-identity.js';
+import { LibraryHost } from '../server/library-host.js';
+import { DATABASE_FILE_NAME } from '../storage/database-path.js';
 import { CONTENT_SECURITY_POLICY } from '../server/security-policy.js';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
@@ -51,20 +53,49 @@ function isTrustedSender(event: IpcMainInvokeEvent): boolean {
   return url.split('#', 1)[0] === RENDERER_URL;
 }
 
-function registerIpcHandlers(): void {
-  const operations = createOperations({ name: PRODUCT_NAME, version: app.getVersion() });
+/**
+ * The library lives in Electron's userData folder. Opened once; a damaged file is reported to the
+ * page (database:status) with the backups it can restore, and never overwritten. The built-in
+ * materials are read from the app's own data folder (not relative to the compiled file).
+ */
+function openLibrary(): Promise<LibraryHost> {
+  return LibraryHost.open(path.join(app.getPath('userData'), DATABASE_FILE_NAME), {
+    seedFolder: path.join(app.getAppPath(), 'data', 'materials'),
+  });
+}
+
+/** One ipcMain.handle per channel; the handler's own checks are in operations.ts. */
+function registerIpcHandlers(library: LibraryHost): void {
+  const operations = createOperations({ name: PRODUCT_NAME, version: app.getVersion(), library });
   for (const channel of API_CHANNELS) {
     ipcMain.handle(channel, async (event, request: unknown): Promise<IpcReply<unknown>> => {
       if (!isTrustedSender(event)) return { ok: false, error: 'Requests from pages other than Lamina are refused.' };
       try {
         return { ok: true, value: await operations[channel](request) };
       } catch (error) {
-        if (error instanceof InvalidRequestError) return { ok: false, error: error.message };
+        const failure = describeFailure(error);
+        if (failure) return { ok: false, ...failure.body };
         console.error(`Lamina: ${channel} failed:`, error);
         return { ok: false, error: `The ${channel} operation failed; see the terminal for details.` };
       }
     });
   }
+}
+
+/** Close the database before the process ends, once pending writes and backups are done. */
+function closeLibraryOnQuit(library: LibraryHost): void {
+  let closed = false;
+  app.on('will-quit', (event) => {
+    if (closed) return;
+    event.preventDefault();
+    library.close().then(
+      () => undefined,
+      (error: unknown) => console.error('Lamina: closing the library failed:', error),
+    ).finally(() => {
+      closed = true;
+      app.quit();
+    });
+  });
 }
 
 function createMainWindow(): BrowserWindow {
@@ -97,18 +128,20 @@ function createMainWindow(): BrowserWindow {
 app.on('web-contents-created', (_event, contents) => refuseLeavingTheApp(contents));
 app.on('window-all-closed', () => app.quit());
 
-app.whenReady().then(
-  () => {
+app
+  .whenReady()
+  .then(async () => {
     lockDownSession();
-    registerIpcHandlers();
+    const library = await openLibrary(); // also starts the daily backup timer
+    closeLibraryOnQuit(library);
+    registerIpcHandlers(library);
     createMainWindow();
     // macOS: re-create the window when the dock icon is clicked and none is open.
     app.on('activate', () => {
       if (BrowserWindow.getAllWindows().length === 0) createMainWindow();
     });
-  },
-  (error: unknown) => {
+  })
+  .catch((error: unknown) => {
     console.error('Lamina could not start:', error);
     app.exit(1);
-  },
-);
+  });

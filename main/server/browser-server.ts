@@ -12,12 +12,15 @@ import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { mimeTypeFor } from './mime-types.js';
 import { SECURITY_HEADERS } from './security-policy.js';
-import { API_CHANNELS, InvalidRequestError, createOperations, httpPathFor, type OperationHandlers } from './operations.js';
+import { fromWireJson, toWireJson } from '../../app/api/wire-json.js';
+import { API_CHANNELS, MAX_TEXT_REQUEST, createOperations, describeFailure, httpPathFor, type OperationHandlers } from './operations.js';
 import { PROJECT_ROOT, readAppIdentity } from './app-identity.js';
+import { LibraryHost } from './library-host.js';
 
 export const DEFAULT_PORT = 5178;
 const LOOPBACK_HOSTS = new Set(['127.0.0.1', '::1']);
-const MAX_BODY_BYTES = 1 << 20;
+/** Room for the largest CSV or project file an operation accepts, plus JSON escaping. */
+const MAX_BODY_BYTES = 2 * MAX_TEXT_REQUEST;
 
 export interface BrowserServerOptions {
   /** TCP port; 0 picks a free one. Default 5178. */
@@ -26,6 +29,16 @@ export interface BrowserServerOptions {
   readonly host?: string;
   /** Folder with the built renderer. Default build/renderer in the project root. */
   readonly root?: string;
+  /**
+   * The library database file, opened once at start (the caller resolves --db, LAMINA_DB and the
+   * default path: main/storage/database-path.ts). A damaged file does not stop the server: the
+   * page reports it and offers to restore a backup.
+   */
+  readonly databasePath: string;
+  /** Folder of the built-in materials CSV files (default data/materials). */
+  readonly seedFolder?: string;
+  /** Run the daily backup while serving (default true). */
+  readonly dailyBackups?: boolean;
 }
 
 export interface BrowserServer {
@@ -33,10 +46,12 @@ export interface BrowserServer {
   readonly url: string;
   readonly host: string;
   readonly port: number;
+  readonly library: LibraryHost;
+  /** Stops serving and closes the library database. */
   close(): Promise<void>;
 }
 
-export async function startBrowserServer(options: BrowserServerOptions = {}): Promise<BrowserServer> {
+export async function startBrowserServer(options: BrowserServerOptions): Promise<BrowserServer> {
   const host = options.host ?? '127.0.0.1';
   if (!LOOPBACK_HOSTS.has(host)) {
     throw new Error(`The host must be a loopback address (127.0.0.1 or ::1), not "${host}"; Lamina never listens on a network.`);
@@ -46,7 +61,11 @@ export async function startBrowserServer(options: BrowserServerOptions = {}): Pr
     throw new Error(`The port must be a whole number from 0 to 65535 (0 picks a free port), not "${port}".`);
   }
   const root = await realpath(path.resolve(options.root ?? path.join(PROJECT_ROOT, 'build', 'renderer')));
-  const operations = createOperations(readAppIdentity());
+  const library = await LibraryHost.open(options.databasePath, {
+    ...(options.seedFolder ? { seedFolder: options.seedFolder } : {}),
+    ...(options.dailyBackups === undefined ? {} : { dailyBackups: options.dailyBackups }),
+  });
+  const operations = createOperations({ ...readAppIdentity(), library });
   const routes = new Map(API_CHANNELS.map((channel) => [httpPathFor(channel), channel] as const));
 
   const server = http.createServer((request, response) => {
@@ -73,13 +92,18 @@ export async function startBrowserServer(options: BrowserServerOptions = {}): Pr
     return serveFile(root, request, response);
   }
 
-  await new Promise<void>((resolve, reject) => {
-    server.once('error', reject);
-    server.listen(port, host, () => {
-      server.off('error', reject);
-      resolve();
+  try {
+    await new Promise<void>((resolve, reject) => {
+      server.once('error', reject);
+      server.listen(port, host, () => {
+        server.off('error', reject);
+        resolve();
+      });
     });
-  });
+  } catch (error) {
+    await library.close();
+    throw error;
+  }
 
   const address = server.address() as AddressInfo;
   const urlHost = address.family === 'IPv6' ? `[${address.address}]` : address.address;
@@ -87,11 +111,14 @@ export async function startBrowserServer(options: BrowserServerOptions = {}): Pr
     url: `http://${urlHost}:${address.port}/`,
     host: address.address,
     port: address.port,
-    close: () =>
-      new Promise<void>((resolve, reject) => {
+    library,
+    close: async () => {
+      await new Promise<void>((resolve, reject) => {
         server.close((error) => (error ? reject(error) : resolve()));
         server.closeAllConnections();
-      }),
+      });
+      await library.close();
+    },
   };
 }
 
@@ -130,7 +157,7 @@ async function handleApi(
       return;
     }
     try {
-      input = JSON.parse(body);
+      input = fromWireJson(body);
     } catch {
       sendJson(response, 400, { error: 'The request body is not valid JSON.' });
       return;
@@ -139,8 +166,9 @@ async function handleApi(
   try {
     sendJson(response, 200, await operations[channel](input));
   } catch (error) {
-    if (error instanceof InvalidRequestError) sendJson(response, 400, { error: error.message });
-    else throw error;
+    const failure = describeFailure(error);
+    if (!failure) throw error;
+    sendJson(response, failure.status, failure.body);
   }
 }
 
@@ -204,7 +232,7 @@ function isInside(root: string, candidate: string): boolean {
 }
 
 function sendJson(response: http.ServerResponse, status: number, value: unknown): void {
-  const body = JSON.stringify(value);
+  const body = toWireJson(value);
   response.writeHead(status, {
     ...SECURITY_HEADERS,
     'Content-Type': 'application/json; charset=utf-8',

@@ -1,23 +1,50 @@
 /**
  * The operations behind the API contract (app/api/contract.ts): one handler per channel, each of
- * which validates its input before doing anything. The Electron IPC handlers and the browser-mode
- * HTTP endpoints both call these, so the two transports behave the same.
+ * which checks its request (shape, types, ranges, lengths, ids) before calling the service layer.
+ * The Electron IPC handlers and the browser-mode HTTP endpoints both call these, so the two
+ * transports behave the same. A refusal is one sentence naming the field; describeFailure turns
+ * any expected failure into the contract's ApiError.
  */
-import type { ApiChannel, ApiResponse } from '../../app/api/contract.js';
+import type { ApiChannel, ApiChannels, ApiError, ApiResponse } from '../../app/api/contract.js';
+import { MATERIAL_LIMITS } from '../../app/api/material-limits.js';
+import { MATERIAL_CATEGORIES, MATERIAL_ORIGINS, type MaterialFilter } from '../../app/api/material-types.js';
+import { PROJECT_FIELDS } from '../../app/api/project-types.js';
+import { fitConductivityCurve } from '../services/conductivity-fit.js';
+import { validateMaterialInput } from '../services/material-validation.js';
+import { projectFileFromJson, projectFileToJson } from '../services/project-file.js';
+import { PROJECT_LIMITS } from '../services/project-validation.js';
+import { InvalidInputError, NotFoundError, RefusedError } from '../services/service-errors.js';
+import { isPlainObject, optionalText, rejectUnknownKeys, requireId, requireOneOf, requireText } from '../services/validate.js';
+import { StorageError } from '../storage/storage-error.js';
+import { LibraryUnavailableError, type LibraryHost } from './library-host.js';
 
 /** Input that a handler refuses; the message is one sentence naming the field and what is allowed. */
 export class InvalidRequestError extends Error {
   override name = 'InvalidRequestError';
+  constructor(message: string, readonly field?: string) {
+    super(message);
+  }
 }
 
 export type OperationHandlers = {
   readonly [C in ApiChannel]: (request: unknown) => Promise<ApiResponse<C>>;
 };
 
-/** Every channel, for loops that register handlers or routes. */
-export const API_CHANNELS: readonly ApiChannel[] = ['app:info'];
+/** Every channel, for loops that register handlers or routes (checked against the contract below). */
+export const API_CHANNELS = [
+  'app:info', 'database:status',
+  'materials:list', 'materials:get', 'materials:create', 'materials:update', 'materials:duplicate', 'materials:remove',
+  'materials:usage', 'materials:import-csv', 'materials:export-csv', 'materials:fit-conductivity',
+  'projects:list', 'projects:list-recycle-bin', 'projects:open', 'projects:create', 'projects:update', 'projects:rename',
+  'projects:duplicate', 'projects:remove', 'projects:restore', 'projects:empty-recycle-bin', 'projects:add-case',
+  'projects:update-case', 'projects:remove-case', 'projects:export-file', 'projects:import-file',
+  'backups:list', 'backups:create', 'backups:restore',
+] as const satisfies readonly ApiChannel[];
+// A channel in the contract but missing from the list above fails to compile here.
+const everyChannelListed: Exclude<ApiChannel, (typeof API_CHANNELS)[number]> extends never ? true : never = true;
+void everyChannelListed;
 
-/** The browser-mode path that mirrors a channel: 'app:info' -> '/api/app-info'. */
+/** The browser-mode path that mirrors a channel: 'materials:list' -> '/api/materials-list'. */
 export function httpPathFor(channel: ApiChannel): string {
   return `/api/${channel.replace(/:/g, '-')}`;
 }
@@ -25,25 +52,219 @@ export function httpPathFor(channel: ApiChannel): string {
 export interface OperationContext {
   readonly name: string;
   readonly version: string;
+  /** The library; absent only where no database is wanted (then data channels refuse politely). */
+  readonly library?: LibraryHost;
 }
 
+/** Largest CSV or project file text accepted in one request (the HTTP body limit is set to match). */
+export const MAX_TEXT_REQUEST = 20_000_000;
+
 export function createOperations(context: OperationContext): OperationHandlers {
+  const host = (): LibraryHost => {
+    if (!context.library) throw new LibraryUnavailableError('No library database is open in this program.');
+    return context.library;
+  };
+  const lib = () => host().library();
+
   return {
     'app:info': async (request) => {
       requireNoFields('app:info', request);
       return { name: context.name, version: context.version };
     },
+    'database:status': async (request) => {
+      requireNoFields('database:status', request);
+      return host().status();
+    },
+
+    'materials:list': async (request) => lib().materials.list(materialFilter('materials:list', request)),
+    'materials:get': async (request) => {
+      const r = fields('materials:get', request, ['id']);
+      return lib().materials.get(requireId(r['id'], 'id'));
+    },
+    'materials:create': async (request) => {
+      const r = fields('materials:create', request, ['material']);
+      return lib().materials.create(validateMaterialInput(r['material']));
+    },
+    'materials:update': async (request) => {
+      const r = fields('materials:update', request, ['id', 'material']);
+      const id = requireId(r['id'], 'id');
+      return lib().materials.update(id, validateMaterialInput(r['material']));
+    },
+    'materials:duplicate': async (request) => {
+      const r = fields('materials:duplicate', request, ['id', 'name']);
+      const id = requireId(r['id'], 'id');
+      const name = r['name'] === undefined ? undefined : requireText(r['name'], 'name', { min: 1, max: MATERIAL_LIMITS.name });
+      return lib().materials.duplicate(id, name);
+    },
+    'materials:remove': async (request) => {
+      const r = fields('materials:remove', request, ['id', 'replaceWith']);
+      const id = requireId(r['id'], 'id');
+      const replaceWith = r['replaceWith'] === undefined ? undefined : requireId(r['replaceWith'], 'replaceWith');
+      return lib().materials.remove(id, replaceWith === undefined ? {} : { replaceWith });
+    },
+    'materials:usage': async (request) => {
+      const r = fields('materials:usage', request, ['id']);
+      return lib().materials.usage(requireId(r['id'], 'id'));
+    },
+    'materials:import-csv': async (request) => {
+      const r = fields('materials:import-csv', request, ['csv']);
+      return lib().materials.importCsv(requireLongText(r['csv'], 'csv'));
+    },
+    'materials:export-csv': async (request) => ({ csv: lib().materials.exportCsv(materialFilter('materials:export-csv', request)) }),
+    'materials:fit-conductivity': async (request) => {
+      const r = fields('materials:fit-conductivity', request, ['points', 'degree', 'minServiceTemperature', 'maxServiceTemperature']);
+      // fitConductivityCurve checks each point, the degree and the range before it computes anything.
+      return fitConductivityCurve(r['points'], {
+        degree: r['degree'] as number,
+        minServiceTemperature: r['minServiceTemperature'] as number,
+        maxServiceTemperature: r['maxServiceTemperature'] as number,
+      });
+    },
+
+    'projects:list': async (request) => {
+      requireNoFields('projects:list', request);
+      return lib().projects.list();
+    },
+    'projects:list-recycle-bin': async (request) => {
+      requireNoFields('projects:list-recycle-bin', request);
+      return lib().projects.listRecycleBin();
+    },
+    'projects:open': async (request) => lib().projects.open(requireId(fields('projects:open', request, ['id'])['id'], 'id')),
+    'projects:create': async (request) => {
+      const r = fields('projects:create', request, ['fields']);
+      return lib().projects.create(projectFields(r['fields'], 'fields'));
+    },
+    'projects:update': async (request) => {
+      const r = fields('projects:update', request, ['id', 'changes']);
+      const id = requireId(r['id'], 'id');
+      return lib().projects.update(id, projectFields(r['changes'], 'changes'));
+    },
+    'projects:rename': async (request) => {
+      const r = fields('projects:rename', request, ['id', 'name']);
+      const id = requireId(r['id'], 'id');
+      return lib().projects.rename(id, requireText(r['name'], 'name', { min: 1, max: PROJECT_LIMITS.name }));
+    },
+    'projects:duplicate': async (request) => {
+      const r = fields('projects:duplicate', request, ['id', 'name']);
+      const id = requireId(r['id'], 'id');
+      const name = r['name'] === undefined ? undefined : requireText(r['name'], 'name', { min: 1, max: PROJECT_LIMITS.name });
+      return lib().projects.duplicate(id, name);
+    },
+    'projects:remove': async (request) => {
+      lib().projects.remove(requireId(fields('projects:remove', request, ['id'])['id'], 'id'));
+      return null;
+    },
+    'projects:restore': async (request) => lib().projects.restore(requireId(fields('projects:restore', request, ['id'])['id'], 'id')),
+    'projects:empty-recycle-bin': async (request) => {
+      requireNoFields('projects:empty-recycle-bin', request);
+      return { deleted: lib().projects.emptyRecycleBin() };
+    },
+    'projects:add-case': async (request) => {
+      const r = fields('projects:add-case', request, ['projectId', 'draft']);
+      const projectId = requireId(r['projectId'], 'projectId');
+      if (!isPlainObject(r['draft'])) throw new InvalidRequestError('draft must be an object with a name and inputs.', 'draft');
+      return lib().projects.addCase(projectId, r['draft']);
+    },
+    'projects:update-case': async (request) => {
+      const r = fields('projects:update-case', request, ['caseId', 'changes']);
+      const caseId = requireId(r['caseId'], 'caseId');
+      if (!isPlainObject(r['changes'])) throw new InvalidRequestError('changes must be an object with a name, inputs or both.', 'changes');
+      return lib().projects.updateCase(caseId, r['changes']);
+    },
+    'projects:remove-case': async (request) => {
+      lib().projects.removeCase(requireId(fields('projects:remove-case', request, ['caseId'])['caseId'], 'caseId'));
+      return null;
+    },
+    'projects:export-file': async (request) => {
+      const id = requireId(fields('projects:export-file', request, ['id'])['id'], 'id');
+      const file = lib().projects.exportProject(id);
+      return { fileName: projectFileName(file.project.name), text: projectFileToJson(file) };
+    },
+    'projects:import-file': async (request) => {
+      const r = fields('projects:import-file', request, ['text']);
+      return lib().projects.importProject(projectFileFromJson(requireLongText(r['text'], 'text')));
+    },
+
+    'backups:list': async (request) => {
+      requireNoFields('backups:list', request);
+      return host().backups();
+    },
+    'backups:create': async (request) => {
+      requireNoFields('backups:create', request);
+      return host().withLibrary((services) => services.backups.create());
+    },
+    'backups:restore': async (request) => {
+      const r = fields('backups:restore', request, ['file']);
+      return host().restore(requireText(r['file'], 'file', { min: 1, max: 4096 }));
+    },
   };
+}
+
+/** HTTP status and ApiError for a failure the user can act on; undefined for a bug (logged, not shown). */
+export function describeFailure(error: unknown): { status: number; body: ApiError } | undefined {
+  if (error instanceof InvalidRequestError) return { status: 400, body: withField(error.message, error.field) };
+  if (error instanceof InvalidInputError) return { status: 400, body: withField(error.message, error.field) };
+  if (error instanceof NotFoundError) return { status: 404, body: { error: error.message } };
+  if (error instanceof RefusedError) return { status: 409, body: { error: error.message } };
+  if (error instanceof LibraryUnavailableError) return { status: 409, body: { error: error.message } };
+  if (error instanceof StorageError) return { status: 503, body: { error: error.message } };
+  return undefined;
+}
+
+function withField(error: string, field: string | undefined): ApiError {
+  return field ? { error, field } : { error };
 }
 
 /** A request with no parameters may arrive as undefined, null or {}; anything else is refused. */
 function requireNoFields(channel: ApiChannel, request: unknown): void {
-  if (request === undefined || request === null) return;
-  if (typeof request !== 'object' || Array.isArray(request)) {
-    throw new InvalidRequestError(`The ${channel} request must be an empty JSON object.`);
+  fields(channel, request, []);
+}
+
+/** The request as an object with only the named fields (undefined or null count as {}). */
+function fields(channel: keyof ApiChannels, request: unknown, known: readonly string[]): Record<string, unknown> {
+  if (request === undefined || request === null) return {};
+  if (!isPlainObject(request)) {
+    throw new InvalidRequestError(
+      known.length ? `The ${channel} request must be a JSON object with ${known.join(', ')}.` : `The ${channel} request must be an empty JSON object.`,
+    );
   }
   const keys = Object.keys(request);
-  if (keys.length > 0) {
-    throw new InvalidRequestError(`The ${channel} request takes no fields, but it was sent "${keys[0]}".`);
+  const unknown = keys.find((key) => !known.includes(key));
+  if (unknown !== undefined) {
+    throw new InvalidRequestError(
+      known.length === 0
+        ? `The ${channel} request takes no fields, but it was sent "${unknown}".`
+        : `The ${channel} request has no field "${unknown}" (allowed: ${known.join(', ')}).`,
+    );
   }
+  return request;
+}
+
+function materialFilter(channel: ApiChannel, request: unknown): MaterialFilter {
+  const r = fields(channel, request, ['search', 'category', 'origin']);
+  const search = optionalText(r['search'], 'search', 200);
+  return {
+    ...(search ? { search } : {}),
+    ...(r['category'] === undefined || r['category'] === '' ? {} : { category: requireOneOf(r['category'], 'category', MATERIAL_CATEGORIES) }),
+    ...(r['origin'] === undefined ? {} : { origin: requireOneOf(r['origin'], 'origin', MATERIAL_ORIGINS) }),
+  };
+}
+
+/** Project fields are checked in full by the service; here only that they are an object of known fields. */
+function projectFields(value: unknown, field: string): Record<string, unknown> {
+  if (!isPlainObject(value)) throw new InvalidRequestError(`${field} must be an object of project fields.`, field);
+  rejectUnknownKeys(value, field, PROJECT_FIELDS);
+  return value;
+}
+
+function requireLongText(value: unknown, field: string): string {
+  if (typeof value !== 'string') throw new InvalidRequestError(`${field} must be text.`, field);
+  if (value.length > MAX_TEXT_REQUEST) throw new InvalidRequestError(`${field} must be at most ${MAX_TEXT_REQUEST / 1_000_000} MB.`, field);
+  return value;
+}
+
+/** A file name from the project name: letters, digits, dashes and dots only. */
+function projectFileName(projectName: string): string {
+  const stem = projectName.normalize('NFKD').replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'project';
+  return `${stem}.lamina.json`;
 }

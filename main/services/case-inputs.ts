@@ -1,3 +1,4 @@
+import { CASE_KINDS, type CaseInputs, type CaseKind } from '../../app/api/project-types.js';
 import { InvalidInputError } from './service-errors.js';
 import { isPlainObject, requireId, requireNumber } from './validate.js';
 
@@ -9,15 +10,7 @@ import { isPlainObject, requireId, requireNumber } from './validate.js';
  * anywhere in the inputs is a reference to a material and must name one that exists.
  */
 export const CASE_INPUTS_SCHEMA_VERSION = 1;
-export const CASE_KINDS = ['pipe', 'flat', 'wall'] as const;
-export type CaseKind = (typeof CASE_KINDS)[number];
-
-export interface CaseInputs {
-  readonly schemaVersion: number;
-  readonly kind: CaseKind;
-  readonly layers: readonly { readonly materialId: number; readonly thickness: number; readonly [key: string]: unknown }[];
-  readonly [key: string]: unknown;
-}
+export { CASE_KINDS, type CaseInputs, type CaseKind };
 
 const MAX_INPUTS_BYTES = 1_000_000;
 const MAX_LAYERS = 50;

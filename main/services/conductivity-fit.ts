@@ -1,5 +1,5 @@
 import { Matrix, solve } from 'ml-matrix';
-import type { ConductivityModel } from '../../app/fe/conductivity.js';
+import type { ConductivityFit } from '../../app/api/material-types.js';
 import { assertPolynomialPositive, MATERIAL_LIMITS } from './material-validation.js';
 import { InvalidInputError } from './service-errors.js';
 import { requireNumber } from './validate.js';
@@ -12,15 +12,7 @@ import { requireNumber } from './validate.js';
  * have similar size (θ³ at 600 °C would otherwise dwarf the constant column); the coefficients are
  * scaled back exactly afterwards. ml-matrix solves the over-determined system by QR.
  */
-export interface ConductivityFit {
-  readonly model: Extract<ConductivityModel, { kind: 'polynomial' }>;
-  /** Root-mean-square of (fitted − given), W/(m·K). */
-  readonly rmsResidual: number;
-  /** Largest |fitted − given|, W/(m·K). */
-  readonly maxResidual: number;
-  /** Residual per point, in the order given. */
-  readonly residuals: readonly number[];
-}
+export type { ConductivityFit };
 
 export interface FitOptions {
   readonly degree: number;

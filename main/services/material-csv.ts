@@ -1,4 +1,5 @@
 import type { ConductivityModel } from '../../app/fe/conductivity.js';
+import type { CsvProblem } from '../../app/api/material-types.js';
 import { formatCsv, parseCsv, CsvSyntaxError } from '../storage/csv.js';
 import type { Material, MaterialInput } from './material-types.js';
 import { validateMaterialInput } from './material-validation.js';
@@ -23,10 +24,7 @@ export const MATERIAL_CSV_HEADER = [
   'emissivity [-]', 'min service temperature [C]', 'max service temperature [C]', 'source', 'notes',
 ] as const;
 
-export interface CsvProblem {
-  readonly line: number;
-  readonly message: string;
-}
+export type { CsvProblem };
 
 export interface ParsedMaterialRow {
   readonly line: number;

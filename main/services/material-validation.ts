@@ -1,27 +1,13 @@
 import type { ConductivityModel } from '../../app/fe/conductivity.js';
 import { MATERIAL_CATEGORIES, MATERIAL_FIELDS, type MaterialInput } from './material-types.js';
+import { MATERIAL_LIMITS } from '../../app/api/material-limits.js';
 import { polynomialMinimumOn } from './polynomial-minimum.js';
 import { InvalidInputError } from './service-errors.js';
 import {
-  optionalNumber, optionalText, rejectUnknownKeys, requireNumber, requireObject, requireOneOf, requireText, type NumberRange,
+  optionalNumber, optionalText, rejectUnknownKeys, requireNumber, requireObject, requireOneOf, requireText,
 } from './validate.js';
 
-/** Allowed ranges, in SI. Wide enough for every real material, narrow enough to catch a unit slip. */
-export const MATERIAL_LIMITS = {
-  name: 120,
-  source: 500,
-  notes: 4000,
-  conductivity: { min: 0, minExclusive: true, max: 1000, unit: 'W/(m·K)' },
-  density: { min: 0, minExclusive: true, max: 25000, unit: 'kg/m³' },
-  specificHeat: { min: 0, minExclusive: true, max: 20000, unit: 'J/(kg·K)' },
-  vapourResistanceFactor: { min: 1, max: 1e7, unit: '(or vapour-tight)' },
-  equivalentAirLayerThickness: { min: 0, max: 10000, unit: 'm' },
-  emissivity: { min: 0, minExclusive: true, max: 1, unit: '' },
-  temperature: { min: -273.15, max: 2000, unit: '°C' },
-  polynomialCoefficient: { min: -1000, max: 1000, unit: '' },
-  maxPolynomialTerms: 6,
-  maxTablePoints: 100,
-} as const satisfies Record<string, number | NumberRange>;
+export { MATERIAL_LIMITS };
 
 export function validateConductivity(value: unknown, field = 'conductivity'): ConductivityModel {
   const model = requireObject(value, field);

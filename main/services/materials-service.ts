@@ -1,6 +1,7 @@
 import { materialIdsOf, remapMaterialIds, validateCaseInputs } from './case-inputs.js';
 import { inWriteTransaction, nowIso, type DatabaseContext } from './database-context.js';
-import { formatMaterialsCsv, parseMaterialsCsv, type CsvProblem } from './material-csv.js';
+import type { CsvImportResult } from '../../app/api/material-types.js';
+import { formatMaterialsCsv, parseMaterialsCsv } from './material-csv.js';
 import { materialFromRow, materialInputOf, materialParameters, type MaterialRow } from './material-rows.js';
 import {
   MATERIAL_CATEGORIES, type Material, type MaterialFilter, type MaterialInput, type MaterialUsage,
@@ -9,9 +10,7 @@ import { MATERIAL_LIMITS, validateMaterialInput } from './material-validation.js
 import { InvalidInputError, NotFoundError, RefusedError } from './service-errors.js';
 import { isPlainObject, optionalText, rejectUnknownKeys, requireId, requireOneOf, requireText } from './validate.js';
 
-export type CsvImportResult =
-  | { readonly ok: true; readonly created: readonly Material[] }
-  | { readonly ok: false; readonly problems: readonly CsvProblem[] };
+export type { CsvImportResult };
 
 /**
  * The materials library. Built-in materials (from data/materials) are read-only; a user

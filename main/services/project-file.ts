@@ -1,3 +1,4 @@
+import type { ProjectFile } from '../../app/api/project-types.js';
 import { materialReferences, validateCaseInputs, type CaseInputs } from './case-inputs.js';
 import type { MaterialInput } from './material-types.js';
 import { validateMaterialInput } from './material-validation.js';
@@ -14,14 +15,7 @@ import { rejectUnknownKeys, requireId, requireObject } from './validate.js';
 export const PROJECT_FILE_FORMAT = 'lamina-project';
 export const PROJECT_FILE_VERSION = 1;
 
-export interface ProjectFile {
-  readonly format: typeof PROJECT_FILE_FORMAT;
-  readonly formatVersion: number;
-  readonly exportedAt: string;
-  readonly project: ProjectFields;
-  readonly materials: readonly ({ readonly fileId: number } & MaterialInput)[];
-  readonly cases: readonly { readonly name: string; readonly inputs: CaseInputs }[];
-}
+export type { ProjectFile };
 
 export interface CheckedProjectFile {
   readonly project: ProjectFields;

@@ -1,3 +1,4 @@
+import { describeRange, type NumberRange } from '../../app/api/material-limits.js';
 import { InvalidInputError } from './service-errors.js';
 
 /**
@@ -35,20 +36,7 @@ export function optionalText(value: unknown, field: string, max: number): string
   return value === undefined || value === null ? '' : requireText(value, field, { max });
 }
 
-export interface NumberRange {
-  readonly min: number;
-  readonly max: number;
-  /** When true the bound itself is not allowed. */
-  readonly minExclusive?: boolean;
-  readonly maxExclusive?: boolean;
-  readonly unit: string;
-}
-
-export function describeRange(range: NumberRange): string {
-  const low = `${range.minExclusive ? 'more than' : 'at least'} ${range.min}`;
-  const high = `${range.maxExclusive ? 'less than' : 'at most'} ${range.max}`;
-  return `${low} and ${high}${range.unit ? ' ' + range.unit : ''}`;
-}
+export { describeRange, type NumberRange };
 
 export function requireNumber(value: unknown, field: string, range: NumberRange): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {

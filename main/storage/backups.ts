@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import Database from 'better-sqlite3';
+import type { BackupInfo } from '../../app/api/backup-types.js';
 import { inspectDatabaseFile } from './inspect-file.js';
 import { LATEST_SCHEMA_VERSION, newerSchemaError, schemaVersionOf } from './migrations.js';
 import { StorageError } from './storage-error.js';
@@ -13,12 +14,7 @@ import { StorageError } from './storage-error.js';
  */
 export type BackupReason = 'pre-migration' | 'daily' | 'manual' | 'pre-restore';
 
-export interface BackupInfo {
-  readonly file: string;
-  readonly reason: string;
-  readonly createdAt: string;
-  readonly sizeBytes: number;
-}
+export type { BackupInfo };
 
 export const DEFAULT_BACKUPS_KEPT = 10;
 const DAY_MS = 24 * 60 * 60 * 1000;

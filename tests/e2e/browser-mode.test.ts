@@ -4,7 +4,8 @@
  * formula gives it, refuse bad input in one sentence, and run under the strict CSP.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { Browser, Page } from 'playwright-core';
@@ -18,10 +19,12 @@ const resultsFolder = path.join(projectRoot, 'test-results');
 
 let server: BrowserServer;
 let browser: Browser;
+let databaseFolder: string;
 
 beforeAll(async () => {
   await ensureRendererBuilt(projectRoot);
-  server = await startBrowserServer({ port: 0 });
+  databaseFolder = mkdtempSync(path.join(tmpdir(), 'lamina-browser-mode-'));
+  server = await startBrowserServer({ port: 0, databasePath: path.join(databaseFolder, 'lamina.sqlite'), dailyBackups: false });
   browser = await launchChromium();
   mkdirSync(resultsFolder, { recursive: true });
 });
@@ -29,6 +32,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await browser?.close();
   await server?.close();
+  rmSync(databaseFolder, { recursive: true, force: true });
 });
 
 /** A fresh page that records console errors and failed requests (a CSP refusal shows up as both). */

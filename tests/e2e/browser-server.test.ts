@@ -49,7 +49,7 @@ beforeAll(async () => {
   writeFileSync(path.join(site, 'assets', 'notes.xyz'), 'unknown type');
   writeFileSync(path.join(folder, 'secret.txt'), 'outside the served folder');
   symlinkSync(path.join(folder, 'secret.txt'), path.join(site, 'link.txt'));
-  server = await startBrowserServer({ port: 0, root: site });
+  server = await startBrowserServer({ port: 0, root: site, databasePath: path.join(folder, 'db', 'lamina.sqlite'), dailyBackups: false });
 });
 
 afterAll(async () => {
@@ -60,7 +60,7 @@ afterAll(async () => {
 describe('browser-mode server', () => {
   it('binds 127.0.0.1 and refuses to listen on a network address', async () => {
     expect(server.host).toBe('127.0.0.1');
-    await expect(startBrowserServer({ port: 0, host: '0.0.0.0', root: folder })).rejects.toThrow(
+    await expect(startBrowserServer({ port: 0, host: '0.0.0.0', root: folder, databasePath: path.join(folder, 'unused.sqlite') })).rejects.toThrow(
       'The host must be a loopback address (127.0.0.1 or ::1), not "0.0.0.0"; Lamina never listens on a network.',
     );
   });

@@ -1,0 +1,44 @@
+/**
+ * The allowed range of every material field, in SI. One table for the storage checks
+ * (main/services/material-validation.ts) and the library form in the renderer, so both refuse the
+ * same values with the same ranges. Wide enough for every real material, narrow enough to catch a
+ * unit slip.
+ */
+export interface NumberRange {
+  readonly min: number;
+  readonly max: number;
+  /** When true the bound itself is not allowed. */
+  readonly minExclusive?: boolean;
+  readonly maxExclusive?: boolean;
+  readonly unit: string;
+}
+
+export const MATERIAL_LIMITS = {
+  name: 120,
+  source: 500,
+  notes: 4000,
+  conductivity: { min: 0, minExclusive: true, max: 1000, unit: 'W/(m·K)' },
+  density: { min: 0, minExclusive: true, max: 25000, unit: 'kg/m³' },
+  specificHeat: { min: 0, minExclusive: true, max: 20000, unit: 'J/(kg·K)' },
+  vapourResistanceFactor: { min: 1, max: 1e7, unit: '(or vapour-tight)' },
+  equivalentAirLayerThickness: { min: 0, max: 10000, unit: 'm' },
+  emissivity: { min: 0, minExclusive: true, max: 1, unit: '' },
+  temperature: { min: -273.15, max: 2000, unit: '°C' },
+  polynomialCoefficient: { min: -1000, max: 1000, unit: '' },
+  maxPolynomialTerms: 6,
+  maxTablePoints: 100,
+} as const satisfies Record<string, number | NumberRange>;
+
+/** "at least 1 and at most 1000 W/(m·K)", the wording every range message uses. */
+export function describeRange(range: NumberRange): string {
+  const low = `${range.minExclusive ? 'more than' : 'at least'} ${range.min}`;
+  const high = `${range.maxExclusive ? 'less than' : 'at most'} ${range.max}`;
+  return `${low} and ${high}${range.unit ? ' ' + range.unit : ''}`;
+}
+
+export function isInRange(value: number, range: NumberRange): boolean {
+  if (!Number.isFinite(value)) return false;
+  const tooLow = range.minExclusive ? value <= range.min : value < range.min;
+  const tooHigh = range.maxExclusive ? value >= range.max : value > range.max;
+  return !tooLow && !tooHigh;
+}
