@@ -4,25 +4,16 @@
  * them. `null` means "not given"; a vapour-tight material has vapourResistanceFactor = Infinity.
  */
 import type { ConductivityModel } from '../fe/conductivity.js';
-import { MATERIAL_CATEGORIES, type MaterialCategory } from '../materials/material-properties.js';
+import { MATERIAL_CATEGORIES, type MaterialCategory, type MaterialProperties } from '../materials/material-properties.js';
 
 export { MATERIAL_CATEGORIES, type MaterialCategory };
 export type { ConductivityModel };
 
-/** The editable content of a material. */
-export interface MaterialInput {
-  readonly name: string;
-  readonly category: MaterialCategory;
-  readonly conductivity: ConductivityModel;
-  readonly density: number | null;
-  readonly specificHeat: number | null;
-  /** μ, dimensionless (1 for still air); Infinity for vapour-tight materials (metal, glass). */
-  readonly vapourResistanceFactor: number | null;
-  /** s_d in m, for membranes whose thickness is not modelled. */
-  readonly equivalentAirLayerThickness: number | null;
-  readonly emissivity: number | null;
-  readonly minServiceTemperature: number | null;
-  readonly maxServiceTemperature: number | null;
+/**
+ * The editable content of a material: its physical properties (the same fields the calculations
+ * take) plus a required source and notes.
+ */
+export interface MaterialInput extends MaterialProperties {
   readonly source: string;
   readonly notes: string;
 }
