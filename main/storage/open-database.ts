@@ -33,19 +33,19 @@ export interface OpenOptions {
 export async function openDatabase(filePath: string, options: OpenOptions = {}): Promise<OpenedDatabase> {
   const absolute = path.resolve(filePath);
   const folder = path.dirname(absolute);
-  const exists = fs.existsSync(absolute);
-  if (exists) {
-    inspectDatabaseFile(absolute); // bytes only: a foreign or truncated file is named as such even in a read-only folder
-    assertWritable(absolute, folder, true);
-    verifyDatabaseFile(absolute);
-  } else {
+  let created = false;
+  if (!fs.existsSync(absolute)) {
     try {
       fs.mkdirSync(folder, { recursive: true });
     } catch (error) {
       throw new StorageError('read-only', `Lamina cannot create the folder ${folder} for its database (${(error as NodeJS.ErrnoException).code}). Choose another location with --db or LAMINA_DB.`, { cause: error });
     }
+    assertWritable(absolute, folder, false);
+    created = createDatabaseAtomically(absolute, options);
   }
-  if (!exists) assertWritable(absolute, folder, false);
+  inspectDatabaseFile(absolute); // bytes only: a foreign or truncated file is named as such even in a read-only folder
+  assertWritable(absolute, folder, true);
+  verifyDatabaseFile(absolute);
 
   let db: Database.Database;
   try {
@@ -62,11 +62,43 @@ export async function openDatabase(filePath: string, options: OpenOptions = {}):
     if (found > 0 && found < LATEST_SCHEMA_VERSION) {
       preMigrationBackup = (await createBackup(db, absolute, 'pre-migration', { keep: options.backupsKept })).file;
     }
-    const migratedFrom = found < LATEST_SCHEMA_VERSION ? migrate(db, absolute) : found;
+    const migratedFrom = created ? 0 : found < LATEST_SCHEMA_VERSION ? migrate(db, absolute) : found;
     return preMigrationBackup ? { db, path: absolute, migratedFrom, preMigrationBackup } : { db, path: absolute, migratedFrom };
   } catch (error) {
     db.close();
     throw describeWriteFailure(error, absolute);
+  }
+}
+
+/**
+ * A new database is built complete (schema at the latest version) in a private file beside the
+ * target and then linked into place, which fails if the name exists. So another process starting
+ * at the same moment sees either no file or a whole database, never the empty file SQLite leaves
+ * between creating a file and its first write (which would rightly be refused as truncated).
+ */
+function createDatabaseAtomically(target: string, options: OpenOptions): boolean {
+  const temporary = path.join(path.dirname(target), `.${path.basename(target)}.new-${process.pid}-${Date.now()}`);
+  try {
+    const db = new Database(temporary, { timeout: options.busyTimeoutMs ?? 10_000 });
+    try {
+      db.pragma('journal_mode = WAL');
+      db.pragma('synchronous = FULL');
+      db.pragma('foreign_keys = ON');
+      migrate(db, temporary);
+    } finally {
+      db.close(); // checkpoints the WAL into the file and removes it
+    }
+    try {
+      fs.linkSync(temporary, target);
+      return true;
+    } catch (error) {
+      if ((error as NodeJS.ErrnoException).code !== 'EEXIST') throw error;
+      return false; // another process won: use its file
+    }
+  } catch (error) {
+    throw describeWriteFailure(error, target);
+  } finally {
+    for (const leftover of [temporary, `${temporary}-wal`, `${temporary}-shm`]) fs.rmSync(leftover, { force: true });
   }
 }
 
