@@ -4,6 +4,7 @@ export default defineConfig({
   test: {
     include: ['tests/**/*.test.ts'],
     environment: 'node',
+    globalSetup: ['tests/global-setup.ts'],
     testTimeout: 60_000,
     hookTimeout: 120_000,
     // Two cores on the build machines: keep the pool small so timing-sensitive tests stay stable.
