@@ -91,6 +91,10 @@ function filterOf(parsed: ParsedArgs): Record<string, string> {
 
 export const materialsCommand: CliCommand = async (args, io) => {
   const [sub, ...rest] = args;
+  if (sub === '--help' || sub === '-h' || sub === 'help') {
+    io.stdout(`${USAGE}\n`);
+    return 0;
+  }
   const parsed = parseArgs(rest, ['db', 'search', 'category', 'origin'], ['json']);
   if (typeof parsed === 'string') {
     io.stderr(`${parsed} ${USAGE}\n`);

@@ -14,6 +14,10 @@ const USAGE = 'usage: lamina projects list [--deleted] [--json] | export ID FILE
 
 export const projectsCommand: CliCommand = async (args, io) => {
   const [sub, ...rest] = args;
+  if (sub === '--help' || sub === '-h' || sub === 'help') {
+    io.stdout(`${USAGE}\n`);
+    return 0;
+  }
   const parsed = parseArgs(rest, ['db'], ['json', 'deleted']);
   if (typeof parsed === 'string') {
     io.stderr(`${parsed} ${USAGE}\n`);
@@ -25,6 +29,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
       return withServices(io, db, ({ projects }) => {
         const list = parsed.flags.has('deleted') ? projects.listRecycleBin() : projects.list();
         if (parsed.flags.has('json')) io.stdout(JSON.stringify(list, null, 2) + '\n');
+        else if (list.length === 0) io.stdout(parsed.flags.has('deleted') ? 'The recycle bin is empty.\n' : 'No projects yet.\n');
         else for (const p of list) io.stdout(`${p.id}\t${p.name}\t${p.client}\t${p.caseCount} case(s)\t${p.updatedAt}\n`);
         return 0;
       });
