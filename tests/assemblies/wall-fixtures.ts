@@ -31,12 +31,4 @@ export function wall(layers: readonly WallLayer[], overrides: Partial<WallInput>
   };
 }
 
-/** Runs `action`, which must throw, and returns what it threw. */
-export function thrownBy(action: () => unknown): unknown {
-  try {
-    action();
-  } catch (error) {
-    return error;
-  }
-  throw new Error('expected the call to throw, but it returned normally');
-}
+export { thrownBy } from '../physics/thrown-error.js';
