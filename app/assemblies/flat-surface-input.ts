@@ -5,7 +5,6 @@
  * orientation of the outer surface. Field names match the flat case file.
  */
 import { requireOneOf } from '../physics/input-checks.js';
-import type { SurfaceMethod } from '../physics/outer-surface-exchange.js';
 import type { MaterialLayer } from './layer-build.js';
 import {
   INPUT_LIMITS,
@@ -18,9 +17,7 @@ import {
   validateMaterialLayer,
   validateOperation,
   validateSurfaceMethod,
-  type AmbientConditions,
-  type InnerCondition,
-  type JacketInput,
+  type InsulatedSurfaceInput,
 } from './pipe-and-flat-inputs.js';
 
 /** The outer surface's orientation and the length the air moves along. */
@@ -33,25 +30,12 @@ export type FlatSurfaceOrientation =
    */
   | { readonly kind: 'horizontal'; readonly facing: 'up' | 'down'; readonly characteristicLength: number };
 
-export interface FlatSurfaceInput {
-  /** Free text for reports; not used by the calculation. */
-  readonly title?: string;
+export interface FlatSurfaceInput extends InsulatedSurfaceInput {
   /** The vessel or duct plate, when it is modelled. */
   readonly wall?: MaterialLayer;
-  readonly inner: InnerCondition;
-  /** Insulation layers, inside first (at least one). */
-  readonly layers: readonly MaterialLayer[];
-  readonly jacket?: JacketInput;
   readonly surface: FlatSurfaceOrientation;
-  readonly ambient: AmbientConditions;
-  /** Default { kind: 'correlations' }. */
-  readonly surfaceMethod?: SurfaceMethod;
   /** m² of surface. */
   readonly area: number;
-  /** h per year. */
-  readonly operatingHours: number;
-  /** °C, default DEFAULT_TOUCH_LIMIT (app/checks/personnel-protection.ts). */
-  readonly touchLimit?: number;
 }
 
 /** m², largest area accepted. */

@@ -7,7 +7,7 @@
 import { InputError } from '../fe/errors.js';
 import { validateConductivity } from '../fe/validate.js';
 import { MATERIAL_CATEGORIES, type MaterialProperties } from '../materials/material-properties.js';
-import { requireCelsius, requireFinite, requireInRange, requireOneOf, requirePositive } from '../physics/input-checks.js';
+import { requireCelsius, requireFinite, requireInRange, requireOneOf } from '../physics/input-checks.js';
 import type { Exposure, SurfaceMethod } from '../physics/outer-surface-exchange.js';
 import type { MaterialLayer } from './layer-build.js';
 
@@ -35,6 +35,23 @@ export interface JacketInput extends MaterialLayer {
 }
 
 /** Limits of the accepted inputs; beyond them the engine's physics is not meant to be used. */
+/** What a pipe and a flat surface share: the insulation build-up, its conditions and its use. */
+export interface InsulatedSurfaceInput {
+  /** Free text for reports; not used by the calculation. */
+  readonly title?: string;
+  readonly inner: InnerCondition;
+  /** Insulation layers, inside first (at least one). */
+  readonly layers: readonly MaterialLayer[];
+  readonly jacket?: JacketInput;
+  readonly ambient: AmbientConditions;
+  /** Default { kind: 'correlations' }. */
+  readonly surfaceMethod?: SurfaceMethod;
+  /** h per year. */
+  readonly operatingHours: number;
+  /** °C, default DEFAULT_TOUCH_LIMIT (app/checks/personnel-protection.ts). */
+  readonly touchLimit?: number;
+}
+
 export const INPUT_LIMITS = {
   /** °C, process side (cryogenic to high-temperature lines). */
   innerTemperature: [-270, 1000],

@@ -7,7 +7,6 @@ import { InputError } from '../fe/errors.js';
 import type { MaterialProperties } from '../materials/material-properties.js';
 import { requireOneOf } from '../physics/input-checks.js';
 import type { SurfaceMethod } from '../physics/outer-surface-exchange.js';
-import type { MaterialLayer } from './layer-build.js';
 import {
   requireAboveAtMost,
   requireObjectField,
@@ -18,14 +17,10 @@ import {
   validateMaterial,
   validateOperation,
   validateSurfaceMethod,
-  type AmbientConditions,
-  type InnerCondition,
-  type JacketInput,
+  type InsulatedSurfaceInput,
 } from './pipe-and-flat-inputs.js';
 
-export interface PipeInput {
-  /** Free text for reports; not used by the calculation. */
-  readonly title?: string;
+export interface PipeInput extends InsulatedSurfaceInput {
   readonly pipe: {
     /** m, > 0 */
     readonly outerDiameter: number;
@@ -33,22 +28,11 @@ export interface PipeInput {
     readonly wallThickness: number;
     readonly material: MaterialProperties;
   };
-  readonly inner: InnerCondition;
-  /** Insulation layers, inside first (at least one). */
-  readonly layers: readonly MaterialLayer[];
-  readonly jacket?: JacketInput;
   readonly orientation: 'horizontal' | 'vertical';
   /** m, vertical pipes only: the height the air rises along; default see verticalPipeHeight. */
   readonly height?: number;
-  readonly ambient: AmbientConditions;
-  /** Default { kind: 'correlations' }. */
-  readonly surfaceMethod?: SurfaceMethod;
   /** m, length of the run. */
   readonly length: number;
-  /** h per year. */
-  readonly operatingHours: number;
-  /** °C, default DEFAULT_TOUCH_LIMIT (app/checks/personnel-protection.ts). */
-  readonly touchLimit?: number;
 }
 
 /** m; largest pipe outer diameter accepted. */
