@@ -32,15 +32,15 @@ export function assembleSystem(mesh: Mesh, layers: readonly Layer[], measure: Me
   const capacity = new BandedMatrix(n, mesh.order);
   const load = new Float64Array(n);
   const workspace = newElementWorkspace(mesh.order);
-  for (let e = 0; e < mesh.elements.length; e++) {
-    const nodes = mesh.elements[e]!.nodes;
+  const m = mesh.order + 1;
+  for (let e = 0; e < mesh.elementFirstNode.length; e++) {
+    const first = mesh.elementFirstNode[e]!;
     const local = elementMatrices(mesh, layers, measure, e, excess, reference, workspace);
-    const m = nodes.length;
     for (let a = 0; a < m; a++) {
-      load[nodes[a]!] += local.load[a]!;
+      load[first + a] += local.load[a]!;
       for (let b = 0; b < m; b++) {
-        conductance.add(nodes[a]!, nodes[b]!, local.conductance[a * m + b]!);
-        capacity.add(nodes[a]!, nodes[b]!, local.capacity[a * m + b]!);
+        conductance.add(first + a, first + b, local.conductance[a * m + b]!);
+        capacity.add(first + a, first + b, local.capacity[a * m + b]!);
       }
     }
   }
@@ -69,35 +69,36 @@ export function layerResidualsAtEnds(
   reference: number,
   rate?: ArrayLike<number>,
 ): LayerEndResiduals[] {
-  const result = layers.map(() => ({ innerEnd: 0, outerEnd: 0, innerScale: 0, outerScale: 0 }));
-  for (let e = 0; e < mesh.elements.length; e++) {
-    const element = mesh.elements[e]!;
-    const [first, last] = mesh.layerNodes[element.layer]!;
-    const nodes = element.nodes;
-    const m = nodes.length;
-    if (nodes[0] !== first && nodes[m - 1] !== last) continue;
-    const local = elementMatrices(mesh, layers, measure, e, conductivityExcess, reference);
-    for (let a = 0; a < m; a++) {
-      const node = nodes[a]!;
-      if (node !== first && node !== last) continue;
-      // Conduction rows sum to zero, so use temperature differences (see conduction-residual.ts).
-      let r = -local.load[a]!;
-      const ta = excess[node]!;
-      for (let b = 0; b < m; b++) {
-        if (b !== a) r += local.conductance[a * m + b]! * (excess[nodes[b]!]! - ta);
-        if (rate) r += local.capacity[a * m + b]! * rate[nodes[b]!]!;
-      }
-      const scale = Math.abs(local.conductance[a * m + a]!);
-      const entry = result[element.layer]!;
-      if (node === first) {
-        entry.innerEnd += r;
-        entry.innerScale += scale;
-      }
-      if (node === last) {
-        entry.outerEnd += r;
-        entry.outerScale += scale;
+  const m = mesh.order + 1;
+  return layers.map((_, l) => {
+    const [first, last] = mesh.layerNodes[l]!;
+    const [firstElement, lastElement] = mesh.layerElements[l]!;
+    const entry = { innerEnd: 0, outerEnd: 0, innerScale: 0, outerScale: 0 };
+    // Only the layer's two end elements touch its end nodes.
+    for (const e of firstElement === lastElement ? [firstElement] : [firstElement, lastElement]) {
+      const local = elementMatrices(mesh, layers, measure, e, conductivityExcess, reference);
+      const start = mesh.elementFirstNode[e]!;
+      for (let a = 0; a < m; a++) {
+        const node = start + a;
+        if (node !== first && node !== last) continue;
+        // Conduction rows sum to zero, so use temperature differences (see conduction-residual.ts).
+        let r = -local.load[a]!;
+        const ta = excess[node]!;
+        for (let b = 0; b < m; b++) {
+          if (b !== a) r += local.conductance[a * m + b]! * (excess[start + b]! - ta);
+          if (rate) r += local.capacity[a * m + b]! * rate[start + b]!;
+        }
+        const scale = Math.abs(local.conductance[a * m + a]!);
+        if (node === first) {
+          entry.innerEnd += r;
+          entry.innerScale += scale;
+        }
+        if (node === last) {
+          entry.outerEnd += r;
+          entry.outerScale += scale;
+        }
       }
     }
-  }
-  return result;
+    return entry;
+  });
 }

@@ -28,8 +28,9 @@ export function elementMatrices(
   reference: number,
   workspace?: ElementMatrices,
 ): ElementMatrices {
-  const element = mesh.elements[elementIndex]!;
-  const layer = layers[element.layer]!;
+  const layerIndex = mesh.elementLayer[elementIndex]!;
+  const layer = layers[layerIndex]!;
+  const firstNode = mesh.elementFirstNode[elementIndex]!;
   const shapes = referenceElement(mesh.order);
   const n = shapes.nodeCount;
   // A caller looping over many elements passes one workspace, so a million-element mesh does not
@@ -39,8 +40,8 @@ export function elementMatrices(
   capacity.fill(0);
   load.fill(0);
 
-  const xStart = mesh.positions[element.nodes[0]!]!;
-  const xEnd = mesh.positions[element.nodes[n - 1]!]!;
+  const xStart = mesh.positions[firstNode]!;
+  const xEnd = mesh.positions[firstNode + n - 1]!;
   // Nodes are equally spaced in each element, so the map from ξ to x is affine.
   const jacobian = (xEnd - xStart) / 2;
   const volumetricCapacity = (layer.density ?? 0) * (layer.specificHeat ?? 0);
@@ -50,12 +51,12 @@ export function elementMatrices(
     const N = shapes.shape[g]!;
     const dNdXi = shapes.shapeDerivative[g]!;
     let temperature = reference;
-    for (let a = 0; a < n; a++) temperature += N[a]! * excess[element.nodes[a]!]!;
+    for (let a = 0; a < n; a++) temperature += N[a]! * excess[firstNode + a]!;
     const x = xStart + (shapes.gaussXi[g]! + 1) * jacobian;
     const weight = shapes.gaussWeight[g]! * jacobian * measure(x);
     const lambda = conductivityAt(layer.conductivity, temperature);
     if (!(lambda > 0)) {
-      const field = `layers[${element.layer}].conductivity`;
+      const field = `layers[${layerIndex}].conductivity`;
       throw new InputError(
         field,
         `${field} falls to ${lambda.toPrecision(3)} W/(m·K) at ${temperature.toPrecision(4)} °C; it must stay above 0 W/(m·K) over the temperature range of the problem.`,

@@ -10,12 +10,10 @@
 import { isConstantConductivity } from './conductivity.js';
 import type { ElementOrder, Geometry, Layer } from './problem.js';
 
-export interface MeshElement {
-  /** Global node indices, in order of increasing position. */
-  readonly nodes: readonly number[];
-  readonly layer: number;
-}
-
+/**
+ * Elements are stored compactly: in 1D the nodes of element e are consecutive, starting at
+ * `elementFirstNode[e]` (order + 1 of them), so a million-element mesh is two typed arrays.
+ */
 export interface ContactLink {
   /** Node on the inner side, node on the outer side (same position). */
   readonly innerNode: number;
@@ -29,7 +27,12 @@ export interface Mesh {
   readonly order: ElementOrder;
   /** Node positions: x from the inner face (planar) or radius r (axisymmetric), m. */
   readonly positions: Float64Array;
-  readonly elements: readonly MeshElement[];
+  /** First node of each element; the element's nodes are firstNode … firstNode + order. */
+  readonly elementFirstNode: Int32Array;
+  /** Layer of each element. */
+  readonly elementLayer: Int32Array;
+  /** First and last element of each layer. */
+  readonly layerElements: readonly (readonly [number, number])[];
   readonly contacts: readonly ContactLink[];
   /** First and last node of each layer. */
   readonly layerNodes: readonly (readonly [number, number])[];
@@ -72,51 +75,53 @@ export function defaultElementCount(
 }
 
 export function buildMesh(geometry: Geometry, layers: readonly Layer[], order: ElementOrder, purpose: MeshPurpose = 'steady'): Mesh {
-  const positions: number[] = [];
-  const elements: MeshElement[] = [];
+  // Element counts first, so every array is allocated once at its final size.
+  const counts: number[] = [];
+  let position = geometry.kind === 'planar' ? 0 : geometry.innerRadius;
+  for (const layer of layers) {
+    counts.push(layer.elements ?? defaultElementCount(geometry, layer, position, order, purpose));
+    position += layer.thickness;
+  }
+  const contactCount = layers.slice(0, -1).filter((l) => (l.contactResistanceToNext ?? 0) > 0).length;
+  const elementCount = counts.reduce((a, b) => a + b, 0);
+  const positions = new Float64Array(elementCount * order + 1 + contactCount);
+  const elementFirstNode = new Int32Array(elementCount);
+  const elementLayer = new Int32Array(elementCount);
   const contacts: ContactLink[] = [];
   const layerNodes: [number, number][] = [];
-  const elementsPerLayer: number[] = [];
+  const layerElements: [number, number][] = [];
 
+  let node = 0; // next free node
+  let element = 0;
   let start = geometry.kind === 'planar' ? 0 : geometry.innerRadius;
   layers.forEach((layer, layerIndex) => {
-    const count = layer.elements ?? defaultElementCount(geometry, layer, start, order, purpose);
+    const count = counts[layerIndex]!;
     const end = start + layer.thickness;
     const vertices = layerVertices(geometry, start, end, count);
 
     // The first node of this layer is shared with the previous layer unless a contact resistance separates them.
     const previousContact = layerIndex > 0 ? (layers[layerIndex - 1]!.contactResistanceToNext ?? 0) : 0;
-    let firstNode: number;
     if (layerIndex === 0 || previousContact > 0) {
-      firstNode = positions.length;
-      positions.push(start);
-      if (layerIndex > 0) contacts.push({ innerNode: firstNode - 1, outerNode: firstNode, resistance: previousContact });
-    } else {
-      firstNode = positions.length - 1;
+      positions[node] = start;
+      if (layerIndex > 0) contacts.push({ innerNode: node - 1, outerNode: node, resistance: previousContact });
+      node++;
     }
-
-    let left = firstNode;
+    const firstNode = node - 1;
+    const firstElement = element;
     for (let e = 0; e < count; e++) {
-      const a = vertices[e]!;
-      const b = vertices[e + 1]!;
-      const nodes = [left];
-      if (order === 2) {
-        positions.push((a + b) / 2);
-        nodes.push(positions.length - 1);
-      }
-      positions.push(b);
-      nodes.push(positions.length - 1);
-      elements.push({ nodes, layer: layerIndex });
-      left = positions.length - 1;
+      elementFirstNode[element] = node - 1;
+      elementLayer[element] = layerIndex;
+      element++;
+      if (order === 2) positions[node++] = (vertices[e]! + vertices[e + 1]!) / 2;
+      positions[node++] = vertices[e + 1]!;
     }
-    // Snap the last node to the exact layer end to keep interface positions free of round-off.
-    positions[positions.length - 1] = end;
-    layerNodes.push([firstNode, positions.length - 1]);
-    elementsPerLayer.push(count);
+    // The last vertex is the exact layer end, which keeps interface positions free of round-off.
+    layerNodes.push([firstNode, node - 1]);
+    layerElements.push([firstElement, element - 1]);
     start = end;
   });
 
-  return { geometry, order, positions: Float64Array.from(positions), elements, contacts, layerNodes, elementsPerLayer };
+  return { geometry, order, positions, elementFirstNode, elementLayer, layerElements, contacts, layerNodes, elementsPerLayer: counts };
 }
 
 function layerVertices(geometry: Geometry, start: number, end: number, count: number): number[] {
