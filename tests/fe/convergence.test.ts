@@ -52,3 +52,27 @@ describe('observed convergence rates (uniform refinement of a graded mesh)', () 
     });
   }
 });
+
+describe('observed convergence rate with temperature-dependent conductivity', () => {
+  // λ = λ0(1 + βθ) across a cylindrical layer: the exact heat flow is Q' = 2πλm(θ1 − θ2)/ln(r2/r1)
+  // with λm = λ0(1 + β(θ1 + θ2)/2) (Kirchhoff transform; Carslaw & Jaeger §1.7, Incropera §3.2).
+  // Picard iteration converges to the discrete solution, whose heat-flow error must still fall as h^(2p).
+  for (const order of [1, 2] as const) {
+    it(`order ${order}: heat-flow slope ${2 * order}`, () => {
+      const [lambda0, beta, ta, tb] = [0.04, 3e-3, 350, 20];
+      const exactQ = (2 * Math.PI * lambda0 * (1 + (beta * (ta + tb)) / 2) * (ta - tb)) / Math.log(r2 / r1);
+      const counts = order === 1 ? [4, 8, 16, 32, 64] : [2, 4, 8, 16];
+      const errors = counts.map((n) => {
+        const r = solveSteady({
+          geometry: { kind: 'axisymmetric', innerRadius: r1 },
+          layers: [{ thickness: r2 - r1, conductivity: { kind: 'polynomial', coefficients: [lambda0, lambda0 * beta] }, elements: n }],
+          inner: { kind: 'temperature', temperature: ta },
+          outer: { kind: 'temperature', temperature: tb },
+          options: { order },
+        });
+        return Math.abs(r.faces.inner.heatIn - exactQ);
+      });
+      expect(Math.abs(logLogSlope(counts.map((n) => 1 / n), errors) - 2 * order)).toBeLessThan(0.1);
+    });
+  }
+});
