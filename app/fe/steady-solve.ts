@@ -61,14 +61,29 @@ export function iterateToSteadyState(
     for (let i = 0; i < next.length; i++) blended[i] = temperatures[i]! + relaxation * (next[i]! - temperatures[i]!);
     temperatures = blended;
     if (iteration === maxIterations) {
+      const imbalance = largestNodalImbalance(d, temperatures);
       throw new ConvergenceError(
         iteration,
         change,
-        `The nonlinear solve did not converge in ${iteration} iterations: the last temperature change was ${change.toExponential(3)} K against a tolerance of ${tolerance} K.`,
+        `The nonlinear solve did not converge in ${iteration} iterations: the last temperature change was ${change.toExponential(3)} K against a tolerance of ${tolerance} K, leaving a nodal heat imbalance of up to ${imbalance.toExponential(3)} ${d.mesh.geometry.kind === 'planar' ? 'W/m²' : 'W/m'}.`,
       );
     }
   }
   throw new ConvergenceError(maxIterations, Number.NaN, 'The nonlinear solve diverged: temperatures stopped being finite numbers.');
+}
+
+/** The largest residual of the nonlinear equations at the free nodes: heat that does not balance. */
+function largestNodalImbalance(d: Discretisation, temperatures: Float64Array): number {
+  const system = assembleSystem(d.mesh, d.layers, d.measure, temperatures, d.reference);
+  const rhs = Float64Array.from(system.load);
+  const { essential, filmDiagonal } = applyFaceConditions(system.conductance, rhs, d.faces, temperatures, d.reference);
+  const fixed = new Set(essential.map((e) => e.node));
+  const residual = conductionResidual(system.conductance, rhs, filmDiagonal, temperatures);
+  let largest = 0;
+  residual.forEach((r, i) => {
+    if (!fixed.has(i)) largest = Math.max(largest, Math.abs(r));
+  });
+  return largest;
 }
 
 /**
