@@ -8,9 +8,10 @@ import { solveWall } from '../assemblies/wall-calculation.js';
 import { isAirLayer, type WallInput } from '../assemblies/wall-input.js';
 import { InputError } from '../fe/errors.js';
 import { saturationPressure } from '../physics/index.js';
+import parameters from '../../data/physics/iso13788-moisture-parameters.json' with { type: 'json' };
 
-/** δ₀, vapour permeability of still air, kg/(m·s·Pa): the ISO 13788 value, from memory. */
-export const VAPOUR_PERMEABILITY_OF_AIR = 2e-10;
+/** δ₀, vapour permeability of still air, kg/(m·s·Pa): the ISO 13788 value, from memory (data/physics/iso13788-moisture-parameters.json). */
+export const VAPOUR_PERMEABILITY_OF_AIR: number = parameters.vapourPermeabilityOfAir.value;
 
 export interface VapourLayer {
   /** Index in the input's layer list. */
