@@ -130,10 +130,38 @@ export function parseMaterialsCsv(text: string): { rows: ParsedMaterialRow[]; pr
       rows.push({ line: record.line, input });
     } catch (error) {
       if (!(error instanceof InvalidInputError)) throw error;
-      problems.push({ line: record.line, message: error.message });
+      problems.push({ line: record.line, message: inColumnTerms(error) });
     }
   }
   return { rows, problems };
+}
+
+/** The CSV column each material field is read from. */
+const COLUMN_OF_FIELD: Record<string, string> = {
+  name: MATERIAL_CSV_HEADER[0],
+  category: MATERIAL_CSV_HEADER[1],
+  conductivity: MATERIAL_CSV_HEADER[2],
+  density: MATERIAL_CSV_HEADER[3],
+  specificHeat: MATERIAL_CSV_HEADER[4],
+  vapourResistanceFactor: MATERIAL_CSV_HEADER[5],
+  equivalentAirLayerThickness: MATERIAL_CSV_HEADER[6],
+  emissivity: MATERIAL_CSV_HEADER[7],
+  minServiceTemperature: MATERIAL_CSV_HEADER[8],
+  maxServiceTemperature: MATERIAL_CSV_HEADER[9],
+  source: MATERIAL_CSV_HEADER[10],
+  notes: MATERIAL_CSV_HEADER[11],
+};
+
+/**
+ * A validation message names the material's field (e.g. "conductivity.value must be …"); a person
+ * importing a file knows its columns, so the field at the start is replaced by the column's header.
+ */
+function inColumnTerms(error: InvalidInputError): string {
+  const field = error.field ?? '';
+  const root = field.split(/[.[]/, 1)[0]!;
+  const column = COLUMN_OF_FIELD[root];
+  if (!column || !error.message.startsWith(field) || field === column) return error.message;
+  return `column "${column}"${error.message.slice(field.length)}`;
 }
 
 function formatNumber(value: number | null): string {

@@ -110,12 +110,12 @@ describe('materials CSV import and export', () => {
     expect(result).toEqual({
       ok: false,
       problems: [
-        { line: 3, message: 'density must be more than 0 and at most 25000 kg/m³ (got -3).' },
+        { line: 3, message: 'column "density [kg/m3]" must be more than 0 and at most 25000 kg/m³ (got -3).' },
         { line: 4, message: 'conductivity [W/(m.K)] "0,035" uses a comma; write decimals with a point.' },
         { line: 6, message: 'name "Good board" repeats the material on line 2.' },
         { line: 7, message: 'a material named "Carbon steel pipe" is already in the library.' },
         { line: 8, message: 'expected 12 columns, found 2.' },
-        { line: 9, message: 'conductivity must stay above 0 W/(m·K) from 0 to 150 °C, but the polynomial reaches -0.0250 W/(m·K) at 150.0 °C.' },
+        { line: 9, message: 'column "conductivity [W/(m.K)]" must stay above 0 W/(m·K) from 0 to 150 °C, but the polynomial reaches -0.0250 W/(m·K) at 150.0 °C.' },
       ],
     });
     expect(lamina.materials.list({ origin: 'user' })).toEqual([]);
