@@ -1,5 +1,5 @@
 /** Results of a wall or roof calculation, as plain data (SI; per m² unless stated). */
-import type { VentilationRule } from './wall-thermal-stack.js';
+import type { VentilationApplied } from './wall-thermal-stack.js';
 
 export interface WallLayerResult {
   /** Index in the input's layer list. */
@@ -51,13 +51,7 @@ export interface WallResult {
   readonly area: number;
   /** The engine's energy balance: residual in W/m² and relative to the largest term. */
   readonly energyBalance: { readonly residual: number; readonly relativeResidual: number };
-  readonly ventilation: {
-    readonly rule: VentilationRule;
-    readonly layerIndex?: number;
-    readonly unventilatedTotal?: number;
-    readonly wellVentilatedTotal?: number;
-    readonly weightedTotal?: number;
-  };
+  readonly ventilation: VentilationApplied;
   /** Positions (m from the inside face) and temperatures (°C) of the engine's nodes. */
   readonly profile: { readonly positions: readonly number[]; readonly temperatures: readonly number[] };
 }

@@ -55,15 +55,18 @@ export interface ThermalStack {
   /** R_se used in the engine (after the ventilation rules). */
   readonly outsideSurfaceResistance: number;
   readonly layers: readonly StackLayer[];
-  readonly ventilation: {
-    readonly rule: VentilationRule;
-    /** Input index of the ventilated air layer the rule applies to. */
-    readonly layerIndex?: number;
-    /** For the slightly-ventilated rule: R_T,u, R_T,v, the resulting R_T and the scale factor. */
-    readonly unventilatedTotal?: number;
-    readonly wellVentilatedTotal?: number;
-    readonly weightedTotal?: number;
-  };
+  readonly ventilation: VentilationApplied;
+}
+
+/** Which ISO 6946 ventilation rule was applied, to which air layer, with its totals. */
+export interface VentilationApplied {
+  readonly rule: VentilationRule;
+  /** Input index of the ventilated air layer the rule applies to. */
+  readonly layerIndex?: number;
+  /** For the slightly-ventilated rule: R_T,u, R_T,v and the resulting R_T. */
+  readonly unventilatedTotal?: number;
+  readonly wellVentilatedTotal?: number;
+  readonly weightedTotal?: number;
 }
 
 export interface StackOptions {
