@@ -114,8 +114,30 @@ async function startBrowserMode(port, databaseOption, why) {
   process.on('SIGTERM', stop);
 }
 
+/**
+ * Electron 42 and later download their binary on first use rather than at install. Try that once,
+ * quietly: on a machine with internet the desktop app then opens; where the download cannot be had
+ * (offline, or ELECTRON_SKIP_BINARY_DOWNLOAD=1) the fallback below says so in one line.
+ */
+async function fetchElectronBinary() {
+  const installer = path.join(projectRoot, 'node_modules', 'electron', 'install.js');
+  if (process.env.ELECTRON_SKIP_BINARY_DOWNLOAD === '1' || !existsSync(installer)) return undefined;
+  const notice = setTimeout(() => console.log("Downloading Electron's binary for the first start..."), 2000);
+  const fetched = await new Promise((resolve) => {
+    const child = spawn(process.execPath, [installer], { cwd: projectRoot, stdio: 'ignore' });
+    const limit = setTimeout(() => child.kill(), 10 * 60 * 1000);
+    child.on('error', () => resolve(false));
+    child.on('close', (code) => {
+      clearTimeout(limit);
+      resolve(code === 0);
+    });
+  });
+  clearTimeout(notice);
+  return fetched ? electronBinary() : undefined;
+}
+
 const argv = process.argv.slice(2);
-const binary = argv.includes('--browser') ? undefined : electronBinary();
+const binary = argv.includes('--browser') ? undefined : (electronBinary() ?? (await fetchElectronBinary()));
 try {
   if (binary) await startDesktop(binary);
   else await startBrowserMode(requestedPort(argv, process.env), requestedDatabase(argv), argv.includes('--browser') ? 'asked' : 'no-electron');
