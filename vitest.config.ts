@@ -5,6 +5,8 @@ export default defineConfig({
     include: ['tests/**/*.test.ts'],
     environment: 'node',
     globalSetup: ['tests/global-setup.ts'],
+    // A test that asserts nothing fails.
+    expect: { requireAssertions: true },
     testTimeout: 60_000,
     hookTimeout: 120_000,
     // Two cores on the build machines: keep the pool small so timing-sensitive tests stay stable.

@@ -7,12 +7,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { checkInterstitialAtDesignCondition, constructVapourProfile } from '../../app/checks/interstitial.js';
 import { layer, material, wall } from '../assemblies/wall-fixtures.js';
+import { pSat } from './iso13788-saturation.js';
 
 const DELTA0 = 2e-10; // ISO 13788, from memory
-/** ISO 13788 annex saturation pressure (from memory): over water θ ≥ 0, over ice θ < 0. */
-function pSat(theta: number): number {
-  return theta >= 0 ? 610.5 * Math.exp((17.269 * theta) / (237.3 + theta)) : 610.5 * Math.exp((21.875 * theta) / (265.5 + theta));
-}
 function relative(a: number, b: number): number {
   return Math.abs(a - b) / Math.abs(b);
 }

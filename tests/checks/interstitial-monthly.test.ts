@@ -8,12 +8,9 @@ import type { MonthlyClimate } from '../../app/assemblies/wall.js';
 import { DEMO_CLIMATES } from '../../app/assemblies/wall.js';
 import { checkInterstitialMonthly } from '../../app/checks/interstitial.js';
 import { layer, material, wall } from '../assemblies/wall-fixtures.js';
+import { pSat } from './iso13788-saturation.js';
 
 const DELTA0 = 2e-10; // ISO 13788, from memory
-function pSat(theta: number): number {
-  // ISO 13788 annex Magnus form (from memory)
-  return theta >= 0 ? 610.5 * Math.exp((17.269 * theta) / (237.3 + theta)) : 610.5 * Math.exp((21.875 * theta) / (265.5 + theta));
-}
 const NAMES = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 const DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
 const COLD = { inside: { temperature: 20, relativeHumidity: 0.6 }, outside: { temperature: -5, relativeHumidity: 0.8 } };

@@ -15,10 +15,8 @@ import {
 } from '../../app/checks/interstitial.js';
 import { InputError } from '../../app/fe/index.js';
 import { layer, material, thrownBy, wall } from '../assemblies/wall-fixtures.js';
+import { pSat } from './iso13788-saturation.js';
 
-function pSat(theta: number): number {
-  return theta >= 0 ? 610.5 * Math.exp((17.269 * theta) / (237.3 + theta)) : 610.5 * Math.exp((21.875 * theta) / (265.5 + theta));
-}
 /** Inverse over water (p ≥ 610.5 Pa): θ = 237.3·x/(17.269 − x), x = ln(p/610.5). */
 function dewWater(p: number): number {
   const x = Math.log(p / 610.5);
