@@ -47,7 +47,7 @@ export function solveWithEssentialConditions(
   } catch (error) {
     if (error instanceof ZeroPivotError) {
       throw new SingularProblemError(
-        'The temperature level is undetermined: give at least one face a fixed temperature or a film with a coefficient greater than 0 W/(m²·K).',
+        'inner and outer leave the temperature level undetermined: give at least one face a fixed temperature or a film with a coefficient greater than 0 W/(m²·K).',
       );
     }
     throw error;

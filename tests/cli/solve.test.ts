@@ -118,6 +118,13 @@ describe('lamina solve', () => {
       expect(r.stderr.trim().split('\n')).toHaveLength(1);
       expect(r.stderr).toMatch(pattern);
     });
+    const singular = path.join(dir, 'singular.json');
+    const base = JSON.parse(readFileSync(path.join(examplesDir, 'conduction-cold-store-wall.json'), 'utf8'));
+    writeFileSync(singular, JSON.stringify({ ...base, inner: { kind: 'flux', flux: 10 }, outer: { kind: 'film', coefficient: 0, ambient: 0 } }));
+    const r = lamina(['solve', singular]);
+    expect(r.code).toBe(2);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+    expect(r.stderr).toMatch(/inner and outer leave the temperature level undetermined/);
     const missing = lamina(['solve', path.join(dir, 'nope.json')]);
     expect(missing.code).toBe(2);
     expect(missing.stderr).toMatch(/cannot be read/);

@@ -6,7 +6,7 @@
  */
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import { InputError } from '../../../app/fe/errors.js';
+import { InputError, SingularProblemError } from '../../../app/fe/errors.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 import type { CliCommand, CliIO } from '../command.js';
 import { caseKindOf, CASE_KINDS, type SolvedCase } from '../case-kinds.js';
@@ -61,7 +61,8 @@ export const solveCommand: CliCommand = async (args, io) => {
     try {
       solved = kind.solve(json, resolveMaterial);
     } catch (error) {
-      if (error instanceof InputError) {
+      // A singular problem (no fixed face, films of zero) is an input the user must change, like a bad field.
+      if (error instanceof InputError || error instanceof SingularProblemError) {
         io.stderr(`lamina solve: ${error.message}\n`);
         return 2;
       }
