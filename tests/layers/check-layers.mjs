@@ -122,12 +122,15 @@ function topFolder(root, target) {
 }
 
 function importSpecifiers(code) {
+  // The keyword must start a statement or expression: not part of a name, a property key or a
+  // string such as 'projects:import' (strings are kept in `code` so that specifiers can be read).
+  const start = String.raw`(?<![\w$.:'"\-])`;
   const patterns = [
-    /\bimport\s+(?:type\s+)?[\w$*{}\s,]*?\bfrom\s*(['"])([^'"]+)\1/g,
-    /\bexport\s+(?:type\s+)?[\w$*{}\s,]*?\bfrom\s*(['"])([^'"]+)\1/g,
-    /\bimport\s*(['"])([^'"]+)\1/g,
-    /\bimport\s*\(\s*(['"])([^'"]+)\1\s*\)/g,
-    /\brequire\s*\(\s*(['"])([^'"]+)\1\s*\)/g,
+    new RegExp(String.raw`${start}import\s+(?:type\s+)?[\w$*{}\s,]*?\bfrom\s*(['"])([^'"]+)\1`, 'g'),
+    new RegExp(String.raw`${start}export\s+(?:type\s+)?[\w$*{}\s,]*?\bfrom\s*(['"])([^'"]+)\1`, 'g'),
+    new RegExp(String.raw`${start}import\s*(['"])([^'"]+)\1`, 'g'),
+    new RegExp(String.raw`${start}import\s*\(\s*(['"])([^'"]+)\1\s*\)`, 'g'),
+    new RegExp(String.raw`${start}require\s*\(\s*(['"])([^'"]+)\1\s*\)`, 'g'),
   ];
   const found = [];
   for (const pattern of patterns) {

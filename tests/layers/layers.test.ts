@@ -48,6 +48,8 @@ describe('the checker on a planted project', () => {
         'const pattern = /window/;',
         'export { pattern, label, seed };',
         'export type { Thing };',
+        "export interface Channels { 'projects:import': { request: 'x' }; 'files:export': { from: 'y' } }",
+        "const json = await import('../../data/materials.json');",
       ].join('\n'),
     );
     plant('renderer/src/ok.ts', "import { mount } from 'svelte';\nimport { solve } from '../../app/fe/index.js';\nimport type { X } from '../../app/api/contract.js';\n");
