@@ -76,7 +76,7 @@ describe('pipe against the logarithmic formula Q\' = Δθ / ΣR\' (Incropera, Fu
     expect(Math.abs(a.heatLossPerMetre - calculatePipe(input).heatLossPerMetre)).toBeLessThan(1e-9);
   });
 
-  it('polynomial λ(θ): the layer carries the integral-mean conductivity λ_m = a0 + a1(θ1+θ2)/2 + a2(θ1²+θ1θ2+θ2²)/3, exact for a cylinder (Kirchhoff transform; reference notes §5.2)', () => {
+  it('polynomial λ(θ): the layer carries the integral-mean conductivity λ_m = a0 + a1(θ1+θ2)/2 + a2(θ1²+θ1θ2+θ2²)/3, exact for a cylinder (Kirchhoff transform, Carslaw & Jaeger §1.7)', () => {
     const coefficients = [0.0337, 1.1e-4, 1.7e-7]; // illustrative rock-wool curve of the reference notes §5.2
     const wool = material('Curved wool', { kind: 'polynomial', coefficients }, { emissivity: 0.9 });
     const result = calculatePipe({ ...input, layers: [{ material: wool, thickness: 0.1 }], jacket: undefined });
@@ -109,7 +109,7 @@ describe('outer film from the surface physics', () => {
     expect(result.surfaceCoefficient.sinkTemperature).toBeCloseTo(exchange.ambient, 12);
     const surfaceLoss = exchange.coefficient * (result.surfaceTemperature - exchange.ambient) * Math.PI * result.outerDiameter;
     expect(Math.abs(surfaceLoss - result.heatLossPerMetre) / result.heatLossPerMetre).toBeLessThan(1e-8);
-    // Radiation part: h_r = εσ(T_s² + T_r²)(T_s + T_r) (Stefan–Boltzmann, linearised exactly; reference notes §1.2).
+    // Radiation part: h_r = εσ(T_s² + T_r²)(T_s + T_r) (Stefan–Boltzmann law linearised exactly, Incropera et al. §1.2.3).
     const Ts = result.surfaceTemperature + 273.15;
     const Tr = 5 + 273.15;
     expect(result.surfaceCoefficient.radiation).toBeCloseTo(0.13 * STEFAN_BOLTZMANN * (Ts * Ts + Tr * Tr) * (Ts + Tr), 12);
@@ -118,7 +118,7 @@ describe('outer film from the surface physics', () => {
     expect(result.iterations).toBeGreaterThan(1);
   });
 
-  it('emissivity 0 on the jacket: the radiation part is exactly 0 (h_r = εσ…, reference notes §1.2)', () => {
+  it('emissivity 0 on the jacket: the radiation part is exactly 0 (h_r = εσ…, Stefan–Boltzmann law, Incropera et al. §1.2.3)', () => {
     const result = calculatePipe(hotPipe({ jacket: { material: aluminium, thickness: 0.0008, emissivity: 0 } }));
     expect(result.surfaceCoefficient.radiation).toBe(0);
     expect(result.surfaceCoefficient.total).toBe(result.surfaceCoefficient.convection);

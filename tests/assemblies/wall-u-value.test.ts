@@ -132,7 +132,7 @@ describe('U-value by the series-resistance formula (ISO 6946)', () => {
     const curve: ConductivityModel = { kind: 'polynomial', coefficients: [0.033, 1.5e-4] };
     const r = calculateWall(wall([layer(plaster, 0.013), { material: { ...wool, conductivity: curve }, thickness: 0.1 }]));
     expect(relative(r.uValueFromHeatFlow!, r.uValue)).toBeLessThan(1e-9);
-    // Kirchhoff: the integral-mean λ over the layer's range is a0 + a1·(θ1 + θ2)/2 (reference notes §5.2).
+    // Kirchhoff: the integral-mean λ over the layer's range is a0 + a1·(θ1 + θ2)/2 (Kirchhoff transform, Carslaw & Jaeger §1.7).
     const l = r.layers[1]!;
     expect(relative(l.effectiveConductivity!, 0.033 + 1.5e-4 * ((l.innerTemperature! + l.outerTemperature!) / 2))).toBeLessThan(1e-8);
   });

@@ -20,7 +20,7 @@ describe('radiation coefficient', () => {
   });
 
   it('h_r·(T_s − T_r) equals the Stefan–Boltzmann net exchange εσ(T_s⁴ − T_r⁴)', () => {
-    // Exact factorisation T_s⁴ − T_r⁴ = (T_s² + T_r²)(T_s + T_r)(T_s − T_r) (reference notes §1.2).
+    // Exact factorisation T_s⁴ − T_r⁴ = (T_s² + T_r²)(T_s + T_r)(T_s − T_r) (Stefan–Boltzmann law, Incropera et al. §1.2.3; reference notes §1.2).
     fc.assert(
       fc.property(
         fc.double({ min: 0, max: 1, noNaN: true }),
