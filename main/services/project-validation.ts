@@ -3,7 +3,8 @@ import { PROJECT_FIELDS, UNIT_SYSTEMS, type ProjectFields } from './project-type
 import { InvalidInputError } from './service-errors.js';
 import { optionalText, rejectUnknownKeys, requireObject, requireOneOf, requireText } from './validate.js';
 
-export const PROJECT_LIMITS = { name: 200, text: 200, revision: 40, notes: 10000, caseName: 200 } as const;
+export { PROJECT_LIMITS } from '../../app/api/project-limits.js';
+import { PROJECT_LIMITS } from '../../app/api/project-limits.js';
 
 function validateDate(value: unknown): string {
   const text = optionalText(value, 'date', 10);

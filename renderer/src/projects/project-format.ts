@@ -1,0 +1,22 @@
+/** How projects and cases read on screen: moments of change and kinds of case. */
+import type { CaseKind } from '../../../app/api/contract.js';
+
+const changeFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+
+/** A stored ISO moment in local time; a dash, never "Invalid Date", when it cannot be read. */
+export function describeMoment(iso: string | null): string {
+  if (!iso) return '–';
+  const date = new Date(iso);
+  return Number.isFinite(date.getTime()) ? changeFormat.format(date) : '–';
+}
+
+export const CASE_KIND_LABELS: Readonly<Record<CaseKind, string>> = {
+  pipe: 'Pipe run',
+  flat: 'Flat surface',
+  wall: 'Wall or roof',
+};
+
+/** The kind of a stored case, read defensively: inputs are versioned JSON that a later version may extend. */
+export function describeCaseKind(kind: unknown): string {
+  return typeof kind === 'string' && kind in CASE_KIND_LABELS ? CASE_KIND_LABELS[kind as CaseKind] : 'Other';
+}
