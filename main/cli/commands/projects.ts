@@ -3,14 +3,26 @@ import path from 'node:path';
 import type { CliCommand } from '../command.js';
 import { projectFileFromJson, projectFileToJson } from '../../services/project-file.js';
 import { parseArgs, withServices } from './materials.js';
+import { solveProject } from './project-solve.js';
+
+function caseTitle(inputs: unknown): string | undefined {
+  const title = typeof inputs === 'object' && inputs !== null ? (inputs as Record<string, unknown>)['title'] : undefined;
+  return typeof title === 'string' && title.trim() !== '' ? title.slice(0, 200) : undefined;
+}
 
 /**
  * lamina projects list [--deleted] [--json]
  * lamina projects export ID FILE.json|-
  * lamina projects import FILE.json
+ * lamina projects create NAME [--client TEXT] [--site TEXT] [--reference TEXT] [--engineer TEXT]
+ * lamina projects add-case ID CASE.json [--name NAME]   (a case file whose materials are library ids)
+ * lamina projects solve ID [--format json|text]          (recomputes every case from its stored inputs)
  * Every form accepts --db PATH (else LAMINA_DB, else the per-system default).
  */
-const USAGE = 'usage: lamina projects list [--deleted] [--json] | export ID FILE | import FILE [--db PATH]';
+const USAGE =
+  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE | add-case ID CASE.json [--name NAME] | solve ID [--format json|text] [--db PATH]';
+
+const CREATE_FIELDS = ['client', 'site', 'reference', 'engineer'] as const;
 
 export const projectsCommand: CliCommand = async (args, io) => {
   const [sub, ...rest] = args;
@@ -18,7 +30,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
     io.stdout(`${USAGE}\n`);
     return 0;
   }
-  const parsed = parseArgs(rest, ['db'], ['json', 'deleted']);
+  const parsed = parseArgs(rest, ['db', 'name', 'format', ...CREATE_FIELDS], ['json', 'deleted']);
   if (typeof parsed === 'string') {
     io.stderr(`${parsed} ${USAGE}\n`);
     return 2;
@@ -60,6 +72,53 @@ export const projectsCommand: CliCommand = async (args, io) => {
         io.stdout(`Imported project ${result.project.id} "${result.project.name}" with ${result.project.cases.length} case(s); materials reused ${result.materialsReused}, added ${result.materialsCreated}.\n`);
         return 0;
       });
+    }
+    case 'create': {
+      const name = parsed.positional[0];
+      if (!name) {
+        io.stderr(`projects create needs a project name. ${USAGE}\n`);
+        return 2;
+      }
+      const fields: Record<string, string> = { name };
+      for (const key of CREATE_FIELDS) if (parsed.options.has(key)) fields[key] = parsed.options.get(key)!;
+      return withServices(io, db, ({ projects }) => {
+        const project = projects.create(fields);
+        io.stdout(`Created project ${project.id} "${project.name}".\n`);
+        return 0;
+      });
+    }
+    case 'add-case': {
+      const [id, file] = parsed.positional;
+      if (!id || !/^\d+$/.test(id) || !file) {
+        io.stderr(`projects add-case needs a project id (a whole number) and a case file. ${USAGE}\n`);
+        return 2;
+      }
+      let inputs: unknown;
+      try {
+        inputs = JSON.parse(fs.readFileSync(path.resolve(io.cwd, file), 'utf8'));
+      } catch (error) {
+        io.stderr(`projects add-case: ${file} ${error instanceof SyntaxError ? `is not valid JSON (${error.message})` : `cannot be read (${(error as Error).message})`}.\n`);
+        return 2;
+      }
+      if (JSON.stringify(inputs).includes('"material":')) {
+        io.stderr(`projects add-case: ${file} gives materials inline; a stored case refers to library materials by "materialId" (see lamina materials list).\n`);
+        return 2;
+      }
+      const name = parsed.options.get('name') ?? caseTitle(inputs) ?? path.basename(file, '.json');
+      return withServices(io, db, ({ projects }) => {
+        const added = projects.addCase(Number(id), { name, inputs });
+        io.stdout(`Added case ${added.id} "${added.name}" to project ${id}.\n`);
+        return 0;
+      });
+    }
+    case 'solve': {
+      const id = parsed.positional[0];
+      const format = parsed.options.get('format') ?? 'json';
+      if (!id || !/^\d+$/.test(id) || (format !== 'json' && format !== 'text')) {
+        io.stderr(`projects solve needs a project id (a whole number); --format is json or text. ${USAGE}\n`);
+        return 2;
+      }
+      return withServices(io, db, ({ projects, materials }) => solveProject(io, projects.open(Number(id)), materials, format));
     }
     default:
       io.stderr(`${sub === undefined ? 'projects needs a subcommand.' : `unknown subcommand "${sub}".`} ${USAGE}\n`);
