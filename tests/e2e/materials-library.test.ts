@@ -4,41 +4,19 @@
  * a refused deletion, an all-or-nothing CSV import with a bad row, a backup made and restored, and
  * a damaged database reported at start with the offer to restore. Screenshots go to test-results/.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
-import { ensureRendererBuilt } from '../../main/server/renderer-build.js';
 import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
-import { launchChromium } from './chromium.js';
+import { resultsFolder, useBrowserSession } from './browser-session.js';
 
-const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
-const resultsFolder = path.join(projectRoot, 'test-results');
-const folders: string[] = [];
-let browser: Browser;
-
-beforeAll(async () => {
-  await ensureRendererBuilt(projectRoot);
-  browser = await launchChromium();
-  fs.mkdirSync(resultsFolder, { recursive: true });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  for (const folder of folders) fs.rmSync(folder, { recursive: true, force: true });
-});
-
-function tempDatabasePath(): string {
-  const folder = fs.mkdtempSync(path.join(os.tmpdir(), 'lamina-library-e2e-'));
-  folders.push(folder);
-  return path.join(folder, 'lamina.sqlite');
-}
+const session = useBrowserSession('lamina-library-e2e-');
+const tempDatabasePath = (): string => path.join(session.tempFolder(), 'lamina.sqlite');
 
 async function openPage(server: BrowserServer): Promise<{ page: Page; problems: string[] }> {
-  const page = await browser.newPage({ viewport: { width: 1100, height: 900 } });
+  const page = await session.browser().newPage({ viewport: { width: 1100, height: 900 } });
   const problems: string[] = [];
   page.on('console', (message) => {
     if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()}`);

@@ -5,40 +5,18 @@
  * recycle bin (delete, restore, empty), the cases list (rename, remove), and a project exported to
  * a file and imported from it. Screenshots go to test-results/. The scenario is invented.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import fs from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
-import { ensureRendererBuilt } from '../../main/server/renderer-build.js';
-import { launchChromium } from './chromium.js';
+import { resultsFolder, useBrowserSession } from './browser-session.js';
 
-const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..');
-const resultsFolder = path.join(projectRoot, 'test-results');
-const folders: string[] = [];
-let browser: Browser;
-
-beforeAll(async () => {
-  await ensureRendererBuilt(projectRoot);
-  browser = await launchChromium();
-  fs.mkdirSync(resultsFolder, { recursive: true });
-});
-
-afterAll(async () => {
-  await browser?.close();
-  for (const folder of folders) fs.rmSync(folder, { recursive: true, force: true });
-});
-
-function tempFolder(): string {
-  const folder = fs.mkdtempSync(path.join(os.tmpdir(), 'lamina-projects-e2e-'));
-  folders.push(folder);
-  return folder;
-}
+const session = useBrowserSession('lamina-projects-e2e-');
+const tempFolder = session.tempFolder;
 
 async function openProjectsView(server: BrowserServer, problems: string[]): Promise<Page> {
-  const page = await browser.newPage({ viewport: { width: 1100, height: 900 } });
+  const page = await session.browser().newPage({ viewport: { width: 1100, height: 900 } });
   page.on('console', (message) => {
     if (message.type() === 'error' || message.type() === 'warning') problems.push(`${message.type()}: ${message.text()}`);
   });
