@@ -6,6 +6,8 @@ import { isObject } from '../../app/cases/case-fields.js';
 import { parseConductionCaseFile } from '../../app/cases/conduction-case-file.js';
 import { solveSteady, solveTransient } from '../../app/fe/index.js';
 import type { MaterialProperties } from '../../app/materials/material-properties.js';
+import type { MaterialsService } from '../services/materials-service.js';
+import { NotFoundError } from '../services/service-errors.js';
 import { conductionSteadyText, conductionTransientText } from './format/conduction-text.js';
 import { flatText, pipeText } from './format/pipe-and-flat-text.js';
 import { parsePipeCaseFile } from '../../app/cases/pipe-case-file.js';
@@ -77,6 +79,21 @@ const wall: CaseKind = {
 };
 
 export const CASE_KINDS: readonly CaseKind[] = [conduction, pipe, flat, wall];
+
+/**
+ * Resolves a case file's "materialId" from the library. A missing id gives undefined, so that the
+ * case parser reports it naming the field; any other storage failure is not hidden.
+ */
+export function libraryMaterialResolver(materials: MaterialsService): (id: number) => MaterialProperties | undefined {
+  return (id) => {
+    try {
+      return materials.get(id);
+    } catch (error) {
+      if (error instanceof NotFoundError) return undefined;
+      throw error;
+    }
+  };
+}
 
 /** The case kind a parsed file declares, or a one-sentence reason it has none we know. */
 export function caseKindOf(json: unknown): CaseKind | string {

@@ -5,9 +5,8 @@
  */
 import type { Project } from '../../../app/api/project-types.js';
 import { InputError, SingularProblemError } from '../../../app/fe/errors.js';
-import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 import type { MaterialsService } from '../../services/materials-service.js';
-import { caseKindOf } from '../case-kinds.js';
+import { caseKindOf, libraryMaterialResolver } from '../case-kinds.js';
 import type { CliIO } from '../command.js';
 
 interface CaseOutcome {
@@ -20,13 +19,7 @@ interface CaseOutcome {
 }
 
 export function solveProject(io: CliIO, project: Project, materials: MaterialsService, format: 'json' | 'text'): number {
-  const resolve = (id: number): MaterialProperties | undefined => {
-    try {
-      return materials.get(id);
-    } catch {
-      return undefined; // the case parser names the field whose material is missing
-    }
-  };
+  const resolve = libraryMaterialResolver(materials);
   const outcomes: CaseOutcome[] = project.cases.map((c) => {
     const kind = caseKindOf(c.inputs);
     if (typeof kind === 'string') return { id: c.id, name: c.name, kind: String(c.inputs.kind), error: kind };

@@ -9,7 +9,7 @@ import path from 'node:path';
 import { InputError, SingularProblemError } from '../../../app/fe/errors.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 import type { CliCommand, CliIO } from '../command.js';
-import { caseKindOf, CASE_KINDS, type SolvedCase } from '../case-kinds.js';
+import { caseKindOf, CASE_KINDS, libraryMaterialResolver, type SolvedCase } from '../case-kinds.js';
 import { parseArgs, withServices } from './materials.js';
 
 const SOLVE_HELP = `lamina solve CASE.json [--format json|text] [--db PATH]
@@ -73,15 +73,7 @@ export const solveCommand: CliCommand = async (args, io) => {
     return 0;
   };
   if (!needsLibrary) return solveWith(() => undefined);
-  return withServices(io, parsed.options.get('db'), (services) =>
-    solveWith((id) => {
-      try {
-        return services.materials.get(id);
-      } catch {
-        return undefined; // the case parser names the field whose material is missing
-      }
-    }),
-  );
+  return withServices(io, parsed.options.get('db'), (services) => solveWith(libraryMaterialResolver(services.materials)));
 };
 
 function usage(io: CliIO, message: string): number {
