@@ -13,6 +13,7 @@ import { PRODUCT_NAME } from '../server/app-identity.js';
 import { LibraryHost } from '../server/library-host.js';
 import { DATABASE_FILE_NAME } from '../storage/database-path.js';
 import { CONTENT_SECURITY_POLICY } from '../server/security-policy.js';
+import { isAppPage, mayNavigate } from './navigation-policy.js';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 /** build/main/electron/ -> build/renderer/index.html */
@@ -38,19 +39,25 @@ function lockDownSession(): void {
   ses.setPermissionCheckHandler(() => false);
 }
 
-/** Applies to every web contents, including any a future feature creates. */
+/**
+ * Applies to every web contents, including any a future feature creates. will-navigate covers the
+ * main frame only; will-frame-navigate also covers frames inside the page (the rules are in
+ * navigation-policy.ts).
+ */
 function refuseLeavingTheApp(contents: WebContents): void {
   contents.setWindowOpenHandler(() => ({ action: 'deny' }));
-  contents.on('will-navigate', (event, url) => {
-    if (url !== RENDERER_URL) event.preventDefault();
+  contents.on('will-navigate', (event) => {
+    if (!mayNavigate(event, RENDERER_URL)) event.preventDefault();
+  });
+  contents.on('will-frame-navigate', (event) => {
+    if (!mayNavigate(event, RENDERER_URL)) event.preventDefault();
   });
   contents.on('will-redirect', (event) => event.preventDefault());
   contents.on('will-attach-webview', (event) => event.preventDefault());
 }
 
 function isTrustedSender(event: IpcMainInvokeEvent): boolean {
-  const url = event.senderFrame?.url ?? '';
-  return url.split('#', 1)[0] === RENDERER_URL;
+  return isAppPage(event.senderFrame?.url ?? '', RENDERER_URL);
 }
 
 /**
