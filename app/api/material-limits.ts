@@ -4,14 +4,9 @@
  * same values with the same ranges. Wide enough for every real material, narrow enough to catch a
  * unit slip.
  */
-export interface NumberRange {
-  readonly min: number;
-  readonly max: number;
-  /** When true the bound itself is not allowed. */
-  readonly minExclusive?: boolean;
-  readonly maxExclusive?: boolean;
-  readonly unit: string;
-}
+import type { NumberRange } from '../base/number-range.js';
+
+export { describeRange, isInRange, type NumberRange } from '../base/number-range.js';
 
 export const MATERIAL_LIMITS = {
   name: 120,
@@ -28,17 +23,3 @@ export const MATERIAL_LIMITS = {
   maxPolynomialTerms: 6,
   maxTablePoints: 100,
 } as const satisfies Record<string, number | NumberRange>;
-
-/** "at least 1 and at most 1000 W/(m·K)", the wording every range message uses. */
-export function describeRange(range: NumberRange): string {
-  const low = `${range.minExclusive ? 'more than' : 'at least'} ${range.min}`;
-  const high = `${range.maxExclusive ? 'less than' : 'at most'} ${range.max}`;
-  return `${low} and ${high}${range.unit ? ' ' + range.unit : ''}`;
-}
-
-export function isInRange(value: number, range: NumberRange): boolean {
-  if (!Number.isFinite(value)) return false;
-  const tooLow = range.minExclusive ? value <= range.min : value < range.min;
-  const tooHigh = range.maxExclusive ? value >= range.max : value > range.max;
-  return !tooLow && !tooHigh;
-}

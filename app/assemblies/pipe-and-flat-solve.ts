@@ -13,6 +13,7 @@ import { outerSurfaceExchange, type OuterSurfaceExchangeFunction, type OuterSurf
 import { personnelProtectionCheck, type PersonnelProtectionResult } from '../checks/personnel-protection.js';
 import { serviceTemperatureCheck, type ServiceTemperatureResult } from '../checks/service-temperature.js';
 import { surfaceCondensationCheck, type SurfaceCondensationResult } from '../checks/surface-condensation.js';
+import { conductivityUseWarnings } from '../checks/plausibility-warnings.js';
 import { toEngineLayers } from './layer-build.js';
 import type { AmbientConditions, InnerCondition } from './pipe-and-flat-inputs.js';
 
@@ -175,7 +176,19 @@ export function solveStack(problem: StackProblem): StackSolution {
       radiation: converged.radiation,
       sinkTemperature: converged.ambient,
     },
-    warnings: converged.warnings,
+    warnings: [
+      ...converged.warnings,
+      ...conductivityUseWarnings(
+        layers.map((l, i) => ({
+          name: l.name,
+          conductivity: stack[i]!.material.conductivity,
+          lowest: Math.min(l.innerTemperature, l.outerTemperature),
+          highest: Math.max(l.innerTemperature, l.outerTemperature),
+          minServiceTemperature: stack[i]!.material.minServiceTemperature ?? null,
+          maxServiceTemperature: stack[i]!.material.maxServiceTemperature ?? null,
+        })),
+      ),
+    ],
     energyBalance: { residual: engine.balance.residual, relativeResidual: engine.balance.relativeResidual },
     iterations: engine.iterations,
     dewPoint: surfaceCondensation.dewPoint,

@@ -8,6 +8,7 @@
  * any temperature-dependent conductivity. Results keep full precision; rounding is for display.
  * Heat flows are positive outwards (heat lost by the pipe); a chilled line gives negative values.
  */
+import { geometryPlausibilityWarnings } from '../checks/plausibility-warnings.js';
 import type { OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
 import {
   methodNeedsEmissivity,
@@ -78,9 +79,11 @@ export function calculatePipe(input: PipeInput): PipeResult {
   });
 
   const surfaceAreaPerMetre = Math.PI * outerDiameter;
+  const warnings = [...geometryPlausibilityWarnings(innerRadius), ...solution.warnings];
   const heatLoss = heatOut * input.length;
   return {
     ...solution,
+    warnings,
     heatLossPerMetre: heatOut,
     heatLoss,
     heatFlowDensityAtSurface: heatOut / surfaceAreaPerMetre,

@@ -3,6 +3,8 @@
  * (e.g. `layers[2].thickness`) and the allowed range, so a bad value never reaches the engine as NaN.
  */
 import classTable from '../../data/physics/humidity-classes.json' with { type: 'json' };
+import { requireNumberIn } from '../base/field-checks.js';
+import { QUANTITY_RANGES } from '../base/quantity-ranges.js';
 import { InputError } from '../fe/errors.js';
 import { AIR_LAYER_MAXIMUM_THICKNESS, airLayerVentilation, HEAT_FLOW_DIRECTIONS } from '../physics/index.js';
 import type { MonthlyClimate } from './wall-climate.js';
@@ -10,9 +12,7 @@ import { isAirLayer, type AirCondition, type WallInput } from './wall-input.js';
 
 const VENTILATIONS = ['unventilated', 'slightly-ventilated', 'well-ventilated'] as const;
 
-function shown(value: unknown): string {
-  return typeof value === 'number' ? String(value) : (JSON.stringify(value) ?? String(value));
-}
+import { shownValue as shown } from '../base/shown-value.js';
 
 function finite(field: string, value: unknown, unit: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
@@ -87,8 +87,7 @@ export function validateWallInput(input: WallInput): void {
         throw new InputError(`${f}.ventilation`, `${f}.ventilation must be one of ${VENTILATIONS.map((v) => `'${v}'`).join(', ')} (got ${shown(layer.ventilation)}).`);
       }
       if (layer.openingArea !== undefined) {
-        const a = finite(`${f}.openingArea`, layer.openingArea, 'mm² per m or per m²');
-        if (a < 0) throw new InputError(`${f}.openingArea`, `${f}.openingArea must be 0 mm² per m (or per m²) or more (got ${a}).`);
+        const a = requireNumberIn(`${f}.openingArea`, layer.openingArea, QUANTITY_RANGES.openingArea);
         const implied = airLayerVentilation(a);
         if (implied !== layer.ventilation) {
           throw new InputError(
@@ -110,7 +109,7 @@ export function validateWallInput(input: WallInput): void {
       }
       return;
     }
-    positive(`${f}.thickness`, layer.thickness, 'm');
+    requireNumberIn(`${f}.thickness`, layer.thickness, QUANTITY_RANGES.wallLayerThickness);
     if (!layer.material || typeof layer.material !== 'object' || !layer.material.conductivity) {
       throw new InputError(`${f}.material`, `${f}.material must give the material's properties, at least its conductivity in W/(m·K).`);
     }
@@ -127,7 +126,7 @@ export function validateWallInput(input: WallInput): void {
       if (v > 10) throw new InputError(`surfaceResistances.${side}`, `surfaceResistances.${side} must be greater than 0 and at most 10 m²·K/W (got ${v}).`);
     }
   }
-  if (input.area !== undefined) positive('area', input.area, 'm²');
+  if (input.area !== undefined) requireNumberIn('area', input.area, QUANTITY_RANGES.area);
   const h = input.moisture?.insideHumidity;
   if (h !== undefined && h.kind !== 'measured' && h.kind !== 'class') {
     throw new InputError('moisture.insideHumidity.kind', `moisture.insideHumidity.kind must be 'measured' or 'class' (got ${shown((h as { kind?: unknown }).kind)}).`);

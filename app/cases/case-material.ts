@@ -4,11 +4,13 @@
  * a pipe, a flat surface and a wall. Inline conductivity is a number (W/(m·K)) or a conductivity
  * model; μ is a number or "vapour-tight" (JSON has no Infinity); missing optional fields are null.
  */
-import type { ConductivityModel } from '../fe/conductivity.js';
-import { InputError } from '../fe/errors.js';
-import { validateConductivity } from '../fe/validate.js';
+import { MATERIAL_LIMITS } from '../api/material-limits.js';
+import { optionalNumberIn } from '../base/field-checks.js';
+import { InputError } from '../base/input-error.js';
+import type { NumberRange } from '../base/number-range.js';
+import { validateConductivityModel } from '../materials/conductivity-checks.js';
 import { MATERIAL_CATEGORIES, type MaterialCategory, type MaterialProperties } from '../materials/material-properties.js';
-import { isObject, rejectUnknownKeys, shown, type JsonObject } from './case-fields.js';
+import { isObject, rejectUnknownKeys, requireString, shown, type JsonObject } from './case-fields.js';
 
 export type MaterialResolver = (id: number) => MaterialProperties | undefined;
 
@@ -16,12 +18,16 @@ type Json = JsonObject;
 
 const onlyKeys = (o: Json, field: string, allowed: readonly string[]) => rejectUnknownKeys(o, allowed, field);
 
-function optionalNumber(o: Json, key: string, field: string, unit: string): number | null {
-  const v = o[key];
-  if (v === undefined || v === null) return null;
-  if (typeof v !== 'number' || !Number.isFinite(v)) throw new InputError(`${field}.${key}`, `${field}.${key} must be a number in ${unit} or null (got ${shown(v)}).`);
-  return v;
+/** An optional number of the material in its documented range (the library's own limits). */
+function optionalNumber(o: Json, key: string, field: string, range: NumberRange): number | null {
+  return optionalNumberIn(`${field}.${key}`, o[key], range);
 }
+
+const MU_RANGE: NumberRange = { ...MATERIAL_LIMITS.vapourResistanceFactor, unit: '(dimensionless; 1 for still air) or "vapour-tight"' };
+/** s_d of a membrane; 0 is no layer at all. */
+const SD_RANGE: NumberRange = { ...MATERIAL_LIMITS.equivalentAirLayerThickness, minExclusive: true };
+/** 0 is allowed here (a perfect reflector as a limit case); the library keeps its own. */
+const EMISSIVITY_RANGE: NumberRange = { min: 0, max: 1, unit: '' };
 
 const MATERIAL_KEYS = [
   'name',
@@ -41,35 +47,33 @@ const MATERIAL_KEYS = [
 export function parseInlineMaterial(value: unknown, field: string, defaultCategory: MaterialCategory): MaterialProperties {
   if (!isObject(value)) throw new InputError(field, `${field} must be an object with at least a name and a conductivity in W/(m·K).`);
   onlyKeys(value, field, MATERIAL_KEYS);
-  if (typeof value.name !== 'string' || value.name.trim() === '') throw new InputError(`${field}.name`, `${field}.name must be a non-empty text.`);
+  if (typeof value.name !== 'string' || value.name.trim() === '' || value.name.length > MATERIAL_LIMITS.name) {
+    throw new InputError(`${field}.name`, `${field}.name must be a text of 1 to ${MATERIAL_LIMITS.name} characters.`);
+  }
+  if (value.source !== undefined) requireString(value.source, `${field}.source`, MATERIAL_LIMITS.source);
   const category = value.category ?? defaultCategory;
   if (!(MATERIAL_CATEGORIES as readonly unknown[]).includes(category)) {
     throw new InputError(`${field}.category`, `${field}.category must be one of ${MATERIAL_CATEGORIES.join(', ')} (got ${shown(category)}).`);
   }
   const c = value.conductivity;
-  const conductivity: ConductivityModel = typeof c === 'number' ? { kind: 'constant', value: c } : (c as ConductivityModel);
-  validateConductivity(conductivity, `${field}.conductivity`);
-  let mu: number | null;
-  if (value.vapourResistanceFactor === 'vapour-tight') mu = Number.POSITIVE_INFINITY;
-  else {
-    mu = optionalNumber(value, 'vapourResistanceFactor', field, 'dimensionless (or "vapour-tight")');
-    if (mu !== null && !(mu > 0)) throw new InputError(`${field}.vapourResistanceFactor`, `${field}.vapourResistanceFactor must be greater than 0 (1 for still air) or "vapour-tight" (got ${mu}).`);
+  const conductivity = validateConductivityModel(typeof c === 'number' ? { kind: 'constant', value: c } : c, `${field}.conductivity`);
+  const mu = value.vapourResistanceFactor === 'vapour-tight' ? Number.POSITIVE_INFINITY : optionalNumber(value, 'vapourResistanceFactor', field, MU_RANGE);
+  const low = optionalNumber(value, 'minServiceTemperature', field, MATERIAL_LIMITS.temperature);
+  const high = optionalNumber(value, 'maxServiceTemperature', field, MATERIAL_LIMITS.temperature);
+  if (low !== null && high !== null && !(low < high)) {
+    throw new InputError(`${field}.maxServiceTemperature`, `${field}.maxServiceTemperature must be above ${field}.minServiceTemperature (${low} °C) (got ${high}).`);
   }
-  const sd = optionalNumber(value, 'equivalentAirLayerThickness', field, 'm');
-  if (sd !== null && !(sd > 0)) throw new InputError(`${field}.equivalentAirLayerThickness`, `${field}.equivalentAirLayerThickness must be greater than 0 m (got ${sd}).`);
-  const emissivity = optionalNumber(value, 'emissivity', field, 'fraction 0..1');
-  if (emissivity !== null && (emissivity < 0 || emissivity > 1)) throw new InputError(`${field}.emissivity`, `${field}.emissivity must be from 0 to 1 (got ${emissivity}).`);
   return {
     name: value.name,
     category: category as MaterialCategory,
     conductivity,
-    density: optionalNumber(value, 'density', field, 'kg/m³'),
-    specificHeat: optionalNumber(value, 'specificHeat', field, 'J/(kg·K)'),
+    density: optionalNumber(value, 'density', field, MATERIAL_LIMITS.density),
+    specificHeat: optionalNumber(value, 'specificHeat', field, MATERIAL_LIMITS.specificHeat),
     vapourResistanceFactor: mu,
-    equivalentAirLayerThickness: sd,
-    emissivity,
-    minServiceTemperature: optionalNumber(value, 'minServiceTemperature', field, '°C'),
-    maxServiceTemperature: optionalNumber(value, 'maxServiceTemperature', field, '°C'),
+    equivalentAirLayerThickness: optionalNumber(value, 'equivalentAirLayerThickness', field, SD_RANGE),
+    emissivity: optionalNumber(value, 'emissivity', field, EMISSIVITY_RANGE),
+    minServiceTemperature: low,
+    maxServiceTemperature: high,
     ...(typeof value.source === 'string' ? { source: value.source } : {}),
   };
 }

@@ -7,7 +7,8 @@
 import { InputError } from '../fe/errors.js';
 import type { FaceCondition, Layer, SteadyProblem, TransientProblem } from '../fe/problem.js';
 import { validateSteadyProblem, validateTransientProblem } from '../fe/validate.js';
-import { isObject, rejectUnknownKeys, requireArray, requireObject, requireSchemaVersion, requireString } from './case-fields.js';
+import { checkConductionRanges } from './conduction-ranges.js';
+import { isObject, rejectUnknownKeys, requireArray, requireObject, requireSchemaVersion, requireString, shown } from './case-fields.js';
 
 export const CONDUCTION_CASE_SCHEMA_VERSION = 1;
 
@@ -23,7 +24,7 @@ export function parseConductionCaseFile(json: unknown): ConductionCase {
   const file = requireObject(json, 'case');
   rejectUnknownKeys(file, TOP_KEYS, '');
   requireSchemaVersion(file, CONDUCTION_CASE_SCHEMA_VERSION);
-  if (file['kind'] !== 'conduction') throw new InputError('kind', `kind must be "conduction" for this case file; got ${JSON.stringify(file['kind'])}.`);
+  if (file['kind'] !== 'conduction') throw new InputError('kind', `kind must be "conduction" for this case file; got ${shown(file['kind'])}.`);
   const title = file['title'] === undefined ? 'Untitled case' : requireString(file['title'], 'title');
   if (file['notes'] !== undefined) requireString(file['notes'], 'notes', 5000);
 
@@ -48,6 +49,8 @@ export function parseConductionCaseFile(json: unknown): ConductionCase {
   if (base.options) rejectUnknownKeys(base.options as Record<string, unknown>, ['order', 'temperatureTolerance', 'maxIterations'], 'options');
 
   const analysis = file['analysis'] === undefined ? { kind: 'steady' } : requireObject(file['analysis'], 'analysis');
+  validateSteadyProblem(base, analysis['kind'] === 'transient');
+  checkConductionRanges(base, analysis);
   if (analysis['kind'] === 'steady') {
     rejectUnknownKeys(analysis, ANALYSIS_KEYS.steady, 'analysis');
     validateSteadyProblem(base);
@@ -68,5 +71,5 @@ export function parseConductionCaseFile(json: unknown): ConductionCase {
     validateTransientProblem(problem);
     return { title, analysis: 'transient', problem };
   }
-  throw new InputError('analysis.kind', `analysis.kind must be "steady" or "transient"; got ${JSON.stringify(analysis['kind'])}.`);
+  throw new InputError('analysis.kind', `analysis.kind must be "steady" or "transient"; got ${shown(analysis['kind'])}.`);
 }

@@ -18,7 +18,7 @@
 import { InputError } from '../fe/errors.js';
 import { resolveCaseMaterial, type MaterialResolver } from './case-material.js';
 import { validatePipeInput, type PipeInput } from '../assemblies/pipe-input.js';
-import { rejectUnknownKeys, requireObject, requireSchemaVersion, requireString, type JsonObject } from './case-fields.js';
+import { rejectUnknownKeys, requireObject, requireSchemaVersion, requireString, shown, type JsonObject } from './case-fields.js';
 
 export type { MaterialResolver } from './case-material.js';
 
@@ -42,7 +42,7 @@ export function caseEnvelope(json: unknown, kind: 'pipe' | 'flat', schemaVersion
   const file = requireObject(json, 'case');
   rejectUnknownKeys(file, topKeys, '');
   requireSchemaVersion(file, schemaVersion);
-  if (file['kind'] !== kind) throw new InputError('kind', `kind must be "${kind}" for this case file; got ${JSON.stringify(file['kind'])}.`);
+  if (file['kind'] !== kind) throw new InputError('kind', `kind must be "${kind}" for this case file; got ${shown(file['kind'])}.`);
   if (file['title'] !== undefined) requireString(file['title'], 'title');
   if (file['notes'] !== undefined) requireString(file['notes'], 'notes', 5000);
   if (file['inner'] !== undefined) rejectUnknownKeys(requireObject(file['inner'], 'inner'), ['kind', 'temperature', 'coefficient'], 'inner');

@@ -2,16 +2,8 @@
  * Typed errors raised by the engine. Both carry a message that is one sentence a user can act on.
  */
 
-/** Bad input: names the field (a path such as `layers[1].thickness`) and the allowed range. */
-export class InputError extends Error {
-  override readonly name = 'InputError';
-  constructor(
-    readonly field: string,
-    message: string,
-  ) {
-    super(message);
-  }
-}
+/** Bad input: one error type for the whole engine, defined in app/base. */
+export { InputError } from '../base/input-error.js';
 
 /** A nonlinear solve that did not reach its tolerance; never returned as if converged. */
 export class ConvergenceError extends Error {

@@ -5,9 +5,7 @@
 import { InputError } from './errors.js';
 import { KELVIN_OFFSET } from './constants.js';
 
-function shown(value: unknown): string {
-  return typeof value === 'number' ? String(value) : JSON.stringify(value) ?? String(value);
-}
+import { shownValue as shown } from '../base/shown-value.js';
 
 /** A finite number; returns it. */
 export function requireFinite(field: string, value: unknown, unit = ''): number {

@@ -3,8 +3,10 @@
  * the result as JSON and as a readable text summary. Adding a case kind means adding one entry here.
  */
 import { isObject } from '../../app/cases/case-fields.js';
+import { shownValue } from '../../app/base/shown-value.js';
 import { parseConductionCaseFile } from '../../app/cases/conduction-case-file.js';
 import { solveSteady, solveTransient } from '../../app/fe/index.js';
+import { conductionWarnings } from '../../app/cases/conduction-warnings.js';
 import type { MaterialProperties } from '../../app/materials/material-properties.js';
 import type { MaterialsService } from '../services/materials-service.js';
 import { NotFoundError } from '../services/service-errors.js';
@@ -37,10 +39,18 @@ const conduction: CaseKind = {
     const parsed = parseConductionCaseFile(json);
     if (parsed.analysis === 'steady') {
       const result = solveSteady(parsed.problem);
-      return { json: { kind: 'conduction', title: parsed.title, analysis: 'steady', result }, text: () => conductionSteadyText(parsed.title, result) };
+      const warnings = conductionWarnings(parsed.problem, result.positions, [result.temperatures]);
+      return {
+        json: { kind: 'conduction', title: parsed.title, analysis: 'steady', result, warnings },
+        text: () => conductionSteadyText(parsed.title, result) + warningLines(warnings),
+      };
     }
     const result = solveTransient(parsed.problem);
-    return { json: { kind: 'conduction', title: parsed.title, analysis: 'transient', result }, text: () => conductionTransientText(parsed.title, result) };
+    const warnings = conductionWarnings(parsed.problem, result.positions, result.temperatures);
+    return {
+      json: { kind: 'conduction', title: parsed.title, analysis: 'transient', result, warnings },
+      text: () => conductionTransientText(parsed.title, result) + warningLines(warnings),
+    };
   },
 };
 
@@ -78,6 +88,8 @@ const wall: CaseKind = {
   },
 };
 
+const warningLines = (warnings: readonly string[]) => warnings.map((w) => `Warning: ${w}\n`).join('');
+
 export const CASE_KINDS: readonly CaseKind[] = [conduction, pipe, flat, wall];
 
 /**
@@ -99,5 +111,5 @@ export function libraryMaterialResolver(materials: MaterialsService): (id: numbe
 export function caseKindOf(json: unknown): CaseKind | string {
   if (!isObject(json)) return 'the case file must hold a JSON object.';
   const kind = CASE_KINDS.find((k) => k.kind === json['kind']);
-  return kind ?? `kind must be one of ${CASE_KINDS.map((k) => `"${k.kind}"`).join(', ')}; got ${JSON.stringify(json['kind'])}.`;
+  return kind ?? `kind must be one of ${CASE_KINDS.map((k) => `"${k.kind}"`).join(', ')}; got ${shownValue(json['kind'])}.`;
 }

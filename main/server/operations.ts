@@ -13,6 +13,7 @@ import { fitConductivityCurve } from '../services/conductivity-fit.js';
 import { validateMaterialInput } from '../services/material-validation.js';
 import { projectFileFromJson, projectFileToJson } from '../services/project-file.js';
 import { PROJECT_LIMITS } from '../services/project-validation.js';
+import { InputError } from '../../app/base/input-error.js';
 import { InvalidInputError, NotFoundError, RefusedError } from '../services/service-errors.js';
 import { isPlainObject, optionalText, rejectUnknownKeys, requireId, requireOneOf, requireText } from '../services/validate.js';
 import { StorageError } from '../storage/storage-error.js';
@@ -203,7 +204,7 @@ export function createOperations(context: OperationContext): OperationHandlers {
 /** HTTP status and ApiError for a failure the user can act on; undefined for a bug (logged, not shown). */
 export function describeFailure(error: unknown): { status: number; body: ApiError } | undefined {
   if (error instanceof InvalidRequestError) return { status: 400, body: withField(error.message, error.field) };
-  if (error instanceof InvalidInputError) return { status: 400, body: withField(error.message, error.field) };
+  if (error instanceof InvalidInputError || error instanceof InputError) return { status: 400, body: withField(error.message, error.field) };
   if (error instanceof NotFoundError) return { status: 404, body: { error: error.message } };
   if (error instanceof RefusedError) return { status: 409, body: { error: error.message } };
   if (error instanceof LibraryUnavailableError) return { status: 409, body: { error: error.message } };

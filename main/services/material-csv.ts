@@ -3,6 +3,7 @@ import type { CsvProblem } from '../../app/api/material-types.js';
 import { formatCsv, parseCsv, CsvSyntaxError } from '../storage/csv.js';
 import type { Material, MaterialInput } from './material-types.js';
 import { validateMaterialInput } from './material-validation.js';
+import { shownValue } from '../../app/base/shown-value.js';
 import { InvalidInputError } from './service-errors.js';
 
 /**
@@ -31,13 +32,16 @@ export interface ParsedMaterialRow {
   readonly input: MaterialInput;
 }
 
+/** A cell as a message repeats it: quoted, and cut to a readable length (a bad header can be megabytes). */
+const quotedCell = (text: string): string => shownValue(text);
+
 const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 
 function parseNumberCell(cell: string, column: string): number | null {
   const text = cell.trim();
   if (text === '') return null;
-  if (/^[+-]?\d+,\d+$/.test(text)) throw new InvalidInputError(column, `${column} "${text}" uses a comma; write decimals with a point.`);
-  if (!NUMBER.test(text)) throw new InvalidInputError(column, `${column} "${text}" is not a number.`);
+  if (/^[+-]?\d+,\d+$/.test(text)) throw new InvalidInputError(column, `${column} ${quotedCell(text)} uses a comma; write decimals with a point.`);
+  if (!NUMBER.test(text)) throw new InvalidInputError(column, `${column} ${quotedCell(text)} is not a number.`);
   return Number(text);
 }
 
@@ -54,12 +58,12 @@ function parseConductivityCell(cell: string): ConductivityModel {
       kind: 'table',
       points: rest.map((pair) => {
         const parts = pair.split(':');
-        if (parts.length !== 2) throw new InvalidInputError('conductivity', `${column} table point "${pair}" must be written temperature:conductivity.`);
+        if (parts.length !== 2) throw new InvalidInputError('conductivity', `${column} table point ${quotedCell(pair)} must be written temperature:conductivity.`);
         return [parseNumberCell(parts[0]!, `${column} temperature`) ?? NaN, parseNumberCell(parts[1]!, column) ?? NaN] as [number, number];
       }),
     };
   }
-  if (rest.length > 0) throw new InvalidInputError('conductivity', `${column} "${text}" must be a number, "poly a0 a1 ..." or "table t:λ t:λ ...".`);
+  if (rest.length > 0) throw new InvalidInputError('conductivity', `${column} ${quotedCell(text)} must be a number, "poly a0 a1 ..." or "table t:λ t:λ ...".`);
   return { kind: 'constant', value: parseNumberCell(text, column) ?? NaN };
 }
 
@@ -70,7 +74,7 @@ function checkHeader(fields: readonly string[]): string | undefined {
     const found = fields[i];
     if (found === undefined) return `the header is missing column ${i + 1}, "${expected}".`;
     if (normalise(found) !== normalise(expected)) {
-      return `column ${i + 1} of the header must be "${expected}" (values in the unit named in brackets), found "${found.trim()}".`;
+      return `column ${i + 1} of the header must be "${expected}" (values in the unit named in brackets), found ${quotedCell(found.trim())}.`;
     }
   }
   if (fields.length > MATERIAL_CSV_HEADER.length) return `the header has ${fields.length} columns; expected ${MATERIAL_CSV_HEADER.length}.`;
@@ -123,7 +127,7 @@ export function parseMaterialsCsv(text: string): { rows: ParsedMaterialRow[]; pr
       const key = input.name.toLowerCase();
       const earlier = firstLineOfName.get(key);
       if (earlier !== undefined) {
-        problems.push({ line: record.line, message: `name "${input.name}" repeats the material on line ${earlier}.` });
+        problems.push({ line: record.line, message: `name ${quotedCell(input.name)} repeats the material on line ${earlier}.` });
         continue;
       }
       firstLineOfName.set(key, record.line);

@@ -4,6 +4,7 @@ import type { MaterialInput } from './material-types.js';
 import { validateMaterialInput } from './material-validation.js';
 import { validateProjectFields, validateCaseDraft } from './project-validation.js';
 import type { ProjectFields } from './project-types.js';
+import { requireBoundedNesting } from '../../app/base/json-depth.js';
 import { InvalidInputError } from './service-errors.js';
 import { rejectUnknownKeys, requireId, requireObject } from './validate.js';
 
@@ -32,11 +33,15 @@ export function projectFileToJson(file: ProjectFile): string {
 }
 
 export function projectFileFromJson(text: string): unknown {
+  let value: unknown;
   try {
-    return JSON.parse(text, (key, value) => (key === 'vapourResistanceFactor' && value === 'inf' ? Infinity : value));
+    value = JSON.parse(text, (key, item) => (key === 'vapourResistanceFactor' && item === 'inf' ? Infinity : item));
   } catch (error) {
-    throw new InvalidInputError('file', `The project file is not valid JSON (${(error as Error).message}).`);
+    throw new InvalidInputError('file', `The project file is not valid JSON (${(error as Error).message.replace(/\s+/g, ' ')}).`);
   }
+  // Before anything walks it recursively (the checks below, a copy, a stringify).
+  requireBoundedNesting(value, 'The project file');
+  return value;
 }
 
 /** Checks the whole file before anything is written. */

@@ -2,12 +2,14 @@
  * Errors the service layer raises. Each message is one sentence that names the field or the thing
  * and what is allowed, so a form, the command line and an IPC caller can show it as it is.
  */
+import { boundedMessage } from '../../app/base/input-error.js';
+
 export class InvalidInputError extends Error {
   readonly field: string;
   constructor(field: string, message: string) {
-    super(message);
+    super(boundedMessage(message));
     this.name = 'InvalidInputError';
-    this.field = field;
+    this.field = boundedMessage(field, 120);
   }
 }
 

@@ -62,6 +62,8 @@ export function requireOneOf<T extends string>(value: unknown, field: string, al
 /** Rejects keys the caller did not mean to send (a misspelt field would otherwise be dropped silently). */
 export function rejectUnknownKeys(value: Record<string, unknown>, field: string, known: readonly string[]): void {
   for (const key of Object.keys(value)) {
-    if (!known.includes(key)) throw new InvalidInputError(`${field}.${key}`, `${field}.${key} is not a known field (allowed: ${known.join(', ')}).`);
+    if (known.includes(key)) continue;
+    const where = `${field}.${key.length > 60 ? `${key.slice(0, 59)}…` : key}`;
+    throw new InvalidInputError(where, `${where} is not a known field (allowed: ${known.join(', ')}).`);
   }
 }

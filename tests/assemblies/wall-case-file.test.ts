@@ -127,7 +127,7 @@ describe('bad inputs name the field and the allowed range', () => {
     json.layers[0] = { material: { name: 'mineral wool', conductivity: 0.035, vapourResistanceFactor: 1 }, thickness: 0 };
     const e = fieldOf(() => parseWallCaseFile(json, library));
     expect(e.field).toBe('layers[0].thickness');
-    expect(e.message).toContain('greater than 0 m');
+    expect(e.message).toBe('layers[0].thickness must be at least 0.000001 and at most 5 m (got 0).');
     const air = minimal();
     air.layers[1] = { kind: 'air-layer', thickness: -0.01, ventilation: 'unventilated' };
     expect(fieldOf(() => parseWallCaseFile(air, library)).field).toBe('layers[1].thickness');

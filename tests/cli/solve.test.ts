@@ -127,7 +127,7 @@ describe('lamina solve', () => {
     expect(r.stderr).toMatch(/inner and outer leave the temperature level undetermined/);
     const missing = lamina(['solve', path.join(dir, 'nope.json')]);
     expect(missing.code).toBe(2);
-    expect(missing.stderr).toMatch(/cannot be read/);
+    expect(missing.stderr).toBe(`lamina solve: ${path.join(dir, 'nope.json')} does not exist.\n`);
   });
 
   it('--help documents the case format; an unknown option is a usage error', () => {

@@ -1,4 +1,6 @@
 import fs from 'node:fs';
+import { InputError } from '../../../app/base/input-error.js';
+import { readCaseJson } from '../read-case-file.js';
 import path from 'node:path';
 import type { CliCommand } from '../command.js';
 import { projectFileFromJson, projectFileToJson } from '../../services/project-file.js';
@@ -95,9 +97,10 @@ export const projectsCommand: CliCommand = async (args, io) => {
       }
       let inputs: unknown;
       try {
-        inputs = JSON.parse(fs.readFileSync(path.resolve(io.cwd, file), 'utf8'));
+        inputs = readCaseJson(file, io.cwd);
       } catch (error) {
-        io.stderr(`projects add-case: ${file} ${error instanceof SyntaxError ? `is not valid JSON (${error.message})` : `cannot be read (${(error as Error).message})`}.\n`);
+        if (!(error instanceof InputError)) throw error;
+        io.stderr(`projects add-case: ${error.message}\n`);
         return 2;
       }
       if (JSON.stringify(inputs).includes('"material":')) {

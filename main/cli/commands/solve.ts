@@ -4,13 +4,12 @@
  * Reads a case file (or "-" for standard input), validates it, solves it and prints the result.
  * Materials in a case file are inline, or referenced by id from the library (--db).
  */
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { InputError, SingularProblemError } from '../../../app/fe/errors.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 import type { CliCommand, CliIO } from '../command.js';
 import { caseKindOf, CASE_KINDS, libraryMaterialResolver, type SolvedCase } from '../case-kinds.js';
 import { parseArgs, withServices } from './materials.js';
+import { readCaseJson } from '../read-case-file.js';
 
 const SOLVE_HELP = `lamina solve CASE.json [--format json|text] [--db PATH]
 
@@ -42,11 +41,10 @@ export const solveCommand: CliCommand = async (args, io) => {
   const file = parsed.positional[0]!;
   let json: unknown;
   try {
-    const text = file === '-' ? readFileSync(0, 'utf8') : readFileSync(path.resolve(io.cwd, file), 'utf8');
-    json = JSON.parse(text);
+    json = readCaseJson(file, io.cwd);
   } catch (error) {
-    const reason = error instanceof SyntaxError ? `is not valid JSON (${error.message})` : `cannot be read (${(error as Error).message})`;
-    io.stderr(`lamina solve: ${file} ${reason}.\n`);
+    if (!(error instanceof InputError)) throw error;
+    io.stderr(`lamina solve: ${error.message}\n`);
     return 2;
   }
 

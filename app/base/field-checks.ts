@@ -1,0 +1,77 @@
+/**
+ * The field checks every edge of the engine uses. Each returns the checked value or throws one
+ * InputError whose sentence names the field path and the allowed range, and repeats the offending
+ * value only as shownValue cuts it.
+ */
+import { InputError } from './input-error.js';
+import { describeRange, isInRange, type NumberRange } from './number-range.js';
+import { shownValue } from './shown-value.js';
+
+/** −273.15 °C: no temperature in °C may be at or below it. */
+export const ABSOLUTE_ZERO_CELSIUS = -273.15;
+
+export type JsonObject = Record<string, unknown>;
+
+export function isObject(value: unknown): value is JsonObject {
+  return typeof value === 'object' && value !== null && !Array.isArray(value);
+}
+
+/** A finite number within `range`. */
+export function requireNumberIn(field: string, value: unknown, range: NumberRange): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new InputError(field, `${field} must be a number, ${describeRange(range)} (got ${shownValue(value)}).`);
+  }
+  if (!isInRange(value, range)) throw new InputError(field, `${field} must be ${describeRange(range)} (got ${value}).`);
+  return value;
+}
+
+/** `requireNumberIn`, or null when the value is absent (undefined or null). */
+export function optionalNumberIn(field: string, value: unknown, range: NumberRange): number | null {
+  return value === undefined || value === null ? null : requireNumberIn(field, value, range);
+}
+
+/** A whole number from min to max. */
+export function requireWholeNumber(field: string, value: unknown, min: number, max: number): number {
+  if (typeof value !== 'number' || !Number.isInteger(value) || value < min || value > max) {
+    throw new InputError(field, `${field} must be a whole number from ${min} to ${max} (got ${shownValue(value)}).`);
+  }
+  return value;
+}
+
+export function requireObject(value: unknown, field: string): JsonObject {
+  if (!isObject(value)) throw new InputError(field, `${field} must be an object.`);
+  return value;
+}
+
+/** Refuses keys the format does not define, so a typo never silently drops an input. */
+export function rejectUnknownKeys(value: JsonObject, allowed: readonly string[], field: string): void {
+  for (const key of Object.keys(value)) {
+    if (!allowed.includes(key)) {
+      const shownKey = key.length > 60 ? `${key.slice(0, 59)}…` : key;
+      const where = field ? `${field}.${shownKey}` : shownKey;
+      throw new InputError(where, `${where} is not a known field here; allowed: ${allowed.join(', ')}.`);
+    }
+  }
+}
+
+export function requireArray(value: unknown, field: string, min: number, max: number): unknown[] {
+  if (!Array.isArray(value) || value.length < min || value.length > max) {
+    throw new InputError(field, `${field} must be a list of ${min} to ${max} entries.`);
+  }
+  return value;
+}
+
+export function requireString(value: unknown, field: string, maxLength = 200): string {
+  if (typeof value !== 'string' || value.length > maxLength) {
+    throw new InputError(field, `${field} must be text of at most ${maxLength} characters.`);
+  }
+  return value;
+}
+
+/** One of the listed options. */
+export function requireOneOf<T extends string>(field: string, value: unknown, options: readonly T[]): T {
+  if (typeof value !== 'string' || !(options as readonly string[]).includes(value)) {
+    throw new InputError(field, `${field} must be one of ${options.map((o) => `'${o}'`).join(', ')} (got ${shownValue(value)}).`);
+  }
+  return value as T;
+}

@@ -1,0 +1,47 @@
+/**
+ * The documented finite range of every kind of number a case file holds, in SI (temperatures °C).
+ * Each is wide enough for every real installation and narrow enough that the engine never meets an
+ * overflow, an allocation of absurd size or a system too ill-conditioned to solve: a value outside
+ * it is a unit slip or a typing error, refused at the edge before any work starts. The JSON
+ * Schemas in data/schemas state the same bounds (tests/cases checks that they agree).
+ * Values are common practice, no source, unless a comment says otherwise.
+ */
+import type { NumberRange } from './number-range.js';
+
+export const QUANTITY_RANGES = {
+  /** Any temperature of a raw conduction case; above 3000 °C a plausibility warning is given. */
+  conductionTemperature: { min: -273.15, minExclusive: true, max: 1e7, unit: '°C' },
+  /** A layer of a conduction case: a micrometre coating to a 100 m soil column. */
+  conductionThickness: { min: 1e-6, max: 100, unit: 'm' },
+  /** Inner radius of an axisymmetric conduction case; below 0.1 mm or above 10 m a warning is given. */
+  innerRadius: { min: 1e-6, max: 1000, unit: 'm' },
+  /** Thermal conductivity: below aerogels and vacuum panels' cores to above copper and silver. */
+  conductivity: { min: 0.001, max: 1000, unit: 'W/(m·K)' },
+  /** Coefficient of a polynomial λ(θ) term, W/(m·K) per °C to the power of the term. */
+  polynomialCoefficient: { min: -1000, max: 1000, unit: '' },
+  /** Film coefficient of a face (0 = adiabatic); condensing steam is of the order of 1e4. */
+  filmCoefficient: { min: 0, max: 1e6, unit: 'W/(m²·K)' },
+  /** Heat flux on a face, either sign: a megawatt per m² is beyond any boiler tube. */
+  heatFlux: { min: -1e7, max: 1e7, unit: 'W/m²' },
+  /** Volumetric heat generation, either sign. */
+  heatGeneration: { min: -1e9, max: 1e9, unit: 'W/m³' },
+  density: { min: 0, minExclusive: true, max: 25000, unit: 'kg/m³' },
+  specificHeat: { min: 0, minExclusive: true, max: 20000, unit: 'J/(kg·K)' },
+  contactResistance: { min: 0, max: 10, unit: 'm²·K/W' },
+  /** Time step and duration of a transient case: a millisecond to about 30 years. */
+  timeStep: { min: 1e-3, max: 1e9, unit: 's' },
+  duration: { min: 1e-3, max: 1e9, unit: 's' },
+  /** Picard/Newton tolerance on the temperature change. */
+  temperatureTolerance: { min: 1e-14, max: 1, unit: 'K' },
+  /** Surface area of a flat surface or wall. */
+  area: { min: 0, minExclusive: true, max: 1e6, unit: 'm²' },
+  /** Thickness of a wall or roof layer. */
+  wallLayerThickness: { min: 1e-6, max: 5, unit: 'm' },
+  /** Opening area of a ventilated air layer, per m length (vertical) or per m² (horizontal). */
+  openingArea: { min: 0, max: 1e6, unit: 'mm² per m or per m²' },
+  /** A surface resistance given directly (ISO 6946 tabulates 0.04 to 0.17). */
+  surfaceResistance: { min: 0, minExclusive: true, max: 10, unit: 'm²·K/W' },
+} as const satisfies Record<string, NumberRange>;
+
+/** Elements a case may ask for in one layer; the engine's own limit is higher, for benchmarks. */
+export const MAX_CASE_ELEMENTS_PER_LAYER = 10_000;
