@@ -8,7 +8,8 @@ import { DEFAULT_SEED_FOLDER, seedBuiltInMaterials } from './seed-materials.js';
 
 /**
  * The one entry point that the Electron IPC handlers, the browser-mode server and the command line
- * share: open the database (checks, migrations, backup before migrating), load the built-in
+ * share: open the database (read-only checks first, so that a file which is not a Lamina library
+ * is refused untouched; then migrations, with a backup before migrating), load the built-in
  * materials, and hand out the typed services.
  */
 export interface LaminaServices {
@@ -25,11 +26,17 @@ export interface OpenLaminaOptions {
   readonly seedFolder?: string;
   readonly backupsKept?: number;
   readonly busyTimeoutMs?: number;
+  /** Create the database's folder when it is missing (default true; see OpenOptions.createFolder). */
+  readonly createFolder?: boolean;
 }
 
 export async function openLamina(databasePath: string, options: OpenLaminaOptions = {}): Promise<LaminaServices> {
   const keep = options.backupsKept ?? DEFAULT_BACKUPS_KEPT;
-  const opened = await openDatabase(databasePath, { backupsKept: keep, ...(options.busyTimeoutMs ? { busyTimeoutMs: options.busyTimeoutMs } : {}) });
+  const opened = await openDatabase(databasePath, {
+    backupsKept: keep,
+    ...(options.busyTimeoutMs ? { busyTimeoutMs: options.busyTimeoutMs } : {}),
+    ...(options.createFolder === undefined ? {} : { createFolder: options.createFolder }),
+  });
   const context: DatabaseContext = { db: opened.db, path: opened.path };
   try {
     const materials = new MaterialsService(context);

@@ -2,9 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import Database from 'better-sqlite3';
 import type { BackupInfo } from '../../app/api/backup-types.js';
-import { inspectDatabaseFile } from './inspect-file.js';
-import { LATEST_SCHEMA_VERSION, newerSchemaError, schemaVersionOf } from './migrations.js';
-import { StorageError } from './storage-error.js';
+import { verifyDatabaseFile } from './verify-database.js';
 
 /**
  * Backups are whole-database copies made with SQLite's online backup API, kept in a `backups`
@@ -81,38 +79,6 @@ export function pruneBackups(databasePath: string, keep: number): void {
 export function isDailyBackupDue(databasePath: string, now: Date = new Date()): boolean {
   const newest = listBackups(databasePath)[0];
   return !newest || now.getTime() - Date.parse(newest.createdAt) >= DAY_MS;
-}
-
-/**
- * Checks that a file is a healthy Lamina database this version can open: header, SQLite's own
- * quick_check, schema version. Opens read-only; never writes.
- */
-export function verifyDatabaseFile(filePath: string): { schemaVersion: number } {
-  inspectDatabaseFile(filePath);
-  let db: Database.Database | undefined;
-  try {
-    db = new Database(filePath, { readonly: true, fileMustExist: true });
-    // quick_check(1): SQLite's structural check, stopping at the first problem so the message stays one line.
-    const check = String(db.pragma('quick_check(1)', { simple: true })).replace(/\s+/g, ' ').trim();
-    if (check !== 'ok') {
-      throw new StorageError('damaged', `The database ${filePath} is damaged (SQLite reports: ${check}). Restore a backup; Lamina has not changed it.`);
-    }
-    const version = schemaVersionOf(db);
-    if (version > LATEST_SCHEMA_VERSION) throw newerSchemaError(filePath, version);
-    return { schemaVersion: version };
-  } catch (error) {
-    if (error instanceof StorageError) throw error;
-    const code = (error as { code?: string }).code ?? '';
-    if (code === 'SQLITE_CORRUPT' || code === 'SQLITE_NOTADB' || code.startsWith('SQLITE_CORRUPT')) {
-      throw new StorageError('damaged', `The database ${filePath} is damaged (${(error as Error).message}). Restore a backup; Lamina has not changed it.`, { cause: error });
-    }
-    if (code.startsWith('SQLITE_CANTOPEN') || code.startsWith('SQLITE_READONLY') || code === 'SQLITE_PERM') {
-      throw new StorageError('read-only', `Lamina cannot open ${filePath} (${(error as Error).message}): check that the file and its folder can be read and written.`, { cause: error });
-    }
-    throw error;
-  } finally {
-    db?.close();
-  }
 }
 
 /**

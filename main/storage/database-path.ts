@@ -31,7 +31,15 @@ export function defaultDatabasePath(context: PathContext = { platform: process.p
 
 /** The database path for a command: an explicit option wins, then LAMINA_DB, then the default. */
 export function resolveDatabasePath(option: string | undefined, env: Readonly<Record<string, string | undefined>>, cwd: string): string {
+  return resolveDatabaseLocation(option, env, cwd).path;
+}
+
+/**
+ * The same, saying whether the user named the path: Lamina creates its own default folder on
+ * first use, but a folder the user typed must exist, so a typing mistake is reported, not made.
+ */
+export function resolveDatabaseLocation(option: string | undefined, env: Readonly<Record<string, string | undefined>>, cwd: string): { path: string; chosenByUser: boolean } {
   const chosen = option || env['LAMINA_DB'];
-  if (chosen) return path.resolve(cwd, chosen);
-  return defaultDatabasePath({ platform: process.platform, env, home: env['HOME'] || homedir() });
+  if (chosen) return { path: path.resolve(cwd, chosen), chosenByUser: true };
+  return { path: defaultDatabasePath({ platform: process.platform, env, home: env['HOME'] || homedir() }), chosenByUser: false };
 }

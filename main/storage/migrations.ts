@@ -1,4 +1,6 @@
 import type Database from 'better-sqlite3';
+import { LAMINA_APPLICATION_ID } from './application-id.js';
+import { shownPath } from './shown-path.js';
 import { StorageError } from './storage-error.js';
 
 /**
@@ -12,6 +14,9 @@ export interface Migration {
   readonly description: string;
   readonly up: (db: Database.Database) => void;
 }
+
+/** From this version on every Lamina library carries LAMINA_APPLICATION_ID; earlier ones carry none. */
+export const VERSION_WITH_APPLICATION_ID = 4;
 
 export const MIGRATIONS: readonly Migration[] = [
   {
@@ -98,6 +103,13 @@ export const MIGRATIONS: readonly Migration[] = [
         CREATE INDEX projects_deleted ON projects(deleted_at);
       `),
   },
+  {
+    version: VERSION_WITH_APPLICATION_ID,
+    description: "Lamina's application_id in the file header, so other programs' databases are told apart",
+    up: (db) => {
+      db.pragma(`application_id = ${LAMINA_APPLICATION_ID}`);
+    },
+  },
 ];
 
 export const LATEST_SCHEMA_VERSION = MIGRATIONS[MIGRATIONS.length - 1]!.version;
@@ -107,7 +119,7 @@ export function schemaVersionOf(db: Database.Database): number {
 }
 
 export function newerSchemaError(filePath: string, version: number): StorageError {
-  return new StorageError('newer-schema', `The database ${filePath} was written by a newer Lamina (schema version ${version}; this version understands up to ${LATEST_SCHEMA_VERSION}). Update Lamina to open it; the file has not been changed.`);
+  return new StorageError('newer-schema', `The database ${shownPath(filePath)} was written by a newer Lamina (schema version ${version}; this version understands up to ${LATEST_SCHEMA_VERSION}): update Lamina to open it; the file has not been changed.`);
 }
 
 /**

@@ -1,10 +1,12 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import Database from 'better-sqlite3';
-import { createBackup, verifyDatabaseFile } from './backups.js';
+import { createBackup } from './backups.js';
 import { inspectDatabaseFile } from './inspect-file.js';
 import { LATEST_SCHEMA_VERSION, migrate, schemaVersionOf } from './migrations.js';
+import { shownPath } from './shown-path.js';
 import { StorageError, describeWriteFailure } from './storage-error.js';
+import { verifyDatabaseFile } from './verify-database.js';
 
 export interface OpenedDatabase {
   readonly db: Database.Database;
@@ -19,33 +21,35 @@ export interface OpenOptions {
   /** How long a writer waits for another process's transaction before giving up (ms). */
   readonly busyTimeoutMs?: number;
   readonly backupsKept?: number;
+  /**
+   * Whether a missing folder for a new database is created (default true: Lamina's own folders).
+   * A path the user typed passes false, so a mistyped folder is reported instead of made.
+   */
+  readonly createFolder?: boolean;
 }
 
 /**
  * Opens (creating if absent) the database file and brings its schema up to date.
  *
- * Order matters: the file is checked read-only first (header, quick_check, schema version) so a
- * damaged, foreign or newer file is refused before anything could write to it. Only then is it
- * opened for writing, switched to WAL with foreign keys on, backed up if a migration is due, and
- * migrated inside one transaction. Several processes may open the same file: SQLite's locking
- * serialises writers and busy_timeout makes a writer wait instead of failing.
+ * Order matters: the path and file are checked read-only first (verify-database.ts: header, whose
+ * database it is, quick_check, schema version), so a folder, a foreign, damaged or newer file is
+ * refused before anything could write to it and without a companion file appearing beside it.
+ * Only a new file or a Lamina library is then opened for writing, switched to WAL with foreign
+ * keys on, backed up if a migration is due, and migrated inside one transaction. Several processes
+ * may open the same file: SQLite's locking serialises writers and busy_timeout makes a writer wait
+ * instead of failing.
  */
 export async function openDatabase(filePath: string, options: OpenOptions = {}): Promise<OpenedDatabase> {
   const absolute = path.resolve(filePath);
   const folder = path.dirname(absolute);
   let created = false;
-  if (!fs.existsSync(absolute)) {
-    try {
-      fs.mkdirSync(folder, { recursive: true });
-    } catch (error) {
-      throw new StorageError('read-only', `Lamina cannot create the folder ${folder} for its database (${(error as NodeJS.ErrnoException).code}). Choose another location with --db or LAMINA_DB.`, { cause: error });
-    }
+  if (inspectDatabaseFile(absolute).kind === 'absent') {
+    prepareFolder(folder, options.createFolder ?? true);
     assertWritable(absolute, folder, false);
     created = createDatabaseAtomically(absolute, options);
   }
-  inspectDatabaseFile(absolute); // bytes only: a foreign or truncated file is named as such even in a read-only folder
+  verifyDatabaseFile(absolute); // read-only: a file that is not a healthy Lamina library is named as such even in a read-only folder
   assertWritable(absolute, folder, true);
-  verifyDatabaseFile(absolute);
 
   let db: Database.Database;
   try {
@@ -102,6 +106,21 @@ function createDatabaseAtomically(target: string, options: OpenOptions): boolean
   }
 }
 
+/** The folder of a new database: made if it is Lamina's own, otherwise it must exist. */
+function prepareFolder(folder: string, create: boolean): void {
+  if (fs.existsSync(folder)) return; // a file in its place was reported by inspectDatabaseFile
+  if (!create) {
+    throw new StorageError('missing-folder', `The folder ${shownPath(folder)} does not exist: create it, or choose another location with --db or LAMINA_DB; nothing was changed.`);
+  }
+  try {
+    fs.mkdirSync(folder, { recursive: true });
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    const why = code === 'EACCES' || code === 'EPERM' || code === 'EROFS' ? 'permission denied' : code === 'ENOTDIR' || code === 'EEXIST' ? 'part of its path is a file' : `the system reports ${code ?? 'an unknown error'}`;
+    throw new StorageError('read-only', `Lamina cannot create the folder ${shownPath(folder)} for its database (${why}): choose another location with --db or LAMINA_DB.`, { cause: error });
+  }
+}
+
 /** A read-only file or folder is reported up front, in one sentence, before SQLite tries to write. */
 function assertWritable(file: string, folder: string, exists: boolean): void {
   const targets = exists ? [folder, file] : [folder];
@@ -109,7 +128,7 @@ function assertWritable(file: string, folder: string, exists: boolean): void {
     try {
       fs.accessSync(target, fs.constants.W_OK);
     } catch {
-      throw new StorageError('read-only', `Lamina cannot write to ${target} (read-only): nothing was changed. Make it writable, or choose another location with --db or LAMINA_DB.`);
+      throw new StorageError('read-only', `Lamina cannot write to ${shownPath(target)} (read-only): make it writable, or choose another location with --db or LAMINA_DB; nothing was changed.`);
     }
   }
 }

@@ -1,10 +1,17 @@
+import { shownPath } from './shown-path.js';
+
 /**
  * Errors the storage layer raises, each carrying a code the callers branch on and a message a
  * person can act on (what is wrong, with which file, and what to do next).
  */
 export type StorageErrorCode =
+  | 'missing-file'
+  | 'missing-folder'
+  | 'not-a-file'
+  | 'unreadable'
   | 'empty-file'
   | 'not-a-database'
+  | 'foreign-database'
   | 'truncated'
   | 'damaged'
   | 'newer-schema'
@@ -35,21 +42,22 @@ function sqliteCode(error: unknown): string | undefined {
  */
 export function describeWriteFailure(error: unknown, databasePath: string): unknown {
   if (error instanceof StorageError) return error;
+  const shown = shownPath(databasePath);
   const code = sqliteCode(error) ?? '';
   if (code === 'SQLITE_FULL' || code === 'ENOSPC') {
-    return new StorageError('disk-full', `The disk holding ${databasePath} is full: the change was not saved; everything saved before is intact. Free some space and try again.`, { cause: error });
+    return new StorageError('disk-full', `The disk holding ${shown} is full: the change was not saved; everything saved before is intact. Free some space and try again.`, { cause: error });
   }
   if (code.startsWith('SQLITE_READONLY') || code === 'EROFS' || code === 'EACCES' || code === 'EPERM' || code.startsWith('SQLITE_CANTOPEN')) {
-    return new StorageError('read-only', `Lamina cannot write to ${databasePath} (the file or its folder is read-only): the change was not saved; everything saved before is intact.`, { cause: error });
+    return new StorageError('read-only', `Lamina cannot write to ${shown} (the file or its folder is read-only): the change was not saved; everything saved before is intact.`, { cause: error });
   }
   if (code.startsWith('SQLITE_BUSY') || code.startsWith('SQLITE_LOCKED')) {
-    return new StorageError('busy', `The database ${databasePath} stayed locked by another Lamina process for too long: the change was not saved. Try again.`, { cause: error });
+    return new StorageError('busy', `The database ${shown} stayed locked by another Lamina process for too long: the change was not saved. Try again.`, { cause: error });
   }
   if (code === 'SQLITE_CORRUPT' || code === 'SQLITE_NOTADB') {
-    return new StorageError('damaged', `The database ${databasePath} is damaged: the change was not saved. Restore a backup.`, { cause: error });
+    return new StorageError('damaged', `The database ${shown} is damaged: the change was not saved. Restore a backup.`, { cause: error });
   }
   if (code.startsWith('SQLITE_IOERR')) {
-    return new StorageError('io', `Writing ${databasePath} failed (${code}): the change was not saved; everything saved before is intact.`, { cause: error });
+    return new StorageError('io', `Writing ${shown} failed (${code}): the change was not saved; everything saved before is intact.`, { cause: error });
   }
   return error;
 }

@@ -230,7 +230,7 @@ describe('backups channels', () => {
       state: 'unavailable',
       databasePath,
       reason: 'not-a-database',
-      message: `The file ${databasePath} is not a Lamina database (it is not an SQLite file). Choose another file or restore a backup; Lamina has not changed it.`,
+      message: `The file ${databasePath} is not a Lamina database (it is not an SQLite file): choose another file or restore a backup; Lamina has not changed it.`,
       backups: [backup],
     });
     const refused = await call(url, 'materials:list', {});

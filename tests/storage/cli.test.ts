@@ -73,7 +73,7 @@ describe('lamina materials / projects commands', () => {
     fs.writeFileSync(path.join(cwd, 'junk.sqlite'), 'hello');
     const c = captured(cwd);
     expect(await projectsCommand(['list', '--db', 'junk.sqlite'], c.io)).toBe(1);
-    expect(c.err()).toBe(`The file ${path.join(cwd, 'junk.sqlite')} is not a Lamina database (it is not an SQLite file). Choose another file or restore a backup; Lamina has not changed it.\n`);
+    expect(c.err()).toBe(`The file ${path.join(cwd, 'junk.sqlite')} is not a Lamina database (it is not an SQLite file): choose another file or restore a backup; Lamina has not changed it.\n`);
   });
 
   it('documents a default database path per system', () => {

@@ -37,7 +37,7 @@ describe('damaged database files are detected at open and never overwritten', ()
     const before = fs.readFileSync(file);
     const error = await refusal(file);
     expect(error.code).toBe('not-a-database');
-    expect(error.message).toBe(`The file ${file} is not a Lamina database (it is not an SQLite file). Choose another file or restore a backup; Lamina has not changed it.`);
+    expect(error.message).toBe(`The file ${file} is not a Lamina database (it is not an SQLite file): choose another file or restore a backup; Lamina has not changed it.`);
     expect(fs.readFileSync(file).equals(before)).toBe(true);
   });
 
@@ -56,7 +56,7 @@ describe('damaged database files are detected at open and never overwritten', ()
     const before = fs.readFileSync(file);
     const error = await refusal(file);
     expect(error.code).toBe('truncated');
-    expect(error.message).toMatch(/is truncated .*Restore a backup; Lamina has not changed it\.$/);
+    expect(error.message).toMatch(/is truncated .*: restore a backup; Lamina has not changed it\.$/);
     expect(fs.readFileSync(file).equals(before)).toBe(true);
   });
 
@@ -69,7 +69,7 @@ describe('damaged database files are detected at open and never overwritten', ()
     fs.writeFileSync(file, bytes);
     const error = await refusal(file);
     expect(error.code).toBe('damaged');
-    expect(error.message).toMatch(/is damaged .*Restore a backup; Lamina has not changed it\.$/);
+    expect(error.message).toMatch(/is damaged .*: restore a backup; Lamina has not changed it\.$/);
     expect(fs.readFileSync(file).equals(bytes)).toBe(true);
   });
 

@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import Database from 'better-sqlite3';
 import { describe, expect, it } from 'vitest';
+import { LAMINA_APPLICATION_ID } from '../../main/storage/application-id.js';
 import { listBackups } from '../../main/storage/backups.js';
 import { LATEST_SCHEMA_VERSION, MIGRATIONS, migrate } from '../../main/storage/migrations.js';
 import { openDatabase } from '../../main/storage/open-database.js';
@@ -39,6 +40,7 @@ describe('schema migrations', () => {
     expect(opened.db.pragma('user_version', { simple: true })).toBe(LATEST_SCHEMA_VERSION);
     expect(opened.db.pragma('journal_mode', { simple: true })).toBe('wal');
     expect(opened.db.pragma('foreign_keys', { simple: true })).toBe(1);
+    expect(opened.db.pragma('application_id', { simple: true })).toBe(LAMINA_APPLICATION_ID);
     expect(opened.preMigrationBackup).toBeUndefined(); // nothing to back up in a new file
     opened.db.close();
   });
@@ -57,6 +59,10 @@ describe('schema migrations', () => {
         const copy = new Database(backups[0]!.file, { readonly: true });
         expect(copy.pragma('user_version', { simple: true })).toBe(version);
         copy.close();
+
+        const migrated = new Database(file, { readonly: true });
+        expect(migrated.pragma('application_id', { simple: true })).toBe(LAMINA_APPLICATION_ID); // gained in migration 4
+        migrated.close();
 
         const [project] = lamina.projects.list();
         expect(project?.name).toBe('Harbour Road boiler house');
@@ -78,11 +84,12 @@ describe('schema migrations', () => {
     const db = new Database(file);
     db.pragma('journal_mode = DELETE');
     db.exec('CREATE TABLE future (x)');
+    db.pragma(`application_id = ${LAMINA_APPLICATION_ID}`); // a newer Lamina marks its files as this one does
     db.pragma(`user_version = ${LATEST_SCHEMA_VERSION + 1}`);
     db.close();
     const before = fs.readFileSync(file);
     await expect(openLamina(file)).rejects.toThrow(
-      `was written by a newer Lamina (schema version ${LATEST_SCHEMA_VERSION + 1}; this version understands up to ${LATEST_SCHEMA_VERSION}). Update Lamina to open it; the file has not been changed.`,
+      `was written by a newer Lamina (schema version ${LATEST_SCHEMA_VERSION + 1}; this version understands up to ${LATEST_SCHEMA_VERSION}): update Lamina to open it; the file has not been changed.`,
     );
     expect(fs.readFileSync(file).equals(before)).toBe(true);
     expect(fs.existsSync(file + '-wal')).toBe(false);

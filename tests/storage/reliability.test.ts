@@ -117,7 +117,7 @@ describe('reliability on real files', () => {
       fs.chmodSync(folder, 0o755);
       fs.chmodSync(file, 0o644);
     }
-    expect(result.out.trim()).toMatch(/^error read-only: Lamina cannot write to .* \(read-only\): nothing was changed\. Make it writable, or choose another location with --db or LAMINA_DB\.$/);
+    expect(result.out.trim()).toMatch(/^error read-only: Lamina cannot write to .* \(read-only\): make it writable, or choose another location with --db or LAMINA_DB; nothing was changed\.$/);
     expect(fs.readFileSync(file).equals(before)).toBe(true);
     const again = await openLamina(file);
     expect(again.projects.list().map((p) => p.name)).toEqual(['Kept safe']);

@@ -1,7 +1,7 @@
-import fs from 'node:fs';
 import path from 'node:path';
 import type { CliCommand, CliIO } from '../command.js';
-import { resolveDatabasePath } from '../../storage/database-path.js';
+import { fileAccessSentence, readTextFile, writeTextFile } from '../file-access.js';
+import { resolveDatabaseLocation } from '../../storage/database-path.js';
 import { StorageError } from '../../storage/storage-error.js';
 import { openLamina, type LaminaServices } from '../../services/lamina-services.js';
 import { formatMaterialsCsv } from '../../services/material-csv.js';
@@ -47,7 +47,8 @@ export function parseArgs(args: readonly string[], valued: readonly string[], sw
 export async function withServices(io: CliIO, dbOption: string | undefined, work: (services: LaminaServices) => Promise<number> | number): Promise<number> {
   let services: LaminaServices | undefined;
   try {
-    services = await openLamina(resolveDatabasePath(dbOption, io.env, io.cwd));
+    const location = resolveDatabaseLocation(dbOption, io.env, io.cwd);
+    services = await openLamina(location.path, { createFolder: !location.chosenByUser });
     return await work(services);
   } catch (error) {
     return reportError(io, error);
@@ -65,9 +66,9 @@ export function reportError(io: CliIO, error: unknown): number {
     io.stderr(`${error.message}\n`);
     return 1;
   }
-  const code = (error as NodeJS.ErrnoException | undefined)?.code;
-  if (code === 'ENOENT') {
-    io.stderr(`File not found: ${(error as NodeJS.ErrnoException).path ?? ''}\n`);
+  const fileError = error as NodeJS.ErrnoException | undefined;
+  if (fileError?.code === 'ENOENT' && fileError.path) {
+    io.stderr(`${fileAccessSentence(fileError, fileError.path, 'read')}\n`);
     return 2;
   }
   io.stderr(`${error instanceof Error ? error.message : String(error)}\n`);
@@ -131,7 +132,7 @@ export const materialsCommand: CliCommand = async (args, io) => {
         return 2;
       }
       return withServices(io, db, ({ materials }) => {
-        const result = materials.importCsv(fs.readFileSync(path.resolve(io.cwd, file), 'utf8'));
+        const result = materials.importCsv(readTextFile(path.resolve(io.cwd, file)));
         if (!result.ok) {
           for (const p of result.problems) io.stderr(`${file} line ${p.line}: ${p.message}\n`);
           io.stderr(`Nothing was imported: ${result.problems.length} problem(s).\n`);
@@ -151,7 +152,7 @@ export const materialsCommand: CliCommand = async (args, io) => {
         const csv = materials.exportCsv(filterOf(parsed));
         if (file === '-') io.stdout(csv);
         else {
-          fs.writeFileSync(path.resolve(io.cwd, file), csv);
+          writeTextFile(path.resolve(io.cwd, file), csv);
           io.stdout(`Exported ${csv.trimEnd().split('\n').length - 1} material(s) to ${file}.\n`);
         }
         return 0;
