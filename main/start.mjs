@@ -4,7 +4,9 @@
  * renderer on 127.0.0.1 and say so in one line. Options for browser mode: --port <n> (or
  * LAMINA_PORT; 0 picks a free port); --db <file> (or LAMINA_DB; default: see
  * main/storage/database-path.ts) names the library database; --browser serves in the browser even
- * when Electron is there.
+ * when Electron is there. The address printed in browser mode carries a key made for this launch
+ * (http://127.0.0.1:PORT/?k=…): knowing the port is not enough to reach the library
+ * (main/server/launch-key.ts).
  *
  * The Electron binary is detected without `require('electron')`, which throws (or starts a
  * download) when the binary is missing: its package records the binary's path in path.txt.

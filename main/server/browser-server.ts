@@ -3,11 +3,19 @@
  * Security Policy as the desktop window and one JSON endpoint per API channel (POST /api/<name>).
  *
  * Only 127.0.0.1 (or ::1) is ever bound, and requests must name that host, so a web page elsewhere
- * cannot reach the API by rebinding a DNS name to this machine.
+ * cannot reach the API by rebinding a DNS name to this machine. Every other process and user on the
+ * machine can reach loopback too, so every API request must also carry this launch's key
+ * (launch-key.ts): the address printed at start is `/?k=<key>`, which answers with a redirect to `/`
+ * that stores the key in an HttpOnly, SameSite=Strict cookie, so the key leaves the address bar and
+ * never reaches the page's scripts. Other clients send it in the X-Lamina-Key header.
+ *
+ * The page's files (the built renderer, the same for everyone who has the source) are served
+ * without the key: they hold no data, and a browser that reached `/` through a link from another
+ * site would not send a SameSite=Strict cookie with that first request anyway. Everything the page
+ * reads or changes goes through /api/, and there the key is required.
  */
 import http from 'node:http';
-import { createReadStream } from 'node:fs';
-import { realpath, stat } from 'node:fs/promises';
+import { readFile, realpath, stat } from 'node:fs/promises';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { mimeTypeFor } from './mime-types.js';
@@ -16,11 +24,16 @@ import { fromWireJson, toWireJson } from '../../app/api/wire-json.js';
 import { API_CHANNELS, MAX_TEXT_REQUEST, createOperations, describeFailure, httpPathFor, type OperationHandlers } from './operations.js';
 import { PROJECT_ROOT, readAppIdentity } from './app-identity.js';
 import { LibraryHost } from './library-host.js';
+import { LAUNCH_KEY_HEADER, LAUNCH_KEY_PARAMETER, LaunchKey, cookieValues, launchCookie, launchCookieName } from './launch-key.js';
 
 export const DEFAULT_PORT = 5178;
 const LOOPBACK_HOSTS = new Set(['127.0.0.1', '::1']);
 /** Room for the largest CSV or project file an operation accepts, plus JSON escaping. */
 const MAX_BODY_BYTES = 2 * MAX_TEXT_REQUEST;
+
+const NO_KEY =
+  'This request carries no valid key for this launch of Lamina: open the address Lamina printed when it started (it ends in ?k=…), or send that key in the X-Lamina-Key header.';
+const WRONG_ADDRESS = 'This address is from an earlier launch of Lamina or is wrong: open the address Lamina printed when it last started.';
 
 export interface BrowserServerOptions {
   /** TCP port; 0 picks a free one. Default 5178. */
@@ -42,8 +55,12 @@ export interface BrowserServerOptions {
 }
 
 export interface BrowserServer {
-  /** e.g. http://127.0.0.1:5178/ */
+  /** The address to open, with this launch's key: e.g. http://127.0.0.1:5178/?k=<key>. */
   readonly url: string;
+  /** The server's origin without the key, e.g. http://127.0.0.1:5178. */
+  readonly origin: string;
+  /** This launch's key, for clients that send it in the X-Lamina-Key header. */
+  readonly key: string;
   readonly host: string;
   readonly port: number;
   readonly library: LibraryHost;
@@ -67,6 +84,7 @@ export async function startBrowserServer(options: BrowserServerOptions): Promise
   });
   const operations = createOperations({ ...readAppIdentity(), library });
   const routes = new Map(API_CHANNELS.map((channel) => [httpPathFor(channel), channel] as const));
+  const launchKey = new LaunchKey();
 
   const server = http.createServer((request, response) => {
     handle(request, response).catch((error: unknown) => {
@@ -82,12 +100,19 @@ export async function startBrowserServer(options: BrowserServerOptions): Promise
       sendText(response, 403, 'This server answers only to 127.0.0.1, localhost or [::1] on its own port.');
       return;
     }
-    const pathname = new URL(request.url ?? '/', 'http://127.0.0.1').pathname;
-    const channel = routes.get(pathname);
-    if (channel) return handleApi(channel, request, response, boundPort, operations);
+    const { pathname, searchParams } = new URL(request.url ?? '/', 'http://127.0.0.1');
     if (pathname.startsWith('/api/')) {
+      if (!presentsKey(request, launchKey, boundPort)) {
+        sendJson(response, 401, { error: NO_KEY });
+        return;
+      }
+      const channel = routes.get(pathname);
+      if (channel) return handleApi(channel, request, response, boundPort, operations);
       sendJson(response, 404, { error: `There is no operation at ${pathname}.` });
       return;
+    }
+    if (pathname === '/' && searchParams.has(LAUNCH_KEY_PARAMETER)) {
+      return tradeKeyForCookie(searchParams.get(LAUNCH_KEY_PARAMETER) ?? '', launchKey, boundPort, request, response);
     }
     return serveFile(root, request, response);
   }
@@ -107,8 +132,11 @@ export async function startBrowserServer(options: BrowserServerOptions): Promise
 
   const address = server.address() as AddressInfo;
   const urlHost = address.family === 'IPv6' ? `[${address.address}]` : address.address;
+  const origin = `http://${urlHost}:${address.port}`;
   return {
-    url: `http://${urlHost}:${address.port}/`,
+    url: `${origin}/?${LAUNCH_KEY_PARAMETER}=${launchKey.value}`,
+    origin,
+    key: launchKey.value,
     host: address.address,
     port: address.port,
     library,
@@ -120,6 +148,31 @@ export async function startBrowserServer(options: BrowserServerOptions): Promise
       await library.close();
     },
   };
+}
+
+/** Whether a request carries this launch's key, in the X-Lamina-Key header or in the page's cookie. */
+function presentsKey(request: http.IncomingMessage, key: LaunchKey, port: number): boolean {
+  const header = request.headers[LAUNCH_KEY_HEADER];
+  if (typeof header === 'string' && key.matches(header)) return true;
+  return cookieValues(request.headers.cookie, launchCookieName(port)).some((value) => key.matches(value));
+}
+
+/**
+ * The printed address, `/?k=<key>`: a right key becomes the page's cookie and the browser is sent
+ * on to `/`, so the key stays out of the address bar and out of reach of the page's scripts.
+ */
+function tradeKeyForCookie(presented: string, key: LaunchKey, port: number, request: http.IncomingMessage, response: http.ServerResponse): void {
+  if (request.method !== 'GET' && request.method !== 'HEAD') {
+    response.setHeader('Allow', 'GET, HEAD');
+    sendText(response, 405, 'Only GET and HEAD are served here.');
+    return;
+  }
+  if (!key.matches(presented)) {
+    sendText(response, 401, WRONG_ADDRESS);
+    return;
+  }
+  response.writeHead(303, { ...SECURITY_HEADERS, Location: '/', 'Set-Cookie': launchCookie(port, key), 'Content-Length': 0 });
+  response.end();
 }
 
 function isOwnHost(hostHeader: string | undefined, port: number): boolean {
@@ -195,13 +248,17 @@ async function serveFile(root: string, request: http.IncomingMessage, response: 
     sendText(response, 404, 'Not found.');
     return;
   }
-  const info = await stat(file);
-  response.writeHead(200, { ...SECURITY_HEADERS, 'Content-Type': type, 'Content-Length': info.size });
-  if (request.method === 'HEAD') {
-    response.end();
+  // Read whole (the built files are small), so a rebuild that replaces a file while it is served
+  // gives a 404 or the complete file, never a length that does not match the bytes or a stream error.
+  let content: Buffer;
+  try {
+    content = await readFile(file);
+  } catch {
+    sendText(response, 404, 'Not found.');
     return;
   }
-  createReadStream(file).pipe(response);
+  response.writeHead(200, { ...SECURITY_HEADERS, 'Content-Type': type, 'Content-Length': content.length });
+  response.end(request.method === 'HEAD' ? undefined : content);
 }
 
 /** The file a URL names inside root, or undefined when it does not exist or would lie outside root. */

@@ -69,7 +69,7 @@ function shownNumber(text: string): { value: number; halfStep: number } {
 describe('browser mode', () => {
   it('listens on 127.0.0.1 only', () => {
     expect(server.host).toBe('127.0.0.1');
-    expect(server.url).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/$/);
+    expect(server.url).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/\?k=[A-Za-z0-9_-]{43}$/);
   });
 
   it('shows the heat flow and interface temperatures of a three-layer wall as series resistance gives them', async () => {

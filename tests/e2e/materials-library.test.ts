@@ -131,7 +131,8 @@ describe('materials library in the browser', () => {
       await page.click('#view-backups');
       await page.click('#backup-create');
       await expect.poll(() => page.locator('[data-testid="backups-notice"]').textContent()).toMatch(/^\s*Backup made: lamina-\d{8}T\d{9}Z-manual\.sqlite\.\s*$/);
-      expect(await page.locator('[data-testid="backup-row"]').count()).toBe(1);
+      // The notice comes before the list is read again: wait for the row.
+      await expect.poll(() => page.locator('[data-testid="backup-row"]').count()).toBe(1);
       expect(services.backups.list()).toHaveLength(1);
       expect(await page.locator('[data-testid="backup-row"]').first().textContent()).toContain('made by hand');
       await expectCleanText(page);

@@ -9,6 +9,7 @@ import path from 'node:path';
 import type { ApiError, Material, MaterialInput } from '../../app/api/contract.js';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
+import { API_CHANNELS } from '../../main/server/operations.js';
 import { call, ok } from './api-client.js';
 
 const running: BrowserServer[] = [];
@@ -242,5 +243,70 @@ describe('backups channels', () => {
     expect(restored.status.state).toBe('open');
     expect(fs.readFileSync(restored.movedAsideTo!)).toEqual(damaged);
     expect((await ok(url, 'materials:list', { origin: 'user' })).map((m) => m.name)).toEqual([userMaterial.name]);
+  });
+});
+
+describe('the launch key', () => {
+  const noKey =
+    'This request carries no valid key for this launch of Lamina: open the address Lamina printed when it started (it ends in ?k=…), or send that key in the X-Lamina-Key header.';
+  const userProject = { fields: { name: 'Harrowgate depot, loading bay' } }; // invented scenario
+
+  it('refuses every channel without the key in one sentence, and nothing is done', async () => {
+    const server = await serve(tempFolder());
+    const bare = `${server.origin}/`;
+    const requests: Partial<Record<(typeof API_CHANNELS)[number], unknown>> = {
+      'projects:create': userProject,
+      'materials:create': { material: userMaterial },
+      'materials:import-csv': { csv: `${csvHeader}\n` },
+      'backups:create': {},
+    };
+    for (const channel of API_CHANNELS) {
+      const answer = await call(bare, channel, requests[channel] ?? {});
+      expect({ channel, status: answer.status, body: answer.body }).toEqual({ channel, status: 401, body: { error: noKey } });
+    }
+    // A path that names no channel is refused the same way: without the key nothing is revealed.
+    const unknown = await fetch(`${server.origin}/api/no-such-thing`, { method: 'POST' });
+    expect(unknown.status).toBe(401);
+    expect(await ok(server.url, 'projects:list', {})).toEqual([]);
+    expect(await ok(server.url, 'materials:list', { origin: 'user' })).toEqual([]);
+    expect(await ok(server.url, 'backups:list', {})).toEqual([]);
+  });
+
+  it('refuses a wrong key of the same length or another length', async () => {
+    const server = await serve(tempFolder());
+    const sameLength = server.key.replace(/^./, (first) => (first === 'A' ? 'B' : 'A'));
+    expect(sameLength).toHaveLength(server.key.length);
+    for (const wrong of [sameLength, server.key.slice(0, -1), `${server.key}A`, '', 'x'.repeat(4000)]) {
+      const answer = await call(`${server.origin}/?k=${encodeURIComponent(wrong)}`, 'projects:create', userProject);
+      expect({ wrong, status: answer.status, body: answer.body }).toEqual({ wrong, status: 401, body: { error: noKey } });
+    }
+    expect(await ok(server.url, 'projects:list', {})).toEqual([]);
+  });
+
+  it('makes a new key at every launch and refuses the key of the one before', async () => {
+    const folder = tempFolder();
+    const first = await serve(folder);
+    const oldAddress = first.url;
+    await ok(oldAddress, 'projects:create', userProject);
+    await first.close();
+    running.splice(running.indexOf(first), 1);
+
+    const second = await serve(folder);
+    expect(second.key).not.toBe(first.key);
+    expect(second.key).toMatch(/^[A-Za-z0-9_-]{43}$/); // 32 random bytes in base64url
+    const stale = `${second.origin}/?k=${first.key}`;
+    const refused = await call(stale, 'projects:list', {});
+    expect({ status: refused.status, body: refused.body }).toEqual({ status: 401, body: { error: noKey } });
+    expect((await ok(second.url, 'projects:list', {})).map((p) => p.name)).toEqual([userProject.fields.name]);
+  });
+
+  it('takes the key in the X-Lamina-Key header from a client with no Origin, and still refuses another origin', async () => {
+    const server = await serve(tempFolder());
+    const created = await ok(server.url, 'projects:create', userProject);
+    expect(created.name).toBe(userProject.fields.name);
+    const foreign = await call(server.url, 'projects:list', {}, { Origin: 'http://depot-intranet.example' });
+    expect({ status: foreign.status, body: foreign.body }).toEqual({ status: 403, body: { error: 'Requests from other origins are refused.' } });
+    const own = await call(server.url, 'projects:list', {}, { Origin: server.origin });
+    expect(own.status).toBe(200);
   });
 });
