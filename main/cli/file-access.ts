@@ -1,4 +1,5 @@
 import fs from 'node:fs';
+import { decodeUtf8, NotUtf8Error } from '../files/utf8-text.js';
 import { shownPath } from '../storage/shown-path.js';
 import { InvalidInputError } from '../services/service-errors.js';
 
@@ -8,10 +9,17 @@ import { InvalidInputError } from '../services/service-errors.js';
  * input: exit code 2.
  */
 export function readTextFile(file: string): string {
+  let bytes: Uint8Array;
   try {
-    return fs.readFileSync(file, 'utf8');
+    bytes = fs.readFileSync(file);
   } catch (error) {
     throw new InvalidInputError('file', fileAccessSentence(error, file, 'read'));
+  }
+  try {
+    return decodeUtf8(bytes);
+  } catch (error) {
+    if (error instanceof NotUtf8Error) throw new InvalidInputError('file', `${shownPath(file)} ${error.message}.`);
+    throw error;
   }
 }
 
