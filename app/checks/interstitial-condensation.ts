@@ -4,8 +4,8 @@
  * resistances, saturation pressure at each interface, the tightest vapour line under saturation,
  * and the condensation rate g_c = g_in − g_out where it touches.
  */
-import type { AirCondition, WallInput } from '../assemblies/wall-input.js';
-import { validateWallInput } from '../assemblies/wall-validation.js';
+import type { AirCondition, WallInput } from '../cases/wall/wall-input.js';
+import { validateWallInput } from '../cases/wall/wall-validation.js';
 import { saturationPressure } from '../physics/index.js';
 import type { CheckResult } from './check-result.js';
 import { constructVapourProfile, unlimitedVapourProfile, type GlaserProfile } from './glaser-construction.js';

@@ -9,10 +9,10 @@
  * 3. Report the largest accumulated amount and whether everything has evaporated at the end of the
  *    twelve months (dries out within the year).
  */
-import type { ClimateMonth, MonthlyClimate } from '../assemblies/wall-climate.js';
-import { monthDuration } from '../assemblies/wall-climate.js';
-import type { WallInput } from '../assemblies/wall-input.js';
-import { validateClimate, validateWallInput } from '../assemblies/wall-validation.js';
+import type { ClimateMonth, MonthlyClimate } from './monthly-climate.js';
+import { monthDuration } from './monthly-climate.js';
+import type { WallInput } from '../cases/wall/wall-input.js';
+import { validateClimate, validateWallInput } from '../cases/wall/wall-validation.js';
 import { InputError } from '../fe/errors.js';
 import type { CheckResult } from './check-result.js';
 import { interstitialStateAt, type InterstitialOptions, type InterstitialState } from './interstitial-condensation.js';

@@ -4,8 +4,8 @@
  * thickness is not modelled), still air μ = 1 in air layers, and the temperatures at the points
  * between layers from the steady engine solution with the ISO 6946 surface resistances.
  */
-import { solveWall } from '../assemblies/wall-calculation.js';
-import { isAirLayer, type WallInput } from '../assemblies/wall-input.js';
+import { solveWall } from '../cases/wall/wall-calculation.js';
+import { isAirLayer, type WallInput } from '../cases/wall/wall-input.js';
 import { InputError } from '../fe/errors.js';
 import { saturationPressure } from '../physics/index.js';
 import parameters from '../../data/physics/iso13788-moisture-parameters.json' with { type: 'json' };

@@ -5,10 +5,10 @@
  * humidity limit (0.8 mould, 1.0 condensation). Monthly: the design month is the one with the
  * largest f_Rsi,min over the climate; the element passes if its f_Rsi exceeds that value.
  */
-import { solveWall } from '../assemblies/wall-calculation.js';
-import type { MonthlyClimate } from '../assemblies/wall-climate.js';
-import type { AirCondition, WallInput } from '../assemblies/wall-input.js';
-import { validateClimate, validateWallInput } from '../assemblies/wall-validation.js';
+import { solveWall } from '../cases/wall/wall-calculation.js';
+import type { MonthlyClimate } from './monthly-climate.js';
+import type { AirCondition, WallInput } from '../cases/wall/wall-input.js';
+import { validateClimate, validateWallInput } from '../cases/wall/wall-validation.js';
 import { InputError } from '../fe/errors.js';
 import type { CheckResult } from './check-result.js';
 import { describeInsideHumidity, insideVapourPressure } from './mould-humidity-classes.js';

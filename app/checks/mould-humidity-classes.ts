@@ -5,7 +5,7 @@
  * monthly means at or below 0 °C, falls linearly to 0 at 20 °C, and may carry the 1.1 safety factor.
  */
 import classTable from '../../data/physics/humidity-classes.json' with { type: 'json' };
-import type { AirCondition, InsideHumiditySource } from '../assemblies/wall-input.js';
+import type { AirCondition, InsideHumiditySource } from '../cases/wall/wall-input.js';
 import { InputError } from '../fe/errors.js';
 import { saturationPressure } from '../physics/index.js';
 

@@ -4,20 +4,20 @@
  */
 import { isObject } from '../../app/cases/case-fields.js';
 import { shownValue } from '../../app/base/shown-value.js';
-import { parseConductionCaseFile } from '../../app/cases/conduction-case-file.js';
+import { parseConductionCaseFile } from '../../app/cases/conduction/conduction-case-file.js';
 import { solveSteady, solveTransient } from '../../app/fe/index.js';
-import { conductionWarnings } from '../../app/cases/conduction-warnings.js';
+import { conductionWarnings } from '../../app/cases/conduction/conduction-warnings.js';
 import type { MaterialProperties } from '../../app/materials/material-properties.js';
 import type { MaterialsService } from '../services/materials-service.js';
 import { NotFoundError } from '../services/service-errors.js';
 import { conductionSteadyText, conductionTransientText } from './format/conduction-text.js';
 import { flatText, pipeText } from './format/pipe-and-flat-text.js';
-import { parsePipeCaseFile } from '../../app/cases/pipe-case-file.js';
-import { parseFlatCaseFile } from '../../app/cases/flat-case-file.js';
-import { calculatePipe } from '../../app/assemblies/pipe-calculation.js';
-import { calculateFlatSurface } from '../../app/assemblies/flat-surface-calculation.js';
-import { analyseWall } from '../../app/assemblies/wall-analysis.js';
-import { parseWallCaseFile } from '../../app/cases/wall-case-file.js';
+import { parsePipeCaseFile } from '../../app/cases/pipe/pipe-case-file.js';
+import { parseFlatCaseFile } from '../../app/cases/flat/flat-case-file.js';
+import { calculatePipe } from '../../app/cases/pipe/pipe-calculation.js';
+import { calculateFlatSurface } from '../../app/cases/flat/flat-surface-calculation.js';
+import { analyseWall } from '../../app/cases/wall/wall-analysis.js';
+import { parseWallCaseFile } from '../../app/cases/wall/wall-case-file.js';
 import { wallText } from './format/wall-text.js';
 import { resolvePipeSizeInCase } from '../pipe-sizes/pipe-size-catalogue.js';
 

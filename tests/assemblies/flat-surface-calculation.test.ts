@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { calculateFlatSurface } from '../../app/assemblies/flat-surface-calculation.js';
-import type { FlatSurfaceInput } from '../../app/assemblies/flat-surface-input.js';
+import { calculateFlatSurface } from '../../app/cases/flat/flat-surface-calculation.js';
+import type { FlatSurfaceInput } from '../../app/cases/flat/flat-surface-input.js';
 import { outerSurfaceExchange } from '../../app/physics/index.js';
 import { aluminium, inputErrorOf, material, mineralWool, steel, tankWall } from './pipe-fixtures.js';
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { calculatePipe } from '../../app/assemblies/pipe-calculation.js';
-import { VERTICAL_PIPE_DEFAULT_HEIGHT_CAP } from '../../app/assemblies/pipe-input.js';
+import { calculatePipe } from '../../app/cases/pipe/pipe-calculation.js';
+import { VERTICAL_PIPE_DEFAULT_HEIGHT_CAP } from '../../app/cases/pipe/pipe-input.js';
 import { conductivityAt } from '../../app/fe/conductivity.js';
 import { outerSurfaceExchange, STEFAN_BOLTZMANN } from '../../app/physics/index.js';
 import { aluminium, foam, hotPipe, material, mineralWool, steel } from './pipe-fixtures.js';

@@ -3,8 +3,8 @@
  * figures for tests only (common practice, no source), except where a comment names a source.
  */
 import type { MaterialProperties } from '../../app/materials/material-properties.js';
-import type { PipeInput } from '../../app/assemblies/pipe-input.js';
-import type { FlatSurfaceInput } from '../../app/assemblies/flat-surface-input.js';
+import type { PipeInput } from '../../app/cases/pipe/pipe-input.js';
+import type { FlatSurfaceInput } from '../../app/cases/flat/flat-surface-input.js';
 import { InputError } from '../../app/fe/errors.js';
 
 export function material(name: string, conductivity: number | MaterialProperties['conductivity'], extra: Partial<MaterialProperties> = {}): MaterialProperties {

@@ -3,8 +3,8 @@
  * (project rule: never NaN, never a crash).
  */
 import { describe, expect, it } from 'vitest';
-import { calculatePipe } from '../../app/assemblies/pipe-calculation.js';
-import type { PipeInput } from '../../app/assemblies/pipe-input.js';
+import { calculatePipe } from '../../app/cases/pipe/pipe-calculation.js';
+import type { PipeInput } from '../../app/cases/pipe/pipe-input.js';
 import { aluminium, hotPipe, inputErrorOf, material, mineralWool, steel } from './pipe-fixtures.js';
 
 const ambient = hotPipe().ambient;

@@ -7,8 +7,8 @@ import { readFileSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import Ajv2020Module from 'ajv/dist/2020.js';
-import { calculateWall } from '../../app/assemblies/wall.js';
-import { parseWallCaseFile } from '../../app/cases/wall-case-file.js';
+import { calculateWall } from '../../app/cases/wall/wall.js';
+import { parseWallCaseFile } from '../../app/cases/wall/wall-case-file.js';
 import {
   checkInterstitialAtDesignCondition,
   checkInterstitialMonthly,

@@ -1,5 +1,5 @@
 /** Small builders for wall tests: generic materials (values in the style of ISO 10456 tables, from memory; test data only). */
-import type { WallInput, WallLayer } from '../../app/assemblies/wall.js';
+import type { WallInput, WallLayer } from '../../app/cases/wall/wall.js';
 import type { MaterialProperties } from '../../app/materials/material-properties.js';
 
 export function material(name: string, conductivity: number, vapourResistanceFactor: number | null = null, sd: number | null = null): MaterialProperties {

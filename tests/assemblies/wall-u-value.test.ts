@@ -5,7 +5,7 @@
  * (ISO 6946 table, from memory), and the rules for ventilated air layers (from memory).
  */
 import { describe, expect, it } from 'vitest';
-import { calculateWall, roundToSignificantFigures } from '../../app/assemblies/wall.js';
+import { calculateWall, roundToSignificantFigures } from '../../app/cases/wall/wall.js';
 import type { ConductivityModel } from '../../app/fe/index.js';
 import { layer, material, wall } from './wall-fixtures.js';
 

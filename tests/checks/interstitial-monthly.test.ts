@@ -4,8 +4,8 @@
  * climate, with the totals checked by hand from the Glaser formulas.
  */
 import { describe, expect, it } from 'vitest';
-import type { MonthlyClimate } from '../../app/assemblies/wall.js';
-import { DEMO_CLIMATES } from '../../app/assemblies/wall.js';
+import type { MonthlyClimate } from '../../app/cases/wall/wall.js';
+import { DEMO_CLIMATES } from '../../app/cases/wall/wall.js';
 import { checkInterstitialMonthly } from '../../app/checks/interstitial.js';
 import { layer, material, wall } from '../assemblies/wall-fixtures.js';
 import { pSat } from './iso13788-saturation.js';

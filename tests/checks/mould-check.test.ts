@@ -5,7 +5,7 @@
  * confidence). Hand calculations use the ISO 13788 Magnus form and its inverse (from memory).
  */
 import { describe, expect, it } from 'vitest';
-import type { MonthlyClimate } from '../../app/assemblies/wall.js';
+import type { MonthlyClimate } from '../../app/cases/wall/wall.js';
 import {
   checkMouldAtDesignCondition,
   checkMouldMonthly,

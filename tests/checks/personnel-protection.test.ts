@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_TOUCH_LIMIT, personnelProtectionCheck } from '../../app/checks/personnel-protection.js';
-import { calculatePipe } from '../../app/assemblies/pipe-calculation.js';
+import { calculatePipe } from '../../app/cases/pipe/pipe-calculation.js';
 import { aluminium, hotPipe, mineralWool } from '../assemblies/pipe-fixtures.js';
 
 describe('personnel protection check', () => {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import type { PipeInput } from '../../app/assemblies/pipe-input.js';
+import type { PipeInput } from '../../app/cases/pipe/pipe-input.js';
 import { serviceTemperatureCheck } from '../../app/checks/service-temperature.js';
-import { calculatePipe } from '../../app/assemblies/pipe-calculation.js';
+import { calculatePipe } from '../../app/cases/pipe/pipe-calculation.js';
 import { foam, hotPipe, material, mineralWool } from '../assemblies/pipe-fixtures.js';
 
 const span = (name: string, innerTemperature: number, outerTemperature: number, min: number | null, max: number | null) => ({

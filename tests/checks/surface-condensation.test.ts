@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import psychrolib from 'psychrolib';
 import { CONDENSATION_WARNING_MARGIN, surfaceCondensationCheck } from '../../app/checks/surface-condensation.js';
-import { calculatePipe } from '../../app/assemblies/pipe-calculation.js';
+import { calculatePipe } from '../../app/cases/pipe/pipe-calculation.js';
 import { dewPoint } from '../../app/physics/index.js';
 import { foam, hotPipe } from '../assemblies/pipe-fixtures.js';
 

@@ -2,8 +2,8 @@
  * Readable summaries of pipe and flat-surface results (`lamina solve --format text`). Rounded here,
  * at the edge; the JSON output keeps full precision.
  */
-import type { FlatSurfaceResult } from '../../../app/assemblies/flat-surface-calculation.js';
-import type { PipeResult } from '../../../app/assemblies/pipe-calculation.js';
+import type { FlatSurfaceResult } from '../../../app/cases/flat/flat-surface-calculation.js';
+import type { PipeResult } from '../../../app/cases/pipe/pipe-calculation.js';
 import { checksText, fixed, lossOrGain, scientific } from './text-helpers.js';
 
 type Stack = PipeResult | FlatSurfaceResult;

@@ -2,7 +2,7 @@
  * Readable summary of a wall or roof analysis (`lamina solve --format text`). Rounded here, at the
  * edge; the JSON output keeps full precision.
  */
-import type { WallAnalysis } from '../../../app/assemblies/wall-analysis.js';
+import type { WallAnalysis } from '../../../app/cases/wall/wall-analysis.js';
 import { checksText, fixed, scientific } from './text-helpers.js';
 
 export function wallText(title: string, a: WallAnalysis): string {

@@ -5,17 +5,17 @@
  * engine iterate the film and any λ(T) to convergence, then read back temperatures, the film split
  * into convection and radiation at the converged surface temperature, and the checks.
  */
-import type { FaceCondition, Geometry } from '../fe/problem.js';
-import type { SteadyResult } from '../fe/result.js';
-import { solveSteady } from '../fe/steady-solve.js';
-import type { MaterialProperties } from '../materials/material-properties.js';
-import { outerSurfaceExchange, type OuterSurfaceExchangeFunction, type OuterSurfaceShape, type SurfaceMethod } from '../physics/outer-surface-exchange.js';
-import { personnelProtectionCheck, type PersonnelProtectionResult } from '../checks/personnel-protection.js';
-import { serviceTemperatureCheck, type ServiceTemperatureResult } from '../checks/service-temperature.js';
-import { surfaceCondensationCheck, type SurfaceCondensationResult } from '../checks/surface-condensation.js';
-import { conductivityUseWarnings } from '../checks/plausibility-warnings.js';
+import type { FaceCondition, Geometry } from '../../fe/problem.js';
+import type { SteadyResult } from '../../fe/result.js';
+import { solveSteady } from '../../fe/steady-solve.js';
+import type { MaterialProperties } from '../../materials/material-properties.js';
+import { outerSurfaceExchange, type OuterSurfaceExchangeFunction, type OuterSurfaceShape, type SurfaceMethod } from '../../physics/outer-surface-exchange.js';
+import { personnelProtectionCheck, type PersonnelProtectionResult } from '../../checks/personnel-protection.js';
+import { serviceTemperatureCheck, type ServiceTemperatureResult } from '../../checks/service-temperature.js';
+import { surfaceCondensationCheck, type SurfaceCondensationResult } from '../../checks/surface-condensation.js';
+import { conductivityUseWarnings } from '../../checks/plausibility-warnings.js';
 import { toEngineLayers } from './layer-build.js';
-import type { AmbientConditions, InnerCondition } from './pipe-and-flat-inputs.js';
+import type { AmbientConditions, InnerCondition } from './insulated-inputs.js';
 
 export type LayerRole = 'pipe-wall' | 'wall' | 'insulation' | 'jacket';
 

@@ -4,8 +4,8 @@
  * (the tank or duct plate), insulation layers (inside first), an optional jacket, and the
  * orientation of the outer surface. Field names match the flat case file.
  */
-import { requireOneOf } from '../physics/input-checks.js';
-import type { MaterialLayer } from './layer-build.js';
+import { requireOneOf } from '../../physics/input-checks.js';
+import type { MaterialLayer } from '../insulated/layer-build.js';
 import {
   INPUT_LIMITS,
   requireAboveAtMost,
@@ -18,7 +18,7 @@ import {
   validateOperation,
   validateSurfaceMethod,
   type InsulatedSurfaceInput,
-} from './pipe-and-flat-inputs.js';
+} from '../insulated/insulated-inputs.js';
 
 /** The outer surface's orientation and the length the air moves along. */
 export type FlatSurfaceOrientation =

@@ -4,11 +4,11 @@
  * outwards; the outer film from app/physics outerSurfaceExchange is iterated by the engine.
  * Heat flows are positive outwards (heat lost); a cold surface gives negative values.
  */
-import type { OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
-import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity } from './pipe-and-flat-inputs.js';
-import { solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from './pipe-and-flat-solve.js';
+import type { OuterSurfaceShape } from '../../physics/outer-surface-exchange.js';
+import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity } from '../insulated/insulated-inputs.js';
+import { solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
 import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
-import { DEFAULT_SURFACE_METHOD } from './pipe-input.js';
+import { DEFAULT_SURFACE_METHOD } from '../pipe/pipe-input.js';
 
 export interface FlatSurfaceResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
   /** W/m² of surface; positive = heat lost. */

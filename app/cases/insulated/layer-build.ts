@@ -5,8 +5,8 @@
  * gives them, density and specific heat for transient use. Validation of the numbers is the
  * engine's job (it names the field `layers[i].…`); the calculations validate their own inputs first.
  */
-import type { Layer } from '../fe/problem.js';
-import type { MaterialProperties } from '../materials/material-properties.js';
+import type { Layer } from '../../fe/problem.js';
+import type { MaterialProperties } from '../../materials/material-properties.js';
 
 export interface MaterialLayer {
   readonly material: MaterialProperties;

@@ -4,11 +4,11 @@
  * InputError whose sentence names the field path and the allowed range, before the engine runs.
  * All values SI, temperatures in °C, relative humidity a fraction 0..1.
  */
-import { InputError } from '../fe/errors.js';
-import { validateConductivity } from '../fe/validate.js';
-import { MATERIAL_CATEGORIES, type MaterialProperties } from '../materials/material-properties.js';
-import { requireCelsius, requireFinite, requireInRange, requireOneOf } from '../physics/input-checks.js';
-import type { Exposure, SurfaceMethod } from '../physics/outer-surface-exchange.js';
+import { InputError } from '../../fe/errors.js';
+import { validateConductivity } from '../../fe/validate.js';
+import { MATERIAL_CATEGORIES, type MaterialProperties } from '../../materials/material-properties.js';
+import { requireCelsius, requireFinite, requireInRange, requireOneOf } from '../../physics/input-checks.js';
+import type { Exposure, SurfaceMethod } from '../../physics/outer-surface-exchange.js';
 import type { MaterialLayer } from './layer-build.js';
 
 /** What sits inside the pipe or behind the flat surface. */

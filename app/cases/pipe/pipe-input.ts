@@ -3,10 +3,10 @@
  * The field names match the pipe case file (app/cases/pipe-case-file.ts), so an error names the
  * same path in both. Radial layer order: pipe wall, insulation layers (inside first), jacket.
  */
-import { InputError } from '../fe/errors.js';
-import type { MaterialProperties } from '../materials/material-properties.js';
-import { requireOneOf } from '../physics/input-checks.js';
-import type { SurfaceMethod } from '../physics/outer-surface-exchange.js';
+import { InputError } from '../../fe/errors.js';
+import type { MaterialProperties } from '../../materials/material-properties.js';
+import { requireOneOf } from '../../physics/input-checks.js';
+import type { SurfaceMethod } from '../../physics/outer-surface-exchange.js';
 import {
   requireAboveAtMost,
   requireObjectField,
@@ -18,7 +18,7 @@ import {
   validateOperation,
   validateSurfaceMethod,
   type InsulatedSurfaceInput,
-} from './pipe-and-flat-inputs.js';
+} from '../insulated/insulated-inputs.js';
 
 export interface PipeInput extends InsulatedSurfaceInput {
   readonly pipe: {

@@ -13,16 +13,16 @@
  *   element from the air layer outwards (R_g, outer layers, R_se) is scaled by one factor so that the
  *   total equals that R_T (our modelling choice, no source); the inner layers keep their resistance.
  */
-import type { ConductivityModel } from '../fe/conductivity.js';
-import { conductivityAt } from '../fe/conductivity.js';
-import { InputError } from '../fe/errors.js';
+import type { ConductivityModel } from '../../fe/conductivity.js';
+import { conductivityAt } from '../../fe/conductivity.js';
+import { InputError } from '../../fe/errors.js';
 import {
   airLayerResistance,
   airLayerResistanceFromTable,
   slightlyVentilatedTotalResistance,
   standardSurfaceResistances,
   wellVentilatedOutsideResistance,
-} from '../physics/index.js';
+} from '../../physics/index.js';
 import { isAirLayer, type WallInput, type WallLayer } from './wall-input.js';
 
 /** Faces with emissivity at or above this use the ISO 6946 table (high-emissivity faces), from memory. */

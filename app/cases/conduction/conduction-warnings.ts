@@ -3,13 +3,13 @@
  * layer's conductivity table read outside its points, temperatures above what any construction
  * meets, an extreme inner radius.
  */
-import type { SteadyProblem } from '../fe/problem.js';
+import type { SteadyProblem } from '../../fe/problem.js';
 import {
   conductivityUseWarnings,
   geometryPlausibilityWarnings,
   layerSpansOfProfile,
   temperaturePlausibilityWarnings,
-} from '../checks/plausibility-warnings.js';
+} from '../../checks/plausibility-warnings.js';
 
 /** Layer boundaries as the engine places them: x from 0 (planar) or r from the inner radius. */
 function layerBounds(problem: SteadyProblem): { innerPosition: number; outerPosition: number }[] {

@@ -15,12 +15,12 @@
  * the caller's callback), never both. The field names are those of PipeInput, so an error from
  * the parser and one from calculatePipe name the same path.
  */
-import { InputError } from '../fe/errors.js';
-import { resolveCaseMaterial, type MaterialResolver } from './case-material.js';
-import { validatePipeInput, type PipeInput } from '../assemblies/pipe-input.js';
-import { rejectUnknownKeys, requireObject, requireSchemaVersion, requireString, shown, type JsonObject } from './case-fields.js';
+import { InputError } from '../../fe/errors.js';
+import { resolveCaseMaterial, type MaterialResolver } from '../case-material.js';
+import { validatePipeInput, type PipeInput } from './pipe-input.js';
+import { rejectUnknownKeys, requireObject, requireSchemaVersion, requireString, shown, type JsonObject } from '../case-fields.js';
 
-export type { MaterialResolver } from './case-material.js';
+export type { MaterialResolver } from '../case-material.js';
 
 export const PIPE_CASE_SCHEMA_VERSION = 1;
 

@@ -8,14 +8,14 @@
  * any temperature-dependent conductivity. Results keep full precision; rounding is for display.
  * Heat flows are positive outwards (heat lost by the pipe); a chilled line gives negative values.
  */
-import { geometryPlausibilityWarnings } from '../checks/plausibility-warnings.js';
-import type { OuterSurfaceShape } from '../physics/outer-surface-exchange.js';
+import { geometryPlausibilityWarnings } from '../../checks/plausibility-warnings.js';
+import type { OuterSurfaceShape } from '../../physics/outer-surface-exchange.js';
 import {
   methodNeedsEmissivity,
   outerSurfaceEmissivity,
   type ResolvedEmissivity,
-} from './pipe-and-flat-inputs.js';
-import { solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from './pipe-and-flat-solve.js';
+} from '../insulated/insulated-inputs.js';
+import { solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
 import { DEFAULT_SURFACE_METHOD, validatePipeInput, verticalPipeHeight, type PipeInput } from './pipe-input.js';
 
 export interface PipeResult extends Omit<StackSolution, 'engine' | 'heatOut'> {

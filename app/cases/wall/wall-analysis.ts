@@ -3,7 +3,7 @@
  * surface-condensation check, and the interstitial-condensation check at the design condition and,
  * when the case carries a monthly climate, over the year. Used by the command line and the UI.
  */
-import type { CheckResult } from '../checks/check-result.js';
+import type { CheckResult } from '../../checks/check-result.js';
 import {
   checkInterstitialAtDesignCondition,
   checkInterstitialMonthly,
@@ -12,7 +12,7 @@ import {
   type InterstitialDesignResult,
   type InterstitialMonthlyResult,
   type MouldAssessment,
-} from '../checks/interstitial.js';
+} from '../../checks/interstitial.js';
 import { calculateWall } from './wall-calculation.js';
 import type { WallInput } from './wall-input.js';
 import type { WallResult } from './wall-result.js';

@@ -13,9 +13,9 @@
  *     "ambient": { "airTemperature": 15, "relativeHumidity": 0.7, "exposure": { "kind": "outdoor", "windSpeed": 4 } },
  *     "area": 120, "operatingHours": 8760 }
  */
-import { validateFlatSurfaceInput, type FlatSurfaceInput } from '../assemblies/flat-surface-input.js';
-import { rejectUnknownKeys, requireObject, type JsonObject } from './case-fields.js';
-import { caseEnvelope, caseLayers, caseMaterialLayer, type MaterialResolver } from './pipe-case-file.js';
+import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
+import { rejectUnknownKeys, requireObject, type JsonObject } from '../case-fields.js';
+import { caseEnvelope, caseLayers, caseMaterialLayer, type MaterialResolver } from '../pipe/pipe-case-file.js';
 
 export const FLAT_CASE_SCHEMA_VERSION = 1;
 

@@ -3,10 +3,10 @@
  * the conditions, solves, recovers the face heat flows and closes the energy balance), then read
  * back as U-value, resistances and temperatures.
  */
-import { conductivityAt, isConstantConductivity } from '../fe/conductivity.js';
-import { solveSteady } from '../fe/steady-solve.js';
-import type { SteadyResult } from '../fe/result.js';
-import { roundToSignificantFigures, U_VALUE_SIGNIFICANT_FIGURES } from './wall-rounding.js';
+import { conductivityAt, isConstantConductivity } from '../../fe/conductivity.js';
+import { solveSteady } from '../../fe/steady-solve.js';
+import type { SteadyResult } from '../../fe/result.js';
+import { roundToSignificantFigures, U_VALUE_SIGNIFICANT_FIGURES } from '../../base/significant-figures.js';
 import { wallEngineProblem } from './wall-engine-problem.js';
 import type { WallInput } from './wall-input.js';
 import type { WallLayerResult, WallResult } from './wall-result.js';

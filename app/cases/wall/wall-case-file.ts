@@ -5,14 +5,14 @@
  * climate is inline or the name of a shipped demo climate. Every problem is one InputError
  * sentence naming the field path and the allowed values.
  */
-import { demoClimateByName, DEMO_CLIMATES } from '../assemblies/wall-demo-climates.js';
-import type { MonthlyClimate } from '../assemblies/wall-climate.js';
-import type { InsideHumiditySource, WallInput, WallLayer } from '../assemblies/wall-input.js';
-import { validateWallInput } from '../assemblies/wall-validation.js';
-import { InputError } from '../fe/errors.js';
-import type { MaterialProperties } from '../materials/material-properties.js';
-import { resolveCaseMaterial } from './case-material.js';
-import { isObject, rejectUnknownKeys, shown, type JsonObject } from './case-fields.js';
+import { demoClimateByName, DEMO_CLIMATES } from './wall-demo-climates.js';
+import type { MonthlyClimate } from '../../checks/monthly-climate.js';
+import type { InsideHumiditySource, WallInput, WallLayer } from './wall-input.js';
+import { validateWallInput } from './wall-validation.js';
+import { InputError } from '../../fe/errors.js';
+import type { MaterialProperties } from '../../materials/material-properties.js';
+import { resolveCaseMaterial } from '../case-material.js';
+import { isObject, rejectUnknownKeys, shown, type JsonObject } from '../case-fields.js';
 
 export const WALL_CASE_SCHEMA_VERSION = 1;
 

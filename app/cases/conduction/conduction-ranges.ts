@@ -4,11 +4,11 @@
  * positive values, which lets a 1e308 m layer or a 1e30 W/(m²·K) film through to an overflow or a
  * system too ill-conditioned to solve.
  */
-import { requireNumberIn, requireWholeNumber } from '../base/field-checks.js';
-import { QUANTITY_RANGES, MAX_CASE_ELEMENTS_PER_LAYER } from '../base/quantity-ranges.js';
-import type { FaceCondition, Layer, SteadyProblem } from '../fe/problem.js';
-import { requireConductivityOver, validateConductivityModel } from '../materials/conductivity-checks.js';
-import { isObject, type JsonObject } from './case-fields.js';
+import { requireNumberIn, requireWholeNumber } from '../../base/field-checks.js';
+import { QUANTITY_RANGES, MAX_CASE_ELEMENTS_PER_LAYER } from '../../base/quantity-ranges.js';
+import type { FaceCondition, Layer, SteadyProblem } from '../../fe/problem.js';
+import { requireConductivityOver, validateConductivityModel } from '../../materials/conductivity-checks.js';
+import { isObject, type JsonObject } from '../case-fields.js';
 
 const R = QUANTITY_RANGES;
 

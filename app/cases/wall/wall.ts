@@ -11,10 +11,10 @@ export type {
 } from './wall-input.js';
 export { isAirLayer } from './wall-input.js';
 export type { WallResult, WallLayerResult } from './wall-result.js';
-export type { MonthlyClimate, ClimateMonth } from './wall-climate.js';
-export { monthDuration } from './wall-climate.js';
+export type { MonthlyClimate, ClimateMonth } from '../../checks/monthly-climate.js';
+export { monthDuration } from '../../checks/monthly-climate.js';
 export { calculateWall, solveWall, type WallSolution } from './wall-calculation.js';
 export { validateWallInput } from './wall-validation.js';
 export { buildThermalStack, type ThermalStack, type StackLayer, type VentilationRule } from './wall-thermal-stack.js';
-export { roundToSignificantFigures, U_VALUE_SIGNIFICANT_FIGURES } from './wall-rounding.js';
+export { roundToSignificantFigures, U_VALUE_SIGNIFICANT_FIGURES } from '../../base/significant-figures.js';
 export { DEMO_CLIMATES, demoClimateByName } from './wall-demo-climates.js';

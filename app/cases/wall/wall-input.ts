@@ -5,9 +5,9 @@
  *
  * Layers are ordered from the inside (warm side in winter) to the outside.
  */
-import type { MaterialProperties } from '../materials/material-properties.js';
-import type { AirLayerVentilation, HeatFlowDirection } from '../physics/index.js';
-import type { MonthlyClimate } from './wall-climate.js';
+import type { MaterialProperties } from '../../materials/material-properties.js';
+import type { AirLayerVentilation, HeatFlowDirection } from '../../physics/index.js';
+import type { MonthlyClimate } from '../../checks/monthly-climate.js';
 
 /** A layer of a material with a known thickness. */
 export interface WallMaterialLayer {

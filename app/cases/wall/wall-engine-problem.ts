@@ -3,7 +3,7 @@
  * h = 1/R_si towards the inside air and h = 1/R_se towards the outside air (surface resistances as
  * fixed film coefficients, as ISO 6946 treats them).
  */
-import type { Layer, SteadyProblem } from '../fe/problem.js';
+import type { Layer, SteadyProblem } from '../../fe/problem.js';
 import type { ThermalStack } from './wall-thermal-stack.js';
 
 export function wallEngineProblem(stack: ThermalStack, insideTemperature: number, outsideTemperature: number): SteadyProblem {

@@ -4,11 +4,11 @@
  * in JSON; the pipe, flat-surface and wall case files build on materials and design conditions
  * instead. Schema: data/schemas/conduction-case.schema.json. All values SI, temperatures °C.
  */
-import { InputError } from '../fe/errors.js';
-import type { FaceCondition, Layer, SteadyProblem, TransientProblem } from '../fe/problem.js';
-import { validateSteadyProblem, validateTransientProblem } from '../fe/validate.js';
+import { InputError } from '../../fe/errors.js';
+import type { FaceCondition, Layer, SteadyProblem, TransientProblem } from '../../fe/problem.js';
+import { validateSteadyProblem, validateTransientProblem } from '../../fe/validate.js';
 import { checkConductionRanges } from './conduction-ranges.js';
-import { isObject, rejectUnknownKeys, requireArray, requireObject, requireSchemaVersion, requireString, shown } from './case-fields.js';
+import { isObject, rejectUnknownKeys, requireArray, requireObject, requireSchemaVersion, requireString, shown } from '../case-fields.js';
 
 export const CONDUCTION_CASE_SCHEMA_VERSION = 1;
 

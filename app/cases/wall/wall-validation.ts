@@ -2,17 +2,17 @@
  * Edge validation of a wall input. Each failure is one InputError sentence naming the field path
  * (e.g. `layers[2].thickness`) and the allowed range, so a bad value never reaches the engine as NaN.
  */
-import classTable from '../../data/physics/humidity-classes.json' with { type: 'json' };
-import { requireNumberIn } from '../base/field-checks.js';
-import { QUANTITY_RANGES } from '../base/quantity-ranges.js';
-import { InputError } from '../fe/errors.js';
-import { AIR_LAYER_MAXIMUM_THICKNESS, airLayerVentilation, HEAT_FLOW_DIRECTIONS } from '../physics/index.js';
-import type { MonthlyClimate } from './wall-climate.js';
+import classTable from '../../../data/physics/humidity-classes.json' with { type: 'json' };
+import { requireNumberIn } from '../../base/field-checks.js';
+import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
+import { InputError } from '../../fe/errors.js';
+import { AIR_LAYER_MAXIMUM_THICKNESS, airLayerVentilation, HEAT_FLOW_DIRECTIONS } from '../../physics/index.js';
+import type { MonthlyClimate } from '../../checks/monthly-climate.js';
 import { isAirLayer, type AirCondition, type WallInput } from './wall-input.js';
 
 const VENTILATIONS = ['unventilated', 'slightly-ventilated', 'well-ventilated'] as const;
 
-import { shownValue as shown } from '../base/shown-value.js';
+import { shownValue as shown } from '../../base/shown-value.js';
 
 function finite(field: string, value: unknown, unit: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
