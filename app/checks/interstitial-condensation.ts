@@ -1,17 +1,17 @@
 /**
  * Interstitial condensation at one design condition, by the Glaser-type method of ISO 13788
- * (reference notes §4): temperatures from the steady engine solution with the ISO 6946 surface
- * resistances, saturation pressure at each interface, the tightest vapour line under saturation,
- * and the condensation rate g_c = g_in − g_out where it touches.
+ * (reference notes §4): from a solved state (temperatures at every interface from the steady
+ * engine solution with the ISO 6946 surface resistances, and their saturation pressures), the
+ * tightest vapour line under saturation and the condensation rate g_c = g_in − g_out where it
+ * touches. A function of the solved state only: it never solves the wall itself.
  */
-import type { AirCondition, WallInput } from '../cases/wall/wall-input.js';
-import { validateWallInput } from '../cases/wall/wall-validation.js';
+import type { AirCondition } from '../physics/air-condition.js';
 import { saturationPressure } from '../physics/index.js';
 import type { CheckResult } from './check-result.js';
 import { constructVapourProfile, unlimitedVapourProfile, type GlaserProfile } from './glaser-construction.js';
-import { insideVapourPressure, describeInsideHumidity } from './mould-humidity-classes.js';
+import { insideVapourPressure, describeInsideHumidity, type InsideHumiditySource } from './mould-humidity-classes.js';
 import { MOISTURE_CAUTION } from './mould-moisture-caution.js';
-import { VAPOUR_PERMEABILITY_OF_AIR, vapourStackAt, type VapourLayer } from './interstitial-vapour-stack.js';
+import { VAPOUR_PERMEABILITY_OF_AIR, type VapourLayer, type VapourStackAtCondition } from './interstitial-vapour-stack.js';
 
 export interface InterstitialOptions {
   /** δ₀, kg/(m·s·Pa); default 2e-10 (ISO 13788, from memory). */
@@ -44,16 +44,16 @@ export interface InterstitialState {
   readonly surfaceCondensation: GlaserProfile['surfaceCondensation'];
 }
 
-/** The Glaser state of the wall at one pair of conditions (with wet interfaces held at saturation). */
+/** The Glaser state of the wall at one solved condition (with wet interfaces held at saturation). */
 export function interstitialStateAt(
-  input: WallInput,
+  v: VapourStackAtCondition,
   inside: AirCondition,
   outside: AirCondition,
+  humidity: InsideHumiditySource | undefined,
   options: InterstitialOptions = {},
   wet?: readonly boolean[],
 ): InterstitialState {
-  const v = vapourStackAt(input, inside.temperature, outside.temperature);
-  const pi = insideVapourPressure(input.moisture?.insideHumidity, inside, outside);
+  const pi = insideVapourPressure(humidity, inside, outside);
   const pe = outside.relativeHumidity * saturationPressure(outside.temperature);
   const layerSd = v.layers.map((l) => l.sd);
   const profile = constructVapourProfile({
@@ -104,13 +104,18 @@ export interface InterstitialDesignResult extends InterstitialState {
   readonly check: CheckResult;
 }
 
-/** The check at the wall's own inside and outside conditions. */
-export function checkInterstitialAtDesignCondition(input: WallInput, options: InterstitialOptions = {}): InterstitialDesignResult {
-  validateWallInput(input);
-  const state = interstitialStateAt(input, input.inside, input.outside, options);
+/** The check at the wall's own inside and outside conditions, from the state solved at them. */
+export function checkInterstitialAtDesignCondition(
+  stack: VapourStackAtCondition,
+  inside: AirCondition,
+  outside: AirCondition,
+  humidity: InsideHumiditySource | undefined,
+  options: InterstitialOptions = {},
+): InterstitialDesignResult {
+  const state = interstitialStateAt(stack, inside, outside, humidity, options);
   const condensing = state.points.filter((p) => p.condensationRate > 0);
   const perDay = (g: number) => `${(g * 86_400 * 1000).toFixed(2)} g/(m²·day)`;
-  const source = describeInsideHumidity(input.moisture?.insideHumidity);
+  const source = describeInsideHumidity(humidity);
   const check: CheckResult = {
     check: 'interstitial-condensation',
     title: 'Interstitial condensation (design condition)',

@@ -2,8 +2,9 @@
  * The monthly interstitial-condensation procedure of ISO 13788 (reference notes §4, from memory):
  * 1. Start month: with the element dry, find the first month with condensation that follows a month
  *    without; if every month condenses, start with the climate's first month (our rule, no source).
- * 2. Run twelve months from there. In each month the temperature profile is solved afresh; an
- *    interface that holds water is held at saturation (so the profile is re-checked every month),
+ * 2. Run twelve months from there. Each month's temperature profile is the state the wall case
+ *    solved for that month (moisture does not change it); an interface that holds water is held
+ *    at saturation (so the vapour profile is re-checked every month),
  *    g_c = g_in − g_out there may be negative (evaporation), and the stored amount
  *    M_a ← max(0, M_a + g_c·t_month): evaporation is limited to what is stored.
  * 3. Report the largest accumulated amount and whether everything has evaporated at the end of the
@@ -11,11 +12,10 @@
  */
 import type { ClimateMonth, MonthlyClimate } from './monthly-climate.js';
 import { monthDuration } from './monthly-climate.js';
-import type { WallInput } from '../cases/wall/wall-input.js';
-import { validateClimate, validateWallInput } from '../cases/wall/wall-validation.js';
-import { InputError } from '../fe/errors.js';
 import type { CheckResult } from './check-result.js';
 import { interstitialStateAt, type InterstitialOptions, type InterstitialState } from './interstitial-condensation.js';
+import type { VapourStackAtCondition } from './interstitial-vapour-stack.js';
+import type { InsideHumiditySource } from './mould-humidity-classes.js';
 import { MOISTURE_CAUTION } from './mould-moisture-caution.js';
 
 export interface InterstitialMonth {
@@ -53,18 +53,15 @@ function condenses(state: InterstitialState): boolean {
   return state.points.some((p) => p.condensationRate > 0);
 }
 
+/** `stacks[i]` is the vapour stack solved at month i of the climate (same order). */
 export function checkInterstitialMonthly(
-  input: WallInput,
-  climate?: MonthlyClimate,
+  c: MonthlyClimate,
+  stacks: readonly VapourStackAtCondition[],
+  humidity: InsideHumiditySource | undefined,
   options: InterstitialOptions = {},
 ): InterstitialMonthlyResult {
-  validateWallInput(input);
-  const c = climate ?? input.moisture?.climate;
-  if (!c) throw new InputError('moisture.climate', 'moisture.climate is needed for the monthly procedure: give 12 months of inside and outside conditions or the name of a shipped climate.');
-  validateClimate('moisture.climate', c);
   const months: readonly ClimateMonth[] = c.months;
-
-  const dry = months.map((m) => interstitialStateAt(input, m.inside, m.outside, options));
+  const dry = months.map((m, i) => interstitialStateAt(stacks[i]!, m.inside, m.outside, humidity, options));
   const wetMonths = dry.map(condenses);
   const anyCondensation = wetMonths.some(Boolean);
   const everyMonth = wetMonths.every(Boolean);
@@ -83,7 +80,7 @@ export function checkInterstitialMonthly(
     const i = ((start ?? 0) + step) % 12;
     const m = months[i]!;
     const wet = stored.map((w) => w > 0);
-    const state = wet.some(Boolean) ? interstitialStateAt(input, m.inside, m.outside, options, wet) : dry[i]!;
+    const state = wet.some(Boolean) ? interstitialStateAt(stacks[i]!, m.inside, m.outside, humidity, options, wet) : dry[i]!;
     const t = monthDuration(m);
     const next = stored.map((w, k) => Math.max(0, w + state.points[k]!.condensationRate * t));
     const change = next.map((w, k) => w - stored[k]!);

@@ -1,6 +1,6 @@
 /** Public API of the wall moisture checks (interstitial condensation, mould and surface condensation). */
 export { constructVapourProfile, unlimitedVapourProfile, type GlaserInput, type GlaserProfile } from './glaser-construction.js';
-export { VAPOUR_PERMEABILITY_OF_AIR, vapourLayers, vapourStackAt, type VapourLayer } from './interstitial-vapour-stack.js';
+export { VAPOUR_PERMEABILITY_OF_AIR, vapourStackAt, type VapourLayer, type VapourStackAtCondition } from './interstitial-vapour-stack.js';
 export {
   checkInterstitialAtDesignCondition,
   interstitialStateAt,
@@ -10,7 +10,7 @@ export {
   type InterstitialDesignResult,
 } from './interstitial-condensation.js';
 export { checkInterstitialMonthly, type InterstitialMonth, type InterstitialMonthlyResult } from './interstitial-monthly.js';
-export { checkMouldAtDesignCondition, checkMouldMonthly, type MouldAssessment, type MouldCheckOptions, type SurfaceHumidityCondition } from './mould-check.js';
+export { assessMould, mouldDesignIndices, surfaceHumidityConditions, type MouldAssessment, type SurfaceHumidityCondition } from './mould-check.js';
 export {
   temperatureFactor,
   minimumTemperatureFactor,
@@ -19,5 +19,5 @@ export {
   CONDENSATION_SURFACE_HUMIDITY_LIMIT,
   MOULD_CHECK_INSIDE_SURFACE_RESISTANCE,
 } from './mould-temperature-factor.js';
-export { insideVapourPressure, classVapourPressureExcess, HUMIDITY_CLASSES, HUMIDITY_CLASS_SOURCE, HUMIDITY_CLASS_SAFETY_FACTOR } from './mould-humidity-classes.js';
+export { insideVapourPressure, classVapourPressureExcess, type InsideHumiditySource, HUMIDITY_CLASSES, HUMIDITY_CLASS_SOURCE, HUMIDITY_CLASS_SAFETY_FACTOR } from './mould-humidity-classes.js';
 export { MOISTURE_CAUTION } from './mould-moisture-caution.js';

@@ -3,7 +3,7 @@
  * each month, and the inside condition kept in that month. Climates are data (data/climate/*.json);
  * the shipped ones are invented demo climates, not for design.
  */
-import type { AirCondition } from '../cases/wall/wall-input.js';
+import type { AirCondition } from '../physics/air-condition.js';
 
 export interface ClimateMonth {
   /** Month name, e.g. 'January'. */

@@ -1,30 +1,23 @@
 /**
  * Mould and surface condensation on the inside surface of a wall or roof (ISO 13788 method,
- * reference notes §4): the element's temperature factor f_Rsi, computed with the engine using
- * R_si = 0.25 m²·K/W (from memory), against the critical factor f_Rsi,min from the surface
- * humidity limit (0.8 mould, 1.0 condensation). Monthly: the design month is the one with the
- * largest f_Rsi,min over the climate; the element passes if its f_Rsi exceeds that value.
+ * reference notes §4): the element's temperature factor f_Rsi, from the inside surface
+ * temperature the wall case solved with R_si = 0.25 m²·K/W (from memory), against the critical
+ * factor f_Rsi,min from the surface humidity limit (0.8 mould, 1.0 condensation). Monthly: the
+ * design month is the one with the largest f_Rsi,min over the climate; the element passes if its
+ * f_Rsi exceeds that value. In two steps, so that the wall is solved only where it matters:
+ * `surfaceHumidityConditions` and `mouldDesignIndices` need no solve; the wall case then solves
+ * the design condition(s) and `assessMould` judges them.
  */
-import { solveWall } from '../cases/wall/wall-calculation.js';
-import type { MonthlyClimate } from './monthly-climate.js';
-import type { AirCondition, WallInput } from '../cases/wall/wall-input.js';
-import { validateClimate, validateWallInput } from '../cases/wall/wall-validation.js';
-import { InputError } from '../fe/errors.js';
+import type { AirCondition } from '../physics/air-condition.js';
 import type { CheckResult } from './check-result.js';
-import { describeInsideHumidity, insideVapourPressure } from './mould-humidity-classes.js';
+import { describeInsideHumidity, insideVapourPressure, type InsideHumiditySource } from './mould-humidity-classes.js';
 import { MOISTURE_CAUTION } from './mould-moisture-caution.js';
 import {
   CONDENSATION_SURFACE_HUMIDITY_LIMIT,
   minimumTemperatureFactor,
-  MOULD_CHECK_INSIDE_SURFACE_RESISTANCE,
   MOULD_SURFACE_HUMIDITY_LIMIT,
   temperatureFactor,
 } from './mould-temperature-factor.js';
-
-export interface MouldCheckOptions {
-  /** R_si for the check, m²·K/W; default 0.25 (opaque elements). */
-  readonly insideSurfaceResistance?: number;
-}
 
 export interface SurfaceHumidityCondition {
   /** Month name, or 'design condition' for the single-condition check. */
@@ -52,8 +45,8 @@ export interface MouldAssessment {
   readonly surfaceCondensation: CheckResult;
 }
 
-function conditionOf(label: string, inside: AirCondition, outside: AirCondition, input: WallInput): SurfaceHumidityCondition {
-  const pi = insideVapourPressure(input.moisture?.insideHumidity, inside, outside);
+function conditionOf(label: string, inside: AirCondition, outside: AirCondition, humidity: InsideHumiditySource | undefined): SurfaceHumidityCondition {
+  const pi = insideVapourPressure(humidity, inside, outside);
   const applies = inside.temperature > outside.temperature && pi > 0;
   return {
     label,
@@ -74,12 +67,6 @@ function designIndex(conditions: readonly SurfaceHumidityCondition[], pick: (c: 
     if (f !== null && (best === null || f > pick(conditions[best]!)!)) best = i;
   });
   return best;
-}
-
-function elementFactor(input: WallInput, c: SurfaceHumidityCondition, rsi: number): { factor: number; surface: number } {
-  const { steady } = solveWall(input, c.inside.temperature, c.outside.temperature, { insideSurfaceResistance: rsi });
-  const surface = steady.faces.inner.temperature;
-  return { factor: temperatureFactor(surface, c.inside.temperature, c.outside.temperature), surface };
 }
 
 function verdictFor(
@@ -117,19 +104,43 @@ function verdictFor(
   };
 }
 
-function assess(input: WallInput, conditions: SurfaceHumidityCondition[], options: MouldCheckOptions): MouldAssessment {
-  const rsi = options.insideSurfaceResistance ?? MOULD_CHECK_INSIDE_SURFACE_RESISTANCE;
-  if (typeof rsi !== 'number' || !Number.isFinite(rsi) || !(rsi > 0) || rsi > 10) {
-    throw new InputError('insideSurfaceResistance', `insideSurfaceResistance must be greater than 0 and at most 10 m²·K/W (got ${String(rsi)}).`);
-  }
-  const source = describeInsideHumidity(input.moisture?.insideHumidity);
-  const iMould = designIndex(conditions, (c) => c.minimumFactorMould);
-  const iCond = designIndex(conditions, (c) => c.minimumFactorCondensation);
-  const atMould = iMould === null ? null : elementFactor(input, conditions[iMould]!, rsi);
-  const atCond = iCond === null ? null : elementFactor(input, conditions[iCond]!, rsi);
+/** The conditions to judge (one design condition, or each month), with their critical factors; no solve needed. */
+export function surfaceHumidityConditions(
+  pairs: readonly { readonly label: string; readonly inside: AirCondition; readonly outside: AirCondition }[],
+  humidity: InsideHumiditySource | undefined,
+): SurfaceHumidityCondition[] {
+  return pairs.map((p) => conditionOf(p.label, p.inside, p.outside, humidity));
+}
+
+/** The design condition of each criterion: the one with the largest critical factor (null if none applies). */
+export function mouldDesignIndices(conditions: readonly SurfaceHumidityCondition[]): { readonly mould: number | null; readonly condensation: number | null } {
+  return { mould: designIndex(conditions, (c) => c.minimumFactorMould), condensation: designIndex(conditions, (c) => c.minimumFactorCondensation) };
+}
+
+/**
+ * The verdicts, from the inside surface temperature solved (with `insideSurfaceResistance`) at
+ * each criterion's design condition; null where that criterion has none.
+ */
+export function assessMould(
+  conditions: readonly SurfaceHumidityCondition[],
+  design: { readonly mould: number | null; readonly condensation: number | null },
+  solvedSurface: { readonly mould: number | null; readonly condensation: number | null },
+  insideSurfaceResistance: number,
+  humidity: InsideHumiditySource | undefined,
+): MouldAssessment {
+  const source = describeInsideHumidity(humidity);
+  const factorAt = (index: number | null, surface: number | null) => {
+    if (index === null || surface === null) return null;
+    const c = conditions[index]!;
+    return { factor: temperatureFactor(surface, c.inside.temperature, c.outside.temperature), surface };
+  };
+  const atMould = factorAt(design.mould, solvedSurface.mould);
+  const atCond = factorAt(design.condensation, solvedSurface.condensation);
+  const iMould = design.mould;
+  const iCond = design.condensation;
   return {
     temperatureFactor: atMould?.factor ?? null,
-    insideSurfaceResistance: rsi,
+    insideSurfaceResistance,
     insideSurfaceTemperature: atMould?.surface ?? null,
     conditions,
     designIndexMould: iMould,
@@ -151,23 +162,4 @@ function assess(input: WallInput, conditions: SurfaceHumidityCondition[], option
       source,
     ),
   };
-}
-
-/** The check at the wall's own inside and outside conditions (one design condition). */
-export function checkMouldAtDesignCondition(input: WallInput, options: MouldCheckOptions = {}): MouldAssessment {
-  validateWallInput(input);
-  return assess(input, [conditionOf('design condition', input.inside, input.outside, input)], options);
-}
-
-/** The monthly check over a climate (default: the wall's moisture.climate). */
-export function checkMouldMonthly(input: WallInput, climate?: MonthlyClimate, options: MouldCheckOptions = {}): MouldAssessment {
-  validateWallInput(input);
-  const c = climate ?? input.moisture?.climate;
-  if (!c) throw new InputError('moisture.climate', 'moisture.climate is needed for the monthly check: give 12 months of inside and outside conditions or the name of a shipped climate.');
-  validateClimate('moisture.climate', c);
-  return assess(
-    input,
-    c.months.map((m) => conditionOf(m.month, m.inside, m.outside, input)),
-    options,
-  );
 }

@@ -5,7 +5,7 @@
  * monthly means at or below 0 °C, falls linearly to 0 at 20 °C, and may carry the 1.1 safety factor.
  */
 import classTable from '../../data/physics/humidity-classes.json' with { type: 'json' };
-import type { AirCondition, InsideHumiditySource } from '../cases/wall/wall-input.js';
+import type { AirCondition } from '../physics/air-condition.js';
 import { InputError } from '../fe/errors.js';
 import { saturationPressure } from '../physics/index.js';
 
@@ -14,6 +14,15 @@ export const HUMIDITY_CLASSES = classTable.classes;
 export const HUMIDITY_CLASS_SAFETY_FACTOR: number = classTable.safetyFactor.value;
 
 /** Vapour pressure excess Δp of a class at the outside temperature θ_e, Pa (without the safety factor). */
+/**
+ * Where the inside humidity of the moisture checks comes from: the inside condition as given
+ * (measured or specified), or an internal humidity class (ISO 13788 annex, data/physics/humidity-classes.json),
+ * optionally with the 1.1 safety factor on the vapour pressure excess.
+ */
+export type InsideHumiditySource =
+  | { readonly kind: 'measured' }
+  | { readonly kind: 'class'; readonly humidityClass: number; readonly safetyFactor?: boolean };
+
 export function classVapourPressureExcess(humidityClass: number, outsideTemperature: number): number {
   const row = classTable.classes.find((c) => c.humidityClass === humidityClass);
   if (!row) {

@@ -14,7 +14,7 @@ import {
   checkInterstitialMonthly,
   checkMouldAtDesignCondition,
   checkMouldMonthly,
-} from '../../app/checks/interstitial.js';
+} from '../checks/wall-moisture.js';
 import { InputError } from '../../app/fe/index.js';
 import type { MaterialProperties } from '../../app/materials/material-properties.js';
 import { layer, material, thrownBy, wall } from './wall-fixtures.js';

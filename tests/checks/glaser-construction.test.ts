@@ -5,7 +5,8 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { checkInterstitialAtDesignCondition, constructVapourProfile } from '../../app/checks/interstitial.js';
+import { constructVapourProfile } from '../../app/checks/interstitial.js';
+import { checkInterstitialAtDesignCondition } from './wall-moisture.js';
 import { layer, material, wall } from '../assemblies/wall-fixtures.js';
 import { pSat } from './iso13788-saturation.js';
 

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import type { MonthlyClimate } from '../../app/cases/wall/wall.js';
 import { DEMO_CLIMATES } from '../../app/cases/wall/wall.js';
-import { checkInterstitialMonthly } from '../../app/checks/interstitial.js';
+import { checkInterstitialMonthly } from './wall-moisture.js';
 import { layer, material, wall } from '../assemblies/wall-fixtures.js';
 import { pSat } from './iso13788-saturation.js';
 

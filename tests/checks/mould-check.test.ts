@@ -6,13 +6,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { MonthlyClimate } from '../../app/cases/wall/wall.js';
-import {
-  checkMouldAtDesignCondition,
-  checkMouldMonthly,
-  classVapourPressureExcess,
-  insideVapourPressure,
-  minimumTemperatureFactor,
-} from '../../app/checks/interstitial.js';
+import { classVapourPressureExcess, insideVapourPressure, minimumTemperatureFactor } from '../../app/checks/interstitial.js';
+import { checkMouldAtDesignCondition, checkMouldMonthly } from './wall-moisture.js';
 import { InputError } from '../../app/fe/index.js';
 import { layer, material, thrownBy, wall } from '../assemblies/wall-fixtures.js';
 import { pSat } from './iso13788-saturation.js';

@@ -1,21 +1,32 @@
 /**
- * Everything a wall or roof case asks for in one call: the ISO 6946 calculation, the mould and
- * surface-condensation check, and the interstitial-condensation check at the design condition and,
- * when the case carries a monthly climate, over the year. Used by the command line and the UI.
+ * Everything a wall or roof case asks for, in the order of the method: validate once, build the
+ * thermal stacks (ISO 6946 surface resistances, and R_si = 0.25 m²·K/W for the mould criterion),
+ * solve each state once (wall-states.ts), then hand the solved states to the checks: mould and
+ * inside-surface condensation, interstitial condensation at the design condition and, when the
+ * case carries a monthly climate, over the year.
  */
 import type { CheckResult } from '../../checks/check-result.js';
 import {
+  assessMould,
   checkInterstitialAtDesignCondition,
   checkInterstitialMonthly,
-  checkMouldAtDesignCondition,
-  checkMouldMonthly,
+  mouldDesignIndices,
+  surfaceHumidityConditions,
+  vapourStackAt,
+  MOULD_CHECK_INSIDE_SURFACE_RESISTANCE,
   type InterstitialDesignResult,
   type InterstitialMonthlyResult,
   type MouldAssessment,
 } from '../../checks/interstitial.js';
-import { calculateWall } from './wall-calculation.js';
+import { solveSteady } from '../../fe/steady-solve.js';
+import { wallResultOf } from './wall-calculation.js';
+import { wallEngineProblem } from './wall-engine-problem.js';
 import type { WallInput } from './wall-input.js';
 import type { WallResult } from './wall-result.js';
+import { wallStateSolver } from './wall-states.js';
+import { buildThermalStack } from './wall-thermal-stack.js';
+import { validateWallInput } from './wall-validation.js';
+import { wallVapourLayers } from './wall-vapour-layers.js';
 
 export interface WallAnalysis {
   readonly wall: WallResult;
@@ -25,14 +36,56 @@ export interface WallAnalysis {
   readonly interstitialMonthly: InterstitialMonthlyResult | null;
   /** The verdicts above, in reading order. */
   readonly checks: readonly CheckResult[];
+  /** Engine solves this analysis made (each state once; a linear wall needs one per stack). */
+  readonly solves: number;
+}
+
+/** Everything the analysis will need of the input, checked up front (a missing μ is found here, not halfway). */
+export function validateWallCase(input: WallInput): void {
+  validateWallInput(input);
+  wallVapourLayers(input, buildThermalStack(input));
 }
 
 export function analyseWall(input: WallInput): WallAnalysis {
-  const wall = calculateWall(input);
+  validateWallInput(input);
+  const stack = buildThermalStack(input);
+  const vapour = wallVapourLayers(input, stack);
+  const humidity = input.moisture?.insideHumidity;
   const climate = input.moisture?.climate;
-  const mould = climate ? checkMouldMonthly(input, climate) : checkMouldAtDesignCondition(input);
-  const interstitialDesign = checkInterstitialAtDesignCondition(input);
-  const interstitialMonthly = climate ? checkInterstitialMonthly(input, climate) : null;
+
+  // The design condition: the ISO 6946 result and the design interstitial check.
+  const design = solveSteady(wallEngineProblem(stack, input.inside.temperature, input.outside.temperature));
+  const states = wallStateSolver(stack, { inside: input.inside.temperature, outside: input.outside.temperature, steady: design });
+  const stackAt = (inside: number, outside: number) => vapourStackAt(vapour.layers, vapour.pointNames, states.at(inside, outside));
+  const interstitialDesign = checkInterstitialAtDesignCondition(stackAt(input.inside.temperature, input.outside.temperature), input.inside, input.outside, humidity);
+  const interstitialMonthly = climate
+    ? checkInterstitialMonthly(
+        climate,
+        climate.months.map((m) => stackAt(m.inside.temperature, m.outside.temperature)),
+        humidity,
+      )
+    : null;
+
+  // Mould and inside-surface condensation: find each criterion's design condition, then solve only those.
+  const conditions = surfaceHumidityConditions(
+    climate ? climate.months.map((m) => ({ label: m.month, inside: m.inside, outside: m.outside })) : [{ label: 'design condition', inside: input.inside, outside: input.outside }],
+    humidity,
+  );
+  const designIndices = mouldDesignIndices(conditions);
+  const mouldStates = wallStateSolver(buildThermalStack(input, { insideSurfaceResistance: MOULD_CHECK_INSIDE_SURFACE_RESISTANCE }));
+  const surfaceAt = (index: number | null) => {
+    if (index === null) return null;
+    const c = conditions[index]!;
+    return mouldStates.at(c.inside.temperature, c.outside.temperature)[0]!;
+  };
+  const mould = assessMould(
+    conditions,
+    designIndices,
+    { mould: surfaceAt(designIndices.mould), condensation: surfaceAt(designIndices.condensation) },
+    MOULD_CHECK_INSIDE_SURFACE_RESISTANCE,
+    humidity,
+  );
+
   const checks = [mould.mould, mould.surfaceCondensation, interstitialDesign.check, ...(interstitialMonthly ? [interstitialMonthly.check] : [])];
-  return { wall, mould, interstitialDesign, interstitialMonthly, checks };
+  return { wall: wallResultOf(input, stack, design), mould, interstitialDesign, interstitialMonthly, checks, solves: 1 + states.solves() + mouldStates.solves() };
 }

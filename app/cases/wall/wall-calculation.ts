@@ -33,6 +33,11 @@ export function solveWall(
 
 export function calculateWall(input: WallInput): WallResult {
   const { stack, steady } = solveWall(input);
+  return wallResultOf(input, stack, steady);
+}
+
+/** The ISO 6946 figures of a wall from its stack and the engine's solution at the design condition. */
+export function wallResultOf(input: WallInput, stack: ThermalStack, steady: SteadyResult): WallResult {
   const included = stack.layers.filter((l) => l.included);
   const layers: WallLayerResult[] = stack.layers.map((l) => {
     const k = included.indexOf(l);

@@ -5,6 +5,8 @@
  *
  * Layers are ordered from the inside (warm side in winter) to the outside.
  */
+import type { AirCondition } from '../../physics/air-condition.js';
+import type { InsideHumiditySource } from '../../checks/mould-humidity-classes.js';
 import type { MaterialProperties } from '../../materials/material-properties.js';
 import type { AirLayerVentilation, HeatFlowDirection } from '../../physics/index.js';
 import type { MonthlyClimate } from '../../checks/monthly-climate.js';
@@ -33,24 +35,11 @@ export interface WallAirLayer {
 
 export type WallLayer = WallMaterialLayer | WallAirLayer;
 
-export interface AirCondition {
-  /** °C */
-  readonly temperature: number;
-  /** fraction 0..1 */
-  readonly relativeHumidity: number;
-}
+export type { AirCondition } from '../../physics/air-condition.js';
+export type { InsideHumiditySource } from '../../checks/mould-humidity-classes.js';
 
 /** 'standard': the ISO 6946 table for the heat-flow direction; or given values (m²·K/W, > 0). */
 export type SurfaceResistanceChoice = 'standard' | { readonly inside: number; readonly outside: number };
-
-/**
- * Where the inside humidity of the moisture checks comes from: the inside condition as given
- * (measured or specified), or an internal humidity class (ISO 13788 annex, data/physics/humidity-classes.json),
- * optionally with the 1.1 safety factor on the vapour pressure excess.
- */
-export type InsideHumiditySource =
-  | { readonly kind: 'measured' }
-  | { readonly kind: 'class'; readonly humidityClass: number; readonly safetyFactor?: boolean };
 
 export interface WallMoistureInput {
   /** Default { kind: 'measured' }. */
