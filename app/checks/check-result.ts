@@ -10,6 +10,10 @@ export interface CheckMargin {
   /** Positive = on the safe side. */
   readonly value: number;
   readonly unit: string;
+  /** What the margin is measured to, in words: "the dew point of the air", "the touch limit". */
+  readonly reference?: string;
+  /** The side of the reference that is safe: a positive value lies this side of it ("above the dew point"). */
+  readonly safeSide?: 'above' | 'below';
 }
 
 export interface CheckResult {

@@ -3,6 +3,7 @@
  * compared with a touch limit; the margin is limit − θ_surface in K, positive on the safe side.
  * Only the hot side is checked here; very cold surfaces are also a contact hazard.
  */
+import { numberAsGiven, numberText } from '../base/number-text.js';
 import type { CheckResult } from './check-result.js';
 
 /**
@@ -33,13 +34,18 @@ export interface PersonnelProtectionResult extends CheckResult {
 export function personnelProtectionCheck(input: PersonnelProtectionInput): PersonnelProtectionResult {
   const limit = input.touchLimit ?? DEFAULT_TOUCH_LIMIT;
   const margin = limit - input.surfaceTemperature;
-  const figures = `the surface is at ${input.surfaceTemperature.toFixed(2)} °C against a touch limit of ${limit} °C`;
+  const surface = `${numberText(input.surfaceTemperature, { decimals: 1 })} °C`;
+  const distance = `${numberText(Math.abs(margin), { decimals: 1 })} K`;
+  const limitText = `${numberAsGiven(limit)} °C`;
   return {
     check: 'personnel-protection',
     title: 'Personnel protection',
     verdict: margin >= 0 ? 'pass' : 'fail',
-    margin: { value: margin, unit: 'K' },
-    reason: margin >= 0 ? `Within the touch limit: ${figures}.` : `Too hot to touch safely: ${figures}.`,
+    margin: { value: margin, unit: 'K', reference: 'the touch limit', safeSide: 'below' },
+    reason:
+      margin >= 0
+        ? `The outer surface, at ${surface}, is ${distance} below the touch limit of ${limitText}.`
+        : `Too hot to touch safely: the outer surface, at ${surface}, is ${distance} above the touch limit of ${limitText}.`,
     caution: PERSONNEL_PROTECTION_CAUTION,
     touchLimit: limit,
   };

@@ -4,6 +4,7 @@
  * app/physics dewPoint with the ISO 13788 saturation formulas). The margin is θ_surface − θ_dew
  * in K, positive on the safe side.
  */
+import { numberText } from '../base/number-text.js';
 import { dewPoint } from '../physics/humidity.js';
 import type { CheckResult } from './check-result.js';
 
@@ -37,21 +38,22 @@ export interface SurfaceCondensationResult extends CheckResult {
 export function surfaceCondensationCheck(input: SurfaceCondensationInput): SurfaceCondensationResult {
   const dew = dewPoint(input.airTemperature, input.relativeHumidity);
   const margin = input.surfaceTemperature - dew;
-  const figures =
-    `the surface is at ${input.surfaceTemperature.toFixed(2)} °C and the dew point of the air ` +
-    `(${input.airTemperature} °C, ${(input.relativeHumidity * 100).toFixed(1)} % RH) is ${dew.toFixed(2)} °C`;
+  const celsius = (t: number) => `${numberText(t, { decimals: 1 })} °C`;
+  const surface = `the surface, at ${celsius(input.surfaceTemperature)},`;
+  const dewText = `the dew point of the air, ${celsius(dew)} (air ${celsius(input.airTemperature)} at ${numberText(input.relativeHumidity * 100, { decimals: 0 })} % relative humidity)`;
+  const distance = `${numberText(Math.abs(margin), { decimals: 1 })} K`;
   const verdict = margin <= 0 ? 'fail' : margin < CONDENSATION_WARNING_MARGIN ? 'warning' : 'pass';
   const reason =
     verdict === 'fail'
-      ? `Water condenses: ${figures}, so the surface is at or below the dew point.`
+      ? `Water condenses: ${surface} is ${margin === 0 ? 'at' : `${distance} below`} ${dewText}.`
       : verdict === 'warning'
-        ? `No condensation at the design conditions, but the margin is under ${CONDENSATION_WARNING_MARGIN} K: ${figures}.`
-        : `No condensation: ${figures}.`;
+        ? `No condensation at the design conditions, but ${surface} is only ${distance} above ${dewText}; humidity and temperatures vary in service, so keep at least ${CONDENSATION_WARNING_MARGIN} K.`
+        : `No condensation: ${surface} is ${distance} above ${dewText}.`;
   return {
     check: 'surface-condensation',
     title: 'Surface condensation',
     verdict,
-    margin: { value: margin, unit: 'K' },
+    margin: { value: margin, unit: 'K', reference: 'the dew point of the air', safeSide: 'above' },
     reason,
     caution: SURFACE_CONDENSATION_CAUTION,
     dewPoint: dew,

@@ -18,7 +18,9 @@ describe('surface condensation check', () => {
     // Outside reference: psychrolib (ASHRAE Hyland–Wexler); the two saturation formulas differ by
     // about 0.1 % in pressure near 20 °C, i.e. a few hundredths of a kelvin in dew point.
     expect(Math.abs(result.dewPoint - psychrolib.GetTDewPointFromRelHum(20, 0.5))).toBeLessThan(0.05);
-    expect(result.margin).toEqual({ value: 15 - expected, unit: 'K' });
+    expect(result.margin).toEqual({ value: 15 - expected, unit: 'K', reference: 'the dew point of the air', safeSide: 'above' });
+    // θ_d = 9.26 °C for 20 °C / 50 % by the formulas above: 15 − 9.26 = 5.7 K.
+    expect(result.reason).toBe('No condensation: the surface, at 15.0 °C, is 5.7 K above the dew point of the air, 9.3 °C (air 20.0 °C at 50 % relative humidity).');
   });
 
   it('the margin changes sign exactly where the surface temperature crosses the dew point', () => {
@@ -56,7 +58,18 @@ describe('surface condensation check', () => {
   it('carries the caution that defers to local codes and licensed professional practice', () => {
     const result = surfaceCondensationCheck({ airTemperature: 20, relativeHumidity: 0.5, surfaceTemperature: 19 });
     expect(result.caution).toMatch(/local codes and licensed professional practice/);
-    expect(result.reason).toMatch(/dew point/);
+    expect(result.reason).not.toMatch(/memory|confidence|ISO/);
+  });
+
+  it('says in plain words how far the surface is from the dew point, on either side', () => {
+    const dew = dewPoint(20, 0.5);
+    const wet = surfaceCondensationCheck({ airTemperature: 20, relativeHumidity: 0.5, surfaceTemperature: dew - 2 });
+    expect(wet.reason).toBe('Water condenses: the surface, at 7.3 °C, is 2.0 K below the dew point of the air, 9.3 °C (air 20.0 °C at 50 % relative humidity).');
+    const close = surfaceCondensationCheck({ airTemperature: 20, relativeHumidity: 0.5, surfaceTemperature: dew + 0.5 });
+    expect(close.reason).toBe(
+      'No condensation at the design conditions, but the surface, at 9.8 °C, is only 0.5 K above the dew point of the air, 9.3 °C ' +
+        '(air 20.0 °C at 50 % relative humidity); humidity and temperatures vary in service, so keep at least 1 K.',
+    );
   });
 
   it('a chilled pipe in humid air: thin insulation sweats, thicker insulation keeps the surface above the dew point', () => {

@@ -1,0 +1,97 @@
+/**
+ * The report of an insulated flat surface (tank or duct wall, vessel roof): heat lost (or gained)
+ * per m² and over the area, the surface temperature and checks, the build-up and temperatures,
+ * from the flat-surface input and its solved result. Pure: the same input and result give the
+ * same report.
+ */
+import { numberAsGiven } from '../../base/number-text.js';
+import { asSentence } from '../../report/as-sentence.js';
+import { formatQuantity } from '../../report/format-quantity.js';
+import type { CaseReport, ReportFigure } from '../../report/report-model.js';
+import { distinctCautions } from '../../report/report-verdicts.js';
+import {
+  buildUpSection,
+  conditionsSection,
+  insulatedAssumptions,
+  insulatedSources,
+  insulatedVerdicts,
+  surfaceSection,
+  temperaturesSection,
+} from '../insulated/insulated-report.js';
+import type { FlatSurfaceResult } from './flat-surface-calculation.js';
+import type { FlatSurfaceInput } from './flat-surface-input.js';
+
+export interface FlatReportExtras {
+  /** The case's title; default the input's. */
+  readonly title?: string;
+  /** Every assumption of the case (defaults the parser chose, then the calculation's); default the result's. */
+  readonly assumptions?: readonly string[];
+}
+
+export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, extras: FlatReportExtras = {}): CaseReport {
+  const lost = result.heatFlowDensity >= 0;
+  const word = lost ? 'loss' : 'gain';
+  const verdicts = insulatedVerdicts(result);
+  const keyFigures: ReportFigure[] = [
+    { label: `Heat ${word} per m² of surface`, value: Math.abs(result.heatFlowDensity), quantity: 'heatFlux' },
+    { label: `Heat ${word} over the ${numberAsGiven(input.area)} m²`, value: Math.abs(result.heatLoss), quantity: 'heatFlow' },
+    { label: 'Outer surface temperature', value: result.surfaceTemperature, quantity: 'temperature' },
+    {
+      label: `Energy ${lost ? 'lost' : 'gained'} per year`,
+      value: Math.abs(result.annualEnergy),
+      quantity: 'energyPerYear',
+      note: `over ${formatQuantity(input.operatingHours, 'hours')} of operation`,
+    },
+    { label: 'Thermal resistance of the layers', value: result.layerResistance, quantity: 'thermalResistance', note: 'without the surface films' },
+  ];
+  const s = input.surface;
+  const orientation: ReportFigure[] =
+    s.kind === 'vertical'
+      ? [{ label: 'Height of the vertical surface', value: s.height, quantity: 'length' }]
+      : [{ label: `Characteristic length of the surface facing ${s.facing}`, value: s.characteristicLength, quantity: 'length', note: 'area divided by perimeter' }];
+  return {
+    kind: 'flat',
+    title: extras.title ?? input.title ?? 'Insulated flat surface',
+    subject: subjectOf(input),
+    keyFigures,
+    verdicts,
+    sections: [
+      conditionsSection(input, [{ label: 'Area of the surface', value: input.area, quantity: 'area' }, ...orientation]),
+      buildUpSection(result),
+      temperaturesSection(result, { positionLabel: 'distance from the inner surface', shownPosition: (x) => x }),
+      surfaceSection(result),
+    ],
+    energyBalance: { ...result.energyBalance, quantity: 'heatFlux' },
+    assumptions: insulatedAssumptions(extras.assumptions ?? result.assumptions),
+    warnings: result.warnings.map(asSentence),
+    sources: insulatedSources(
+      input,
+      [...(input.wall ? [input.wall.material] : []), ...input.layers.map((l) => l.material), ...(input.jacket ? [input.jacket.material] : [])],
+      convectionOf(input),
+    ),
+    cautions: distinctCautions(verdicts),
+  };
+}
+
+/** "Vertical surface 6 m high, 150 m²; wall 8.0 mm Carbon steel; insulation 100.0 mm Rock wool; …". */
+function subjectOf(input: FlatSurfaceInput): string {
+  const s = input.surface;
+  const shape = s.kind === 'vertical' ? `Vertical surface ${numberAsGiven(s.height)} m high` : `Horizontal surface facing ${s.facing}`;
+  const wall = input.wall ? `; wall ${formatQuantity(input.wall.thickness, 'thickness')} ${input.wall.material.name}` : '';
+  const insulation = input.layers.map((l) => `${formatQuantity(l.thickness, 'thickness')} ${l.material.name}`).join(' + ');
+  const jacket = input.jacket ? `; jacket ${formatQuantity(input.jacket.thickness, 'thickness')} ${input.jacket.material.name}` : '; no jacket';
+  const exposure = input.ambient.exposure.kind === 'outdoor' ? `outdoors in ${formatQuantity(input.ambient.exposure.windSpeed, 'windSpeed')} wind` : 'indoors in still air';
+  return `${shape}, ${numberAsGiven(input.area)} m²${wall}; insulation ${insulation}${jacket}; ${exposure}.`;
+}
+
+/** The correlations the outer film uses for this surface, for the sources. */
+function convectionOf(input: FlatSurfaceInput): string {
+  const natural =
+    input.surface.kind === 'vertical'
+      ? 'Churchill–Chu correlation for a vertical plate in still air'
+      : `natural convection from a horizontal plate facing ${input.surface.facing} (Incropera & DeWitt, on the characteristic length area/perimeter)`;
+  const wind = input.ambient.exposure.kind === 'outdoor' && input.ambient.exposure.windSpeed > 0;
+  return wind
+    ? `${natural}, combined with flat-plate parallel flow (laminar up to Re = 5·10⁵, mixed laminar–turbulent up to 10⁸) as mixed convection (exponent 3)`
+    : natural;
+}
