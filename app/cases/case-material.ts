@@ -4,7 +4,7 @@
  * a pipe, a flat surface and a wall. Inline conductivity is a number (W/(m·K)) or a conductivity
  * model; μ is a number or "vapour-tight" (JSON has no Infinity); missing optional fields are null.
  */
-import { MATERIAL_LIMITS } from '../api/material-limits.js';
+import { MATERIAL_LIMITS } from '../materials/material-limits.js';
 import { optionalNumberIn } from '../base/field-checks.js';
 import { InputError } from '../base/input-error.js';
 import type { NumberRange } from '../base/number-range.js';

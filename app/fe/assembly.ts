@@ -70,18 +70,19 @@ export function layerResidualsAtEnds(
   rate?: ArrayLike<number>,
 ): LayerEndResiduals[] {
   const m = mesh.order + 1;
+  const workspace = newElementWorkspace(mesh.order);
   return layers.map((_, l) => {
     const [first, last] = mesh.layerNodes[l]!;
     const [firstElement, lastElement] = mesh.layerElements[l]!;
     const entry = { innerEnd: 0, outerEnd: 0, innerScale: 0, outerScale: 0 };
     // Only the layer's two end elements touch its end nodes.
     for (const e of firstElement === lastElement ? [firstElement] : [firstElement, lastElement]) {
-      const local = elementMatrices(mesh, layers, measure, e, conductivityExcess, reference);
+      const local = elementMatrices(mesh, layers, measure, e, conductivityExcess, reference, workspace, rate !== undefined);
       const start = mesh.elementFirstNode[e]!;
       for (let a = 0; a < m; a++) {
         const node = start + a;
         if (node !== first && node !== last) continue;
-        // Conduction rows sum to zero, so use temperature differences (see conduction-residual.ts).
+        // Conduction rows sum to zero, so use temperature differences (see tangent-assembly.ts).
         let r = -local.load[a]!;
         const ta = excess[node]!;
         for (let b = 0; b < m; b++) {

@@ -10,12 +10,15 @@ export class BandedMatrix {
   readonly data: Float64Array;
   readonly width: number;
 
+  /** `storage`, when given, must hold size·(2·halfBandwidth + 1) values; the matrix then lives in it. */
   constructor(
     readonly size: number,
     readonly halfBandwidth: number,
+    storage?: Float64Array,
   ) {
     this.width = 2 * halfBandwidth + 1;
-    this.data = new Float64Array(size * this.width);
+    if (storage && storage.length !== size * this.width) throw new RangeError(`band storage must hold ${size * this.width} values; got ${storage.length}`);
+    this.data = storage ?? new Float64Array(size * this.width);
   }
 
   private index(i: number, j: number): number {
@@ -70,31 +73,55 @@ export class ZeroPivotError extends Error {
  * A pivot smaller than `relativePivotTolerance` times the largest diagonal entry counts as zero.
  */
 export function solveBanded(matrix: BandedMatrix, rhs: ArrayLike<number>, relativePivotTolerance = 1e-13): Float64Array {
-  const n = matrix.size;
+  const factors = matrix.clone();
+  const x = Float64Array.from(rhs as ArrayLike<number>);
+  factorBanded(factors, 0, matrix.size - 1, relativePivotTolerance);
+  substituteBanded(factors, x, 0, matrix.size - 1);
+  return x;
+}
+
+/**
+ * Factors the principal block of rows and columns first … last in place (A = LU, the multipliers
+ * of L stored below the diagonal, U on and above it), without pivoting. Entries outside the block
+ * are neither read nor changed, so a system whose fixed unknowns sit at either end is solved on
+ * its own storage with those rows and columns simply left out. The factors serve any number of
+ * right-hand sides (see substituteBanded).
+ */
+export function factorBanded(matrix: BandedMatrix, first: number, last: number, relativePivotTolerance = 1e-13): void {
   const p = matrix.halfBandwidth;
   const w = matrix.width;
-  const a = Float64Array.from(matrix.data);
-  const x = Float64Array.from(rhs as ArrayLike<number>);
+  const a = matrix.data;
   let scale = 0;
-  for (let i = 0; i < n; i++) scale = Math.max(scale, Math.abs(a[i * w + p]!));
+  for (let i = first; i <= last; i++) scale = Math.max(scale, Math.abs(a[i * w + p]!));
   const tiny = scale * relativePivotTolerance;
-
-  for (let k = 0; k < n; k++) {
+  for (let k = first; k <= last; k++) {
     const pivot = a[k * w + p]!;
     if (!(Math.abs(pivot) > tiny)) throw new ZeroPivotError(k);
-    const last = Math.min(n - 1, k + p);
-    for (let i = k + 1; i <= last; i++) {
+    const end = Math.min(last, k + p);
+    for (let i = k + 1; i <= end; i++) {
       const factor = a[i * w + k - i + p]! / pivot;
+      a[i * w + k - i + p] = factor;
       if (factor === 0) continue;
-      for (let j = k; j <= last; j++) a[i * w + j - i + p] -= factor * a[k * w + j - k + p]!;
-      x[i] -= factor * x[k]!;
+      for (let j = k + 1; j <= end; j++) a[i * w + j - i + p] -= factor * a[k * w + j - k + p]!;
     }
   }
-  for (let k = n - 1; k >= 0; k--) {
+}
+
+/** Overwrites x[first … last] with the solution of LU·x = x for the factors factorBanded left in the matrix. */
+export function substituteBanded(factors: BandedMatrix, x: Float64Array, first: number, last: number): void {
+  const p = factors.halfBandwidth;
+  const w = factors.width;
+  const a = factors.data;
+  for (let k = first; k <= last; k++) {
+    const xk = x[k]!;
+    if (xk === 0) continue;
+    const end = Math.min(last, k + p);
+    for (let i = k + 1; i <= end; i++) x[i] -= a[i * w + k - i + p]! * xk;
+  }
+  for (let k = last; k >= first; k--) {
     let sum = x[k]!;
-    const last = Math.min(n - 1, k + p);
-    for (let j = k + 1; j <= last; j++) sum -= a[k * w + j - k + p]! * x[j]!;
+    const end = Math.min(last, k + p);
+    for (let j = k + 1; j <= end; j++) sum -= a[k * w + j - k + p]! * x[j]!;
     x[k] = sum / a[k * w + p]!;
   }
-  return x;
 }

@@ -23,8 +23,16 @@ export function conductivityAt(model: ConductivityModel, celsius: number): numbe
       for (let i = model.coefficients.length - 1; i >= 0; i--) k = k * celsius + model.coefficients[i]!;
       return k;
     }
-    case 'table':
-      return interpolateTable(model.points, celsius).value;
+    case 'table': {
+      const points = model.points;
+      const s = tableSegment(points, celsius);
+      if (s < 0) return points[0]![1];
+      if (s === points.length - 1) return points[s]![1];
+      // Indexing, not destructuring: this runs at every Gauss point of every iteration.
+      const x0 = points[s]![0];
+      const y0 = points[s]![1];
+      return y0 + ((points[s + 1]![1] - y0) / (points[s + 1]![0] - x0)) * (celsius - x0);
+    }
   }
 }
 
@@ -38,8 +46,12 @@ export function conductivitySlopeAt(model: ConductivityModel, celsius: number): 
       for (let i = model.coefficients.length - 1; i >= 1; i--) d = d * celsius + i * model.coefficients[i]!;
       return d;
     }
-    case 'table':
-      return interpolateTable(model.points, celsius).slope;
+    case 'table': {
+      const points = model.points;
+      const s = tableSegment(points, celsius);
+      if (s < 0 || s === points.length - 1) return 0;
+      return (points[s + 1]![1] - points[s]![1]) / (points[s + 1]![0] - points[s]![0]);
+    }
   }
 }
 
@@ -50,10 +62,15 @@ export function isConstantConductivity(model: ConductivityModel): boolean {
   return model.points.every((p) => p[1] === model.points[0]![1]);
 }
 
-function interpolateTable(points: readonly (readonly [number, number])[], x: number): { value: number; slope: number } {
+/**
+ * The table segment [points[s], points[s + 1]] that holds x: −1 at or below the first point and
+ * points.length − 1 at or above the last, where the table is held constant. An index rather than
+ * an object, because λ is looked up at every Gauss point of every iteration.
+ */
+function tableSegment(points: readonly (readonly [number, number])[], x: number): number {
   const n = points.length;
-  if (x <= points[0]![0]) return { value: points[0]![1], slope: 0 };
-  if (x >= points[n - 1]![0]) return { value: points[n - 1]![1], slope: 0 };
+  if (x <= points[0]![0]) return -1;
+  if (x >= points[n - 1]![0]) return n - 1;
   let lo = 0;
   let hi = n - 1;
   while (hi - lo > 1) {
@@ -61,8 +78,5 @@ function interpolateTable(points: readonly (readonly [number, number])[], x: num
     if (points[mid]![0] <= x) lo = mid;
     else hi = mid;
   }
-  const [x0, y0] = points[lo]!;
-  const [x1, y1] = points[hi]!;
-  const slope = (y1 - y0) / (x1 - x0);
-  return { value: y0 + slope * (x - x0), slope };
+  return lo;
 }

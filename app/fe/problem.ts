@@ -61,9 +61,13 @@ export type ElementOrder = 1 | 2;
 export interface SolverOptions {
   /** Element order: 1 linear, 2 quadratic. Default 2. */
   readonly order?: ElementOrder;
-  /** Convergence tolerance on the largest nodal temperature change between iterations, K. Default 1e-10. */
+  /**
+   * Convergence tolerance on the largest nodal temperature change between iterations, K. Default
+   * 1e-10. A steady solve also stops when the change is down to the round-off level of the
+   * temperatures, should that be larger (see newton-iteration.ts).
+   */
   readonly temperatureTolerance?: number;
-  /** Largest number of nonlinear iterations. Default 200. */
+  /** Largest number of nonlinear iterations (Newton iterations in a steady solve). Default 200. */
   readonly maxIterations?: number;
 }
 

@@ -1,7 +1,8 @@
 /**
- * Stages 1 and 2 of the solve: set the essential (fixed-temperature) nodes aside, move their known
- * temperatures to the right-hand side, and solve the reduced band system for the remaining nodes.
- * Stage 3 (reactions) reads the rows that were set aside; see reactions.ts.
+ * Stages 1 and 2 of a time step: set the essential (fixed-temperature) nodes aside, move their
+ * known temperatures to the right-hand side, and solve the reduced band system for the remaining
+ * nodes. Stage 3 (the heat in at a fixed face) reads the rows that were set aside; see
+ * transient-solve.ts. The steady solve does the same on Newton corrections (newton-iteration.ts).
  */
 import { BandedMatrix, solveBanded, ZeroPivotError } from './banded-matrix.js';
 import { SingularProblemError } from './errors.js';

@@ -87,7 +87,7 @@ export interface SteadyResult {
   readonly interfaces: readonly InterfaceResult[];
   readonly layers: readonly LayerResult[];
   readonly balance: EnergyBalance;
-  /** Solves performed: 1 for a linear problem. */
+  /** Newton iterations (each a linearisation and a band solve): 1 for a linear problem. */
   readonly iterations: number;
   /** Largest nodal temperature change in the last iteration, K (0 for a linear problem). */
   readonly lastChange: number;

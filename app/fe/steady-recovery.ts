@@ -3,42 +3,38 @@
  * faces read from the rows set aside in stage 1, heat at natural faces, conservative heat flows at
  * every interface, per-layer figures and the energy balance.
  */
-import { assembleSystem, layerResidualsAtEnds } from './assembly.js';
-import type { BandedMatrix } from './banded-matrix.js';
+import { layerResidualsAtEnds, type LayerEndResiduals } from './assembly.js';
 import { conductivityAt } from './conductivity.js';
-import { conductionRowProduct } from './conduction-residual.js';
 import { summariseMesh, type Discretisation } from './discretisation.js';
-import { applyFaceConditions, naturalHeatIn, type Face } from './face-conditions.js';
+import { filmExchangeAt, naturalHeatIn, type Face } from './face-conditions.js';
 import { flowBasisFor } from './measure.js';
-import type { FilmExchange } from './problem.js';
 import type { EnergyBalance, FaceResult, InterfaceResult, LayerResult, SteadyResult } from './result.js';
 
-/** Heat entering through each face: the reaction (row residual K·T − F) at a fixed face, the natural condition otherwise. */
-export function faceResults(
-  d: Discretisation,
-  conductance: BandedMatrix,
-  rhs: Float64Array,
-  excess: ArrayLike<number>,
-  films: readonly (FilmExchange | undefined)[],
-): [FaceResult, FaceResult] {
-  const results = d.faces.map((face: Face, i): FaceResult => {
-    const t = d.reference + excess[face.node]!;
-    const base = { face: face.name, position: d.mesh.positions[face.node]!, temperature: t, condition: face.condition.kind };
-    if (face.condition.kind === 'temperature') {
-      const reaction = rowResidual(conductance, rhs, excess, face.node);
-      return { ...base, temperature: face.condition.temperature, heatIn: reaction, heatFluxDensityIn: reaction / face.measure, reaction };
-    }
-    const heatIn = naturalHeatIn(face, films[i], excess[face.node]!, d.reference);
-    const film = films[i];
-    return { ...base, heatIn, heatFluxDensityIn: heatIn / face.measure, ...(film ? { film } : {}) };
-  });
-  return [results[0]!, results[1]!];
+/**
+ * Heat entering through each face: at a fixed face the reaction, read from the row set aside in
+ * stage 1 (K·T − F there, which only the end layer's elements touch: its end residual); at a
+ * natural face the flux, or the film at the converged surface temperature.
+ */
+export function faceResults(d: Discretisation, ends: readonly LayerEndResiduals[], excess: ArrayLike<number>): [FaceResult, FaceResult] {
+  return [faceResult(d, d.faces[0], ends[0]!.innerEnd, excess), faceResult(d, d.faces[1], ends[ends.length - 1]!.outerEnd, excess)];
 }
 
-/** (K·T − F) at a fixed-temperature row, conduction part in difference form (no film acts there). */
-function rowResidual(matrix: BandedMatrix, rhs: Float64Array, x: ArrayLike<number>, row: number): number {
-  return conductionRowProduct(matrix, x, row) - rhs[row]!;
+/** One face's result; `row` is K·T − F in the face node's row. */
+function faceResult(d: Discretisation, face: Face, row: number, excess: ArrayLike<number>): FaceResult {
+  const position = d.mesh.positions[face.node]!;
+  const c = face.condition;
+  if (c.kind === 'temperature') {
+    return { face: face.name, position, temperature: c.temperature, condition: c.kind, heatIn: row, heatFluxDensityIn: row / face.measure, reaction: row };
+  }
+  const temperature = d.reference + excess[face.node]!;
+  const film = c.kind === 'film' ? filmExchangeAt(c, temperature) : undefined;
+  const heatIn = naturalHeatIn(face, film, excess[face.node]!, d.reference);
+  const result: Writable<FaceResult> = { face: face.name, position, temperature, condition: c.kind, heatIn, heatFluxDensityIn: heatIn / face.measure };
+  if (film) result.film = film;
+  return result;
 }
+
+type Writable<T> = { -readonly [K in keyof T]: T[K] };
 
 export function energyBalance(heatInInner: number, heatInOuter: number, generated: number): EnergyBalance {
   const residual = heatInInner + heatInOuter + generated;
@@ -49,13 +45,9 @@ export function energyBalance(heatInInner: number, heatInOuter: number, generate
 export function recoverSteadyResult(d: Discretisation, excess: Float64Array, iterations: number, lastChange: number): SteadyResult {
   assertFinite(excess);
   const { mesh, measure, layers } = d;
-  const system = assembleSystem(mesh, layers, measure, excess, d.reference);
-  const rhs = Float64Array.from(system.load);
-  const { films } = applyFaceConditions(system.conductance, rhs, d.faces, excess, d.reference);
-  const [inner, outer] = faceResults(d, system.conductance, rhs, excess, films);
-  const temperatures = absoluteTemperatures(d, excess);
-
   const ends = layerResidualsAtEnds(mesh, layers, measure, excess, excess, d.reference);
+  const [inner, outer] = faceResults(d, ends, excess);
+  const temperatures = absoluteTemperatures(d, excess);
   const generatedPerLayer = layers.map(() => 0);
   // Heat generated in each layer, q̇·∫dμ over the layer (the assembled load integrates it exactly).
   for (let l = 0; l < layers.length; l++) {
@@ -77,22 +69,23 @@ export function recoverSteadyResult(d: Discretisation, excess: Float64Array, ite
     const deltaT = innerT - outerT;
     const defined = generatedPerLayer[l] === 0 && Math.abs(deltaT) > 1e-12 * Math.max(1, Math.abs(mean));
     const shapeFactor = d.mesh.geometry.kind === 'planar' ? r2 - r1 : Math.log(r2 / r1) / (2 * Math.PI);
-    return {
-      index: l,
-      ...(layer.name !== undefined ? { name: layer.name } : {}),
-      innerPosition: r1,
-      outerPosition: r2,
-      innerTemperature: innerT,
-      outerTemperature: outerT,
-      meanTemperature: mean,
-      heatFlowInner,
-      heatFlowOuter,
-      generated: generatedPerLayer[l]!,
-      conductivityAtMeanTemperature: conductivityAt(layer.conductivity, mean),
-      ...(defined
-        ? { effectiveConductivity: (heatFlowOuter * shapeFactor) / deltaT, thermalResistance: deltaT / heatFlowOuter }
-        : {}),
-    };
+    // Field by field, in the order they print: spreading objects would cost more than the solve.
+    const result = { index: l } as Writable<LayerResult>;
+    if (layer.name !== undefined) result.name = layer.name;
+    result.innerPosition = r1;
+    result.outerPosition = r2;
+    result.innerTemperature = innerT;
+    result.outerTemperature = outerT;
+    result.meanTemperature = mean;
+    result.heatFlowInner = heatFlowInner;
+    result.heatFlowOuter = heatFlowOuter;
+    result.generated = generatedPerLayer[l]!;
+    result.conductivityAtMeanTemperature = conductivityAt(layer.conductivity, mean);
+    if (defined) {
+      result.effectiveConductivity = (heatFlowOuter * shapeFactor) / deltaT;
+      result.thermalResistance = deltaT / heatFlowOuter;
+    }
+    return result;
   });
 
   const interfaces: InterfaceResult[] = [];

@@ -10,7 +10,7 @@ import { describeRange } from '../base/number-range.js';
 import { QUANTITY_RANGES } from '../base/quantity-ranges.js';
 import { conductivityAt, type ConductivityModel } from '../fe/conductivity.js';
 import { validateConductivity } from '../fe/validate.js';
-import { MATERIAL_LIMITS } from '../api/material-limits.js';
+import { MATERIAL_LIMITS } from './material-limits.js';
 
 const TABLE_TEMPERATURE = MATERIAL_LIMITS.temperature;
 const MAX_TABLE_POINTS = MATERIAL_LIMITS.maxTablePoints;

@@ -1,13 +1,17 @@
 /**
  * A case file (or standard input, "-") read as the command line needs it: at most
- * MAX_CASE_FILE_BYTES, UTF-8 (a byte-order mark is accepted), JSON, and nested no deeper than any
- * Lamina file needs. Each refusal is one InputError sentence naming the file, so a 50 MB upload,
- * a UTF-16 file or a 6,000-level nesting ends in exit 2 and one line, never a stack trace.
+ * MAX_CASE_FILE_BYTES, UTF-8 (a byte-order mark is accepted), one JSON object, and nested no
+ * deeper than any Lamina file needs. Each refusal is one InputError sentence naming the file, so a
+ * 50 MB upload, a UTF-16 file or a 6,000-level nesting ends in exit 2 and one line, never a stack
+ * trace. A syntax error is placed by line and column instead of JSON.parse's own words, which
+ * repeat whatever text surrounds the spot.
  */
 import fs from 'node:fs';
 import path from 'node:path';
+import { isObject } from '../../app/base/field-checks.js';
 import { requireBoundedNesting } from '../../app/base/json-depth.js';
-import { boundedMessage, InputError } from '../../app/base/input-error.js';
+import { findJsonSyntaxError } from '../../app/base/json-syntax-error.js';
+import { InputError } from '../../app/base/input-error.js';
 import { decodeUtf8, NotUtf8Error } from '../files/utf8-text.js';
 import { shownPath } from '../storage/shown-path.js';
 import { fileAccessSentence } from './file-access.js';
@@ -29,11 +33,26 @@ export function readCaseJson(file: string, cwd: string): unknown {
   let json: unknown;
   try {
     json = JSON.parse(text);
-  } catch (error) {
-    throw new InputError('file', boundedMessage(`${shown} is not valid JSON (${(error as Error).message.replace(/\s+/g, ' ')}).`));
+  } catch {
+    throw new InputError('file', syntaxSentence(shown, text));
   }
-  requireBoundedNesting(json, 'the case file');
+  requireBoundedNesting(json, shown);
+  if (!isObject(json)) {
+    const found = Array.isArray(json) ? 'a list' : json === null ? 'null' : `a ${typeof json}`;
+    throw new InputError('file', `${shown} must hold one JSON object (a case with a "kind"), not ${found}.`);
+  }
   return json;
+}
+
+function syntaxSentence(shown: string, text: string): string {
+  if (text.trim() === '') return `${shown} is empty; a case file holds one JSON object.`;
+  const error = findJsonSyntaxError(text);
+  if (error === null) return `${shown} is not valid JSON.`;
+  const where = `line ${error.line}, column ${error.column}`;
+  if (error.atEnd) return `${shown} is not valid JSON: it ends at ${where} before the JSON is complete.`;
+  const character = text.codePointAt(error.offset)!;
+  const shownCharacter = character > 0x20 && character < 0x7f ? `'${String.fromCodePoint(character)}'` : `U+${character.toString(16).toUpperCase().padStart(4, '0')}`;
+  return `${shown} is not valid JSON: unexpected ${shownCharacter} at ${where}.`;
 }
 
 function readBoundedFile(resolved: string, given: string): Uint8Array {

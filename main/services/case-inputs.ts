@@ -1,10 +1,12 @@
 import { CASE_KINDS, type CaseInputs, type CaseKind } from '../../app/api/project-types.js';
+import { parseCase, type CaseContext } from '../../app/index.js';
 import { InvalidInputError } from './service-errors.js';
-import { isPlainObject, requireId, requireNumber } from './validate.js';
+import { isPlainObject, requireId } from './validate.js';
 
 /**
- * The stored inputs of a case: versioned JSON, checked here only as an envelope (the calculation
- * inputs themselves are the engine's business and are kept as given):
+ * The stored inputs of a case: versioned JSON, a case file as `lamina solve` reads it, with
+ * materials inline or by library id. Checked here as an envelope, then completely by the engine's
+ * parseCase before it is stored (`checkCaseSolvable`):
  *   { "schemaVersion": 1, "kind": "pipe" | "flat" | "wall", ..., "layers": [{ "materialId": 3, "thickness": 0.05 }, ...] }
  * Any property named `materialId` or ending in `MaterialId` (e.g. a pipe's wall or a cladding)
  * anywhere in the inputs is a reference to a material and must name one that exists.
@@ -13,14 +15,16 @@ export const CASE_INPUTS_SCHEMA_VERSION = 1;
 export { CASE_KINDS, type CaseInputs, type CaseKind };
 
 const MAX_INPUTS_BYTES = 1_000_000;
-const MAX_LAYERS = 50;
 const MAX_DEPTH = 32;
 
 export function isMaterialReferenceKey(key: string): boolean {
   return key === 'materialId' || key.endsWith('MaterialId');
 }
 
-/** Checks the envelope and that the value is plain JSON (finite numbers, no functions, bounded depth). */
+/**
+ * Checks the envelope and that the value is plain JSON (finite numbers, no functions, bounded
+ * depth). What the case means is checked by the engine: see `checkCaseSolvable`.
+ */
 export function validateCaseInputs(value: unknown, field = 'inputs'): CaseInputs {
   if (!isPlainObject(value)) throw new InvalidInputError(field, `${field} must be an object.`);
   assertPlainJson(value, field, 0);
@@ -29,19 +33,6 @@ export function validateCaseInputs(value: unknown, field = 'inputs'): CaseInputs
   }
   if (typeof value['kind'] !== 'string' || !(CASE_KINDS as readonly string[]).includes(value['kind'])) {
     throw new InvalidInputError(`${field}.kind`, `${field}.kind must be one of ${CASE_KINDS.join(', ')}.`);
-  }
-  const layers = value['layers'];
-  if (!Array.isArray(layers) || layers.length < 1 || layers.length > MAX_LAYERS) {
-    throw new InvalidInputError(`${field}.layers`, `${field}.layers must list 1 to ${MAX_LAYERS} layers.`);
-  }
-  layers.forEach((layer, i) => {
-    const where = `${field}.layers[${i}]`;
-    if (!isPlainObject(layer)) throw new InvalidInputError(where, `${where} must be an object.`);
-    requireId(layer['materialId'], `${where}.materialId`);
-    requireNumber(layer['thickness'], `${where}.thickness`, { min: 0, minExclusive: true, max: 10, unit: 'm' });
-  });
-  for (const [key, range] of [['length', 'm'], ['area', 'm²']] as const) {
-    if (value[key] !== undefined) requireNumber(value[key], `${field}.${key}`, { min: 0, minExclusive: true, max: 1e6, unit: range });
   }
   for (const { path, id } of materialReferences(value)) requireId(id, `${field}${path}`);
   if (JSON.stringify(value).length > MAX_INPUTS_BYTES) throw new InvalidInputError(field, `${field} must be at most ${MAX_INPUTS_BYTES} characters of JSON.`);
@@ -92,4 +83,12 @@ export function remapMaterialIds(value: unknown, map: (id: number) => number): u
     return out;
   }
   return value;
+}
+
+/**
+ * Refuses, now rather than at the next solve, a case the engine could not solve: every field,
+ * every material reference and everything the solve needs (such as an outer surface emissivity).
+ */
+export function checkCaseSolvable(inputs: CaseInputs, context: CaseContext): void {
+  parseCase(inputs, context);
 }

@@ -1,12 +1,18 @@
 /**
  * npm run bench: solver timings on this machine, reported against baselines measured in the same
  * run (never asserted in a test). Prints:
+ *  0. every example case through solveCase, as a ratio of the 3-layer conduction example;
  *  1. median solve time of a 3-layer wall and of a 2-layer pipe with temperature-dependent
  *     conductivity and a surface-temperature-dependent film (convection + radiation);
  *  2. time per unknown from 1e3 to 1e6 nodes (linear growth shows as a flat column);
  *  3. the band solver against ml-matrix's dense LU on the same tridiagonal systems (n = 250, 500, 1000).
  */
+import { readdirSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { LuDecomposition, Matrix } from 'ml-matrix';
+import { solveCase } from '../../app/index.js';
+import { caseContext } from '../../main/cases/case-context.js';
 import { BandedMatrix, solveBanded, solveSteady, type SteadyProblem } from '../../app/fe/index.js';
 import { outerSurfaceExchange } from '../../app/physics/index.js';
 
@@ -59,6 +65,29 @@ const pipe: SteadyProblem = {
 };
 
 console.log(`Lamina solver benchmark — Node ${process.version}, ${new Date().toISOString()}\n`);
+
+// 0. Every example through solveCase (parse, solve, checks, report), against the 3-layer constant
+// conduction example measured in the same run. Targets: pipe and flat at most 4×, walls at most 8×.
+{
+  const examplesDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..', 'data', 'examples');
+  const context = caseContext(null);
+  const load = (file: string) => JSON.parse(readFileSync(path.join(examplesDir, file), 'utf8')) as unknown;
+  const baseline = load('conduction-cold-store-wall.json');
+  const baseMs = time(() => solveCase(baseline, context), 600, 400);
+  console.log('0. Cases through solveCase, against the 3-layer constant conduction example (conduction-cold-store-wall)');
+  console.log(`   baseline ${fmt(baseMs)}`);
+  console.log('   example                                    median      ratio  target   iterations / solves');
+  for (const file of readdirSync(examplesDir).filter((f) => f.endsWith('.json')).sort()) {
+    const json = load(file);
+    const solved = solveCase(json, context);
+    const ms = time(() => solveCase(json, context), 600, 400);
+    const target = solved.kind === 'wall' ? 8 : solved.kind === 'conduction' ? null : 4;
+    const r = solved.result as { iterations?: number; solves?: number; wall?: unknown };
+    const work = solved.kind === 'wall' ? `${r.solves} engine solve(s)` : r.iterations !== undefined ? `${r.iterations} iteration(s)` : '';
+    console.log(`   ${file.padEnd(42)} ${fmt(ms).padStart(9)}   ${(ms / baseMs).toFixed(1).padStart(6)}×  ${target === null ? '    –' : `≤ ${target}×`.padStart(5)}   ${work}`);
+  }
+  console.log('');
+}
 
 const wallMs = time(() => solveSteady(wall));
 const pipeResult = solveSteady(pipe);

@@ -3,6 +3,7 @@
  * analysis (app/cases/wall/wall-analysis.ts): the checks are functions of the states the wall case
  * solves, so the tests exercise exactly the path a case takes.
  */
+import { InputError } from '../../app/base/input-error.js';
 import { analyseWall } from '../../app/cases/wall/wall-analysis.js';
 import type { MonthlyClimate, WallInput } from '../../app/cases/wall/wall.js';
 
@@ -24,6 +25,6 @@ export const checkInterstitialAtDesignCondition = (input: WallInput) => analyseW
 /** The monthly procedure; refuses an input without a climate the way the case would (no result). */
 export function checkInterstitialMonthly(input: WallInput, climate?: MonthlyClimate) {
   const monthly = analyseWall(withClimate(input, climate)).interstitialMonthly;
-  if (!monthly) throw new Error('the wall has no monthly climate');
+  if (!monthly) throw new InputError('moisture.climate', 'moisture.climate is needed for the monthly procedure: give 12 months of inside and outside conditions or the name of a shipped climate.');
   return monthly;
 }

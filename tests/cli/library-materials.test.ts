@@ -44,7 +44,7 @@ describe('lamina solve with materials from the library', () => {
     expect(r.stderr).toBe('');
     expect(r.code).toBe(0);
     const out = JSON.parse(r.stdout);
-    expect(out.pipeSize.outerDiameter).toBeCloseTo(0.0889, 10); // DN80 = 88.9 mm (ISO 4200, from memory)
+    expect(out.input.pipeSize.outerDiameter).toBeCloseTo(0.0889, 10); // DN80 = 88.9 mm (ISO 4200, from memory)
     expect(out.result.energyBalance.relativeResidual).toBeLessThan(1e-9);
     expect(out.result.heatLossPerMetre).toBeGreaterThan(0);
     expect(out.result.layers.map((l: { material: string }) => l.material)).toContain('Rock wool pipe section, typical curve');

@@ -4,7 +4,11 @@
  * B36.10M Schedule 40 and EN 1057 (from memory, as the tables themselves say).
  */
 import { describe, expect, it } from 'vitest';
-import { findPipeSize, pipeSizeCatalogue, resolvePipeSizeInCase } from '../../main/pipe-sizes/pipe-size-catalogue.js';
+import { pipeSizeCatalogue } from '../../main/pipe-sizes/pipe-size-catalogue.js';
+import * as sizes from '../../app/cases/pipe/pipe-sizes.js';
+
+const findPipeSize = (series: unknown, nominal: unknown, field: string) => sizes.findPipeSize(pipeSizeCatalogue(), series, nominal, field);
+const resolvePipeSizeInCase = (json: unknown) => sizes.resolvePipeSizeInCase(json, pipeSizeCatalogue());
 import { InputError } from '../../app/fe/errors.js';
 
 describe('pipe size tables', () => {

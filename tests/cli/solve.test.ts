@@ -86,8 +86,8 @@ describe('lamina solve', () => {
     const text = readFileSync(path.join(examplesDir, 'conduction-creamery-steam-main.json'), 'utf8');
     const r = lamina(['solve', '-', '--format', 'text'], text);
     expect(r.code).toBe(0);
-    expect(r.stdout).toMatch(/Energy balance: .* residual/);
-    expect(r.stdout).toMatch(/Inner face\s+180\.00 °C/);
+    expect(r.stdout).toMatch(/Energy balance/);
+    expect(r.stdout).toMatch(/Temperature of the inside surface of Steel pipe wall\s+180\.0 °C/);
   });
 
   it('invalid input: exit 2 and one line naming the field and the range', () => {

@@ -95,6 +95,12 @@ function checkFile(root, layer, file, relativeFile) {
         report(index, `app/ may not import packages or Node modules, but this file imports "${specifier}".`);
       } else if (target !== 'app' && !(target === 'data' && specifier.endsWith('.json'))) {
         report(index, `app/ may import only app/ and data/*.json, but this file imports "${specifier}".`);
+      } else if (target === 'app') {
+        const from = appLayerOf(root, file);
+        const to = appLayerOf(root, path.resolve(path.dirname(file), specifier));
+        if (!mayImport(from, to)) {
+          report(index, `app/${from}/ may import only ${allowedBelow(from)}, but this file imports "${specifier}" (app/${to}/).`);
+        }
       }
     } else if (layer === 'renderer') {
       if (isNode || NODE_SIDE_PACKAGES.has(specifier.split('/')[0])) {
@@ -113,6 +119,31 @@ function checkFile(root, layer, file, relativeFile) {
     }
   }
   return violations;
+}
+
+/**
+ * The layers inside app/, lowest first: a folder may import itself and the folders before it,
+ * never one after it (so the engine cannot grow an import cycle between its parts). Files at the
+ * top of app/ (the public index) may import every layer.
+ */
+export const APP_LAYERS = ['base', 'fe', 'physics', 'materials', 'checks', 'report', 'cases', 'api'];
+
+function appLayerOf(root, file) {
+  const parts = path.relative(path.join(root, 'app'), file).split(path.sep);
+  return parts.length > 1 ? parts[0] : '';
+}
+
+function mayImport(from, to) {
+  if (from === '' || from === to) return true;
+  const i = APP_LAYERS.indexOf(from);
+  const j = APP_LAYERS.indexOf(to);
+  return i >= 0 && j >= 0 && j < i;
+}
+
+function allowedBelow(from) {
+  const i = APP_LAYERS.indexOf(from);
+  if (i < 0) return `a folder listed in APP_LAYERS (app/${from}/ is not)`;
+  return [from, ...APP_LAYERS.slice(0, i)].map((l) => `app/${l}/`).join(', ');
 }
 
 /** The first folder of `target` below the project root ('app', 'data', ...), or '..' when outside it. */

@@ -39,7 +39,7 @@ describe('the checker on a planted project', () => {
       'app/fe/clean.ts',
       [
         "import { other } from './other.js';",
-        "import type { Thing } from '../api/thing.js';",
+        "import type { Thing } from '../base/thing.js';",
         "import seed from '../../data/materials.json';",
         '// A comment may mention window, document or fetch, and "node:fs".',
         "const label = 'the window of the document';",
@@ -118,5 +118,28 @@ describe('the checker on a planted project', () => {
 
   it('catches code in data/', () => {
     expect(messagesFor('data/bad-code.js')).toEqual(['data/ holds data files only; move this code to app/ or main/.']);
+  });
+});
+
+describe('the layers inside app/ on a planted project', () => {
+  it('lets a layer import the layers below it, and refuses an import upwards (checks ← cases)', () => {
+    const root = mkdtempSync(path.join(tmpdir(), 'lamina-app-layers-'));
+    try {
+      const plant = (relative: string, text: string) => {
+        mkdirSync(path.dirname(path.join(root, relative)), { recursive: true });
+        writeFileSync(path.join(root, relative), text);
+      };
+      plant('app/cases/uses-checks.ts', "import { a } from '../checks/verdict.js';\nimport { b } from '../base/field.js';\n");
+      plant('app/checks/uses-cases.ts', "import { solveWall } from '../cases/wall/wall-calculation.js';\n");
+      plant('app/fe/uses-physics.ts', "import type { X } from '../physics/film.js';\n");
+      plant('app/index.ts', "export { solveCase } from './cases/solve-case.js';\n");
+      const { violations } = checkLayers(root);
+      expect(violations.map((v) => `${v.file}: ${v.message}`)).toEqual([
+        'app/checks/uses-cases.ts: app/checks/ may import only app/checks/, app/base/, app/fe/, app/physics/, app/materials/, but this file imports "../cases/wall/wall-calculation.js" (app/cases/).',
+        'app/fe/uses-physics.ts: app/fe/ may import only app/fe/, app/base/, but this file imports "../physics/film.js" (app/physics/).',
+      ]);
+    } finally {
+      rmSync(root, { recursive: true, force: true });
+    }
   });
 });

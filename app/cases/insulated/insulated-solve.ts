@@ -3,7 +3,8 @@
  * build the layer stack (wall, insulation, jacket), put the inner condition on the inner face and
  * the temperature-dependent outer film (app/physics outerSurfaceExchange) on the outer face, let the
  * engine iterate the film and any λ(T) to convergence, then read back temperatures, the film split
- * into convection and radiation at the converged surface temperature, and the checks.
+ * into convection and radiation at the converged surface temperature; then, as a separate step on
+ * the solved result, the surface checks.
  */
 import type { FaceCondition, Geometry } from '../../fe/problem.js';
 import type { SteadyResult } from '../../fe/result.js';
@@ -107,6 +108,12 @@ function innerFace(inner: InnerCondition): FaceCondition {
 }
 
 export function solveStack(problem: StackProblem): StackSolution {
+  const solution = solveStackOnly(problem);
+  return { ...solution, ...surfaceChecks(problem, solution) };
+}
+
+/** The engine solve of the stack and what is read back from it, before any check. */
+function solveStackOnly(problem: StackProblem): Omit<StackSolution, 'dewPoint' | 'checks'> {
   const { stack, exchange, ambient } = problem;
   const engine = solveSteady({
     geometry: problem.geometry,
@@ -141,28 +148,6 @@ export function solveStack(problem: StackProblem): StackSolution {
     }),
   );
 
-  const surfaceCondensation = surfaceCondensationCheck({
-    surfaceTemperature,
-    airTemperature: ambient.airTemperature,
-    relativeHumidity: ambient.relativeHumidity,
-  });
-  const checks: SolveChecks = {
-    surfaceCondensation,
-    personnelProtection: personnelProtectionCheck({
-      surfaceTemperature,
-      ...(problem.touchLimit !== undefined ? { touchLimit: problem.touchLimit } : {}),
-    }),
-    serviceTemperature: serviceTemperatureCheck(
-      layers.map((l, i) => ({
-        name: l.name,
-        innerTemperature: l.innerTemperature,
-        outerTemperature: l.outerTemperature,
-        minServiceTemperature: stack[i]!.material.minServiceTemperature ?? null,
-        maxServiceTemperature: stack[i]!.material.maxServiceTemperature ?? null,
-      })),
-    ),
-  };
-
   return {
     engine,
     heatOut: -engine.faces.outer.heatIn,
@@ -191,9 +176,39 @@ export function solveStack(problem: StackProblem): StackSolution {
     ],
     energyBalance: { residual: engine.balance.residual, relativeResidual: engine.balance.relativeResidual },
     iterations: engine.iterations,
-    dewPoint: surfaceCondensation.dewPoint,
-    checks,
   };
+}
+
+/**
+ * The surface checks, as functions of the solved stack: condensation on the outer surface in its
+ * ambient air, personnel protection at the touch limit, and each layer against its service range.
+ */
+export function surfaceChecks(problem: StackProblem, solution: Omit<StackSolution, 'dewPoint' | 'checks'>): { dewPoint: number; checks: SolveChecks } {
+  const { stack, ambient } = problem;
+  const { surfaceTemperature, layers } = solution;
+  const surfaceCondensation = surfaceCondensationCheck({
+    surfaceTemperature,
+    airTemperature: ambient.airTemperature,
+    relativeHumidity: ambient.relativeHumidity,
+  });
+  const checks: SolveChecks = {
+    surfaceCondensation,
+    personnelProtection: personnelProtectionCheck({
+      surfaceTemperature,
+      ...(problem.touchLimit !== undefined ? { touchLimit: problem.touchLimit } : {}),
+    }),
+    serviceTemperature: serviceTemperatureCheck(
+      layers.map((l, i) => ({
+        name: l.name,
+        innerTemperature: l.innerTemperature,
+        outerTemperature: l.outerTemperature,
+        minServiceTemperature: stack[i]!.material.minServiceTemperature ?? null,
+        maxServiceTemperature: stack[i]!.material.maxServiceTemperature ?? null,
+      })),
+    ),
+  };
+
+  return { dewPoint: surfaceCondensation.dewPoint, checks };
 }
 
 /** The outer film of a pipe or flat surface in its ambient conditions (convection + radiation). */

@@ -1,13 +1,14 @@
 /**
  * Recomputes every case of a stored project from its inputs (nothing computed is ever stored):
- * each case's inputs are a case file whose materials are library ids, solved by the same case
- * kinds as `lamina solve`. A case that no longer solves is reported by name, and the others still run.
+ * each case's inputs are a case file (materials inline or by library id), solved by solveCase as
+ * `lamina solve` solves it. A case that no longer solves is reported by name, and the others still run.
  */
 import type { Project } from '../../../app/api/project-types.js';
-import { InputError, SingularProblemError } from '../../../app/fe/errors.js';
+import { renderReportText, solveCase } from '../../../app/index.js';
+import { caseContext } from '../../cases/case-context.js';
 import type { MaterialsService } from '../../services/materials-service.js';
-import { caseKindOf, libraryMaterialResolver } from '../case-kinds.js';
 import type { CliIO } from '../command.js';
+import { isInputProblem } from '../exit-code.js';
 
 interface CaseOutcome {
   readonly id: number;
@@ -19,16 +20,14 @@ interface CaseOutcome {
 }
 
 export function solveProject(io: CliIO, project: Project, materials: MaterialsService, format: 'json' | 'text'): number {
-  const resolve = libraryMaterialResolver(materials);
+  const context = caseContext(materials);
   const outcomes: CaseOutcome[] = project.cases.map((c) => {
-    const kind = caseKindOf(c.inputs);
-    if (typeof kind === 'string') return { id: c.id, name: c.name, kind: String(c.inputs.kind), error: kind };
     try {
-      const solved = kind.solve(c.inputs, resolve);
-      return { id: c.id, name: c.name, kind: kind.kind, result: solved.json, text: solved.text() };
+      const solved = solveCase(c.inputs, context);
+      return { id: c.id, name: c.name, kind: solved.kind, result: solved, text: renderReportText(solved.report) };
     } catch (error) {
-      const known = error instanceof InputError || error instanceof SingularProblemError;
-      return { id: c.id, name: c.name, kind: kind.kind, error: known ? (error as Error).message : `the solve failed: ${(error as Error).message}` };
+      const message = isInputProblem(error) ? error.message : `the solve failed: ${(error as Error).message}`;
+      return { id: c.id, name: c.name, kind: String(c.inputs.kind), error: message };
     }
   });
 

@@ -17,7 +17,7 @@ function caseTitle(inputs: unknown): string | undefined {
  * lamina projects export ID FILE.json|-
  * lamina projects import FILE.json
  * lamina projects create NAME [--client TEXT] [--site TEXT] [--reference TEXT] [--engineer TEXT]
- * lamina projects add-case ID CASE.json [--name NAME]   (a case file whose materials are library ids)
+ * lamina projects add-case ID CASE.json [--name NAME]   (a case file; materials inline or by library id)
  * lamina projects solve ID [--format json|text]          (recomputes every case from its stored inputs)
  * Every form accepts --db PATH (else LAMINA_DB, else the per-system default).
  */
@@ -101,10 +101,6 @@ export const projectsCommand: CliCommand = async (args, io) => {
       } catch (error) {
         if (!(error instanceof InputError)) throw error;
         io.stderr(`projects add-case: ${error.message}\n`);
-        return 2;
-      }
-      if (JSON.stringify(inputs).includes('"material":')) {
-        io.stderr(`projects add-case: ${file} gives materials inline; a stored case refers to library materials by "materialId" (see lamina materials list).\n`);
         return 2;
       }
       const name = parsed.options.get('name') ?? caseTitle(inputs) ?? path.basename(file, '.json');

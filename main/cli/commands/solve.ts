@@ -4,10 +4,10 @@
  * Reads a case file (or "-" for standard input), validates it, solves it and prints the result.
  * Materials in a case file are inline, or referenced by id from the library (--db).
  */
-import { InputError, SingularProblemError } from '../../../app/fe/errors.js';
-import type { MaterialProperties } from '../../../app/materials/material-properties.js';
+import { CASE_KINDS, InputError, renderReportText, solveCase, type CaseContext, type SolvedCase } from '../../../app/index.js';
+import { caseContext, refersToLibrary } from '../../cases/case-context.js';
 import type { CliCommand, CliIO } from '../command.js';
-import { caseKindOf, CASE_KINDS, libraryMaterialResolver, type SolvedCase } from '../case-kinds.js';
+import { exitCodeOf } from '../exit-code.js';
 import { parseArgs, withServices } from './materials.js';
 import { readCaseJson } from '../read-case-file.js';
 
@@ -48,30 +48,20 @@ export const solveCommand: CliCommand = async (args, io) => {
     return 2;
   }
 
-  const kind = caseKindOf(json);
-  if (typeof kind === 'string') {
-    io.stderr(`lamina solve: ${kind}\n`);
-    return 2;
-  }
-  const needsLibrary = JSON.stringify(json).includes('"materialId"');
-  const solveWith = (resolveMaterial: (id: number) => MaterialProperties | undefined): number => {
+  const solveWith = (context: CaseContext): number => {
     let solved: SolvedCase;
     try {
-      solved = kind.solve(json, resolveMaterial);
+      solved = solveCase(json, context);
     } catch (error) {
-      // A singular problem (no fixed face, films of zero) is an input the user must change, like a bad field.
-      if (error instanceof InputError || error instanceof SingularProblemError) {
-        io.stderr(`lamina solve: ${error.message}\n`);
-        return 2;
-      }
+      // A bad field or a problem without a unique solution exits 2; a failure while solving exits 1.
       io.stderr(`lamina solve: ${(error as Error).message}\n`);
-      return 1;
+      return exitCodeOf(error);
     }
-    io.stdout(format === 'json' ? `${JSON.stringify(solved.json, null, 2)}\n` : solved.text());
+    io.stdout(format === 'json' ? `${JSON.stringify(solved, null, 2)}\n` : renderReportText(solved.report));
     return 0;
   };
-  if (!needsLibrary) return solveWith(() => undefined);
-  return withServices(io, parsed.options.get('db'), (services) => solveWith(libraryMaterialResolver(services.materials)));
+  if (!refersToLibrary(json)) return solveWith(caseContext(null));
+  return withServices(io, parsed.options.get('db'), (services) => solveWith(caseContext(services.materials)));
 };
 
 function usage(io: CliIO, message: string): number {

@@ -1,8 +1,9 @@
 /**
  * State of the wall form: the text in each field, and the reading and solve derived from it.
- * The engine runs in the page (it is plain TypeScript); nothing is sent anywhere.
+ * The engine runs in the page (it is plain TypeScript), through solveCase; nothing is sent anywhere.
  */
-import { solveSteady } from '../../../app/fe/index.js';
+import { solveCase } from '../../../app/index.js';
+import type { SteadyResult } from '../../../app/fe/index.js';
 import { MAX_LAYERS, readWall, summarise, type FieldError, type LayerDraft, type WallSummary } from './wall-input.js';
 
 export type WallOutcome =
@@ -46,7 +47,10 @@ function solveWall(form: WallForm): WallOutcome {
   const reading = readWall(form);
   if (!reading.ok) return { kind: 'invalid', errors: reading.errors };
   try {
-    return { kind: 'solved', summary: summarise(solveSteady(reading.problem)), resistance: reading.resistance };
+    // The preview is a conduction case, solved by the same pipeline as every other case.
+    const { geometry, layers, inner, outer } = reading.problem;
+    const solved = solveCase({ schemaVersion: 1, kind: 'conduction', title: 'Wall preview', geometry, layers, inner, outer }, { resolveMaterial: () => undefined });
+    return { kind: 'solved', summary: summarise(solved.result as SteadyResult), resistance: reading.resistance };
   } catch (error) {
     return { kind: 'failed', message: error instanceof Error ? error.message : String(error) };
   }

@@ -1,0 +1,44 @@
+/**
+ * What a case kind is: the unit of the case pipeline. Each kind (one folder under app/cases) says
+ * how its file is parsed and validated completely, how it is solved (each state once), which
+ * checks read the solved result, and how the result reads as a report. `solveCase` runs the four
+ * in that order; nothing outside app/ decides what a case means.
+ */
+import type { CheckResult } from '../checks/check-result.js';
+import type { CaseReport } from '../report/report-model.js';
+import type { MaterialResolver } from './case-material.js';
+import type { PipeSize } from './pipe/pipe-sizes.js';
+
+/** What a case needs from outside the engine: library materials, and the pipe-size tables. */
+export interface CaseContext {
+  readonly resolveMaterial: MaterialResolver;
+  /** The pipe and tube size tables (data/pipe-sizes), for pipe cases that name a size. */
+  readonly pipeSizes?: readonly PipeSize[];
+}
+
+/** A case file after parsing: its validated input, its title, and the defaults the parser chose. */
+export interface ParsedCase<Input> {
+  readonly title: string;
+  readonly input: Input;
+  readonly assumptions: readonly string[];
+}
+
+export interface SolvedParts<Result> {
+  readonly result: Result;
+  readonly checks: readonly CheckResult[];
+  readonly warnings: readonly string[];
+  readonly assumptions: readonly string[];
+}
+
+export interface CaseKind<Input = unknown, Result = unknown> {
+  /** The file's "kind". */
+  readonly kind: string;
+  /** One line for --help and menus. */
+  readonly summary: string;
+  // Method syntax: the registry holds kinds of different Input and Result in one list.
+  /** Validates everything the solve will need; throws InputError naming the field. */
+  parse(json: unknown, context: CaseContext): ParsedCase<Input>;
+  /** Solves, then runs the checks on the solved result. */
+  solve(parsed: ParsedCase<Input>): SolvedParts<Result>;
+  report(parsed: ParsedCase<Input>, solved: SolvedParts<Result>): CaseReport;
+}

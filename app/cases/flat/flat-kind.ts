@@ -1,0 +1,30 @@
+/**
+ * The flat kind: an insulated flat surface (duct side, tank wall or roof, equipment casing), per m²
+ * and for the area, with the same surface checks as a pipe.
+ */
+import type { CaseKind } from '../case-kind.js';
+import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
+import { withOperationDefaults } from '../insulated/operation-defaults.js';
+import { calculateFlatSurface, type FlatSurfaceResult } from './flat-surface-calculation.js';
+import { parseFlatCaseFile } from './flat-case-file.js';
+import type { FlatSurfaceInput } from './flat-surface-input.js';
+import { flatReport } from './flat-report.js';
+
+export const flatKind: CaseKind<FlatSurfaceInput, FlatSurfaceResult> = {
+  kind: 'flat',
+  summary: 'an insulated flat surface (duct, tank or equipment wall)',
+  parse(json, context) {
+    const { json: complete, assumptions } = withOperationDefaults(json, { length: false });
+    const input = parseFlatCaseFile(complete, context.resolveMaterial);
+    if (methodNeedsEmissivity(input.surfaceMethod ?? { kind: 'correlations' })) outerSurfaceEmissivity(input.layers, input.jacket);
+    return { title: input.title ?? 'Flat surface', input, assumptions };
+  },
+  solve({ input, assumptions }) {
+    const result = calculateFlatSurface(input);
+    const checks = [result.checks.surfaceCondensation, result.checks.personnelProtection, result.checks.serviceTemperature];
+    return { result, checks, warnings: result.warnings, assumptions: [...assumptions, ...result.assumptions] };
+  },
+  report(parsed, solved) {
+    return flatReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions });
+  },
+};

@@ -1,0 +1,23 @@
+/**
+ * Defaults of the run a quick per-metre (or per-m²) check need not state: a run of 1 m and
+ * continuous operation (8760 h a year). Each default applied is reported as an assumption.
+ */
+import { isObject, type JsonObject } from '../case-fields.js';
+
+export const DEFAULT_RUN_LENGTH = 1;
+export const DEFAULT_OPERATING_HOURS = 8760;
+
+export function withOperationDefaults(json: unknown, defaults: { readonly length: boolean }): { json: unknown; assumptions: string[] } {
+  if (!isObject(json)) return { json, assumptions: [] };
+  const file: JsonObject = { ...json };
+  const assumptions: string[] = [];
+  if (defaults.length && file['length'] === undefined) {
+    file['length'] = DEFAULT_RUN_LENGTH;
+    assumptions.push(`run length not given: figures for the run are for ${DEFAULT_RUN_LENGTH} m`);
+  }
+  if (file['operatingHours'] === undefined) {
+    file['operatingHours'] = DEFAULT_OPERATING_HOURS;
+    assumptions.push(`operating hours not given: ${DEFAULT_OPERATING_HOURS} h a year (continuous operation) for the annual energy`);
+  }
+  return { json: file, assumptions };
+}

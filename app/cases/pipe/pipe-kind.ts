@@ -1,0 +1,37 @@
+/**
+ * The pipe kind: an insulated pipe run. Heat loss per metre and for the run, surface temperature,
+ * and the surface checks (condensation, personnel protection, service temperature) on the solved
+ * result.
+ */
+import type { CaseKind } from '../case-kind.js';
+import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
+import { withOperationDefaults } from '../insulated/operation-defaults.js';
+import { calculatePipe, type PipeResult } from './pipe-calculation.js';
+import { parsePipeCaseFile } from './pipe-case-file.js';
+import { DEFAULT_SURFACE_METHOD, type PipeInput } from './pipe-input.js';
+import { pipeReport } from './pipe-report.js';
+import { resolvePipeSizeInCase, type PipeSize } from './pipe-sizes.js';
+
+/** The validated pipe input, with the size it was named by (null when the diameter was given). */
+export type PipeCase = PipeInput & { readonly pipeSize: PipeSize | null };
+
+export const pipeKind: CaseKind<PipeCase, PipeResult> = {
+  kind: 'pipe',
+  summary: 'an insulated pipe run: heat loss, surface temperature, condensation and touch checks',
+  parse(json, context) {
+    const sized = resolvePipeSizeInCase(json, context.pipeSizes);
+    const { json: complete, assumptions } = withOperationDefaults(sized.json, { length: true });
+    const input = parsePipeCaseFile(complete, context.resolveMaterial);
+    // Radiation needs the outer surface's emissivity: refuse a case without it now, not at the solve.
+    if (methodNeedsEmissivity(input.surfaceMethod ?? DEFAULT_SURFACE_METHOD)) outerSurfaceEmissivity(input.layers, input.jacket);
+    return { title: input.title ?? 'Pipe', input: { ...input, pipeSize: sized.size }, assumptions };
+  },
+  solve({ input, assumptions }) {
+    const result = calculatePipe(input);
+    const checks = [result.checks.surfaceCondensation, result.checks.personnelProtection, result.checks.serviceTemperature];
+    return { result, checks, warnings: result.warnings, assumptions: [...assumptions, ...result.assumptions] };
+  },
+  report(parsed, solved) {
+    return pipeReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions });
+  },
+};
