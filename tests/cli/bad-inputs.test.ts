@@ -8,7 +8,7 @@
  * The counts are printed at the end.
  */
 import { spawnSync } from 'node:child_process';
-import { readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { caseFileWriter, runLamina, temporaryFolder, type CliRun } from '../cases/in-process-cli.js';
