@@ -1,5 +1,4 @@
-import { caseContext } from '../cases/case-context.js';
-import { checkCaseSolvable, materialIdsOf, remapMaterialIds, validateCaseInputs, type CaseInputs } from './case-inputs.js';
+import { materialIdsOf, remapMaterialIds, validateCaseInputs, type CaseInputs } from './case-inputs.js';
 import { inWriteTransaction, nowIso, type DatabaseContext } from './database-context.js';
 import { materialInputOf, sameMaterialData } from './material-rows.js';
 import type { MaterialsService } from './materials-service.js';
@@ -156,7 +155,6 @@ export class ProjectsService {
       if (name !== undefined) this.db.prepare('UPDATE cases SET name = ?, updated_at = ? WHERE id = ?').run(name, now, checkedId);
       if (inputs !== undefined) {
         this.assertMaterialsExist(inputs);
-        checkCaseSolvable(inputs, caseContext(this.materials));
         this.db.prepare('UPDATE cases SET inputs = ?, updated_at = ? WHERE id = ?').run(JSON.stringify(inputs), now, checkedId);
         this.db.prepare('DELETE FROM case_materials WHERE case_id = ?').run(checkedId);
         this.linkMaterials(checkedId, inputs);
@@ -255,7 +253,6 @@ export class ProjectsService {
 
   private insertCase(projectId: number, name: string, inputs: CaseInputs): number {
     this.assertMaterialsExist(inputs);
-    checkCaseSolvable(inputs, caseContext(this.materials));
     const position = (this.db.prepare('SELECT COALESCE(MAX(position), -1) + 1 AS next FROM cases WHERE project_id = ?').get(projectId) as { next: number }).next;
     const now = nowIso();
     const result = this.db
