@@ -16,11 +16,14 @@ export interface CliRun {
   readonly stderr: string;
 }
 
-/** Runs `lamina ARGS` with LAMINA_DB pointing at `db` (a file in a temporary folder by default). */
+let sharedLibrary: string | undefined;
+
+/** Runs `lamina ARGS` with LAMINA_DB pointing at `db` (by default one library in a temporary folder per test file). */
 export async function runLamina(args: readonly string[], options: { cwd?: string; db?: string } = {}): Promise<CliRun> {
   let stdout = '';
   let stderr = '';
-  const db = options.db ?? path.join(temporaryFolder('lamina-db-'), 'library.sqlite');
+  sharedLibrary ??= path.join(temporaryFolder('lamina-db-'), 'library.sqlite');
+  const db = options.db ?? sharedLibrary;
   const code = await runCli(args, {
     stdout: (text) => {
       stdout += text;
@@ -38,9 +41,8 @@ export function temporaryFolder(prefix: string): string {
   return mkdtempSync(path.join(tmpdir(), prefix));
 }
 
-/** Writes case files into one temporary folder, each under a new name; returns the path. */
-export function caseFileWriter(prefix = 'lamina-cases-'): (content: string | Uint8Array | object) => string {
-  const dir = temporaryFolder(prefix);
+/** Writes case files into `dir` (a new temporary folder by default), each under a new name; returns the path. */
+export function caseFileWriter(dir = temporaryFolder('lamina-cases-')): (content: string | Uint8Array | object) => string {
   let count = 0;
   return (content) => {
     const file = path.join(dir, `case-${++count}.json`);

@@ -10,11 +10,11 @@
  *     0, and the command must exit 0 or 2. Rules between fields, which a schema cannot state, are
  *     the few exceptions listed in CROSS_FIELD_RULES below, each checked by its own condition.
  */
-import { readdirSync, readFileSync } from 'node:fs';
+import { readdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import Ajv2020Module from 'ajv/dist/2020.js';
-import { describe, expect, it } from 'vitest';
-import { caseFileWriter, runLamina } from './in-process-cli.js';
+import { afterAll, describe, expect, it } from 'vitest';
+import { caseFileWriter, runLamina, temporaryFolder } from './in-process-cli.js';
 
 const root = path.resolve(__dirname, '..', '..');
 const schemaDir = path.join(root, 'data', 'schemas');
@@ -371,7 +371,9 @@ const KNOWN_ENGINE_GAPS: readonly KnownGap[] = [
 
 const gapUses = new Map<string, number>(KNOWN_ENGINE_GAPS.map((g) => [g.gap, 0]));
 
-const writeCase = caseFileWriter('lamina-schema-ranges-');
+const caseFolder = temporaryFolder('lamina-schema-ranges-');
+const writeCase = caseFileWriter(caseFolder);
+afterAll(() => rmSync(caseFolder, { recursive: true, force: true }));
 
 describe('(b) ajv and lamina solve agree at every bound of every numeric leaf of the examples', () => {
   for (const file of examples) {
@@ -387,7 +389,7 @@ describe('(b) ajv and lamina solve agree at every bound of every numeric leaf of
         for (const probe of probesFor(leaf.bounds!)) {
           const json = withValue(example, leaf.path, probe.value);
           const schemaAccepts = validateCase(json) as boolean;
-          const run = await runLamina(['solve', writeCase(json)]);
+          const run = await runLamina(['solve', writeCase(json)], { db: path.join(caseFolder, 'library.sqlite') });
           const where = `${pathText(leaf.path)} = ${probe.value} (${probe.label})`;
           const outcome = `exit ${run.code}: ${run.stderr.trim()}`;
           if ((run.code === 0 || run.code === 2) && schemaAccepts === (run.code === 0)) continue;

@@ -382,7 +382,8 @@ const tally = { tried: 0, clear: 0, gaps: 0, stackTraces: 0, unexplainedNaN: 0, 
 beforeAll(async () => {
   folder = temporaryFolder('lamina-bad-inputs-');
   library = path.join(folder, 'library.sqlite');
-  writeCase = caseFileWriter('lamina-bad-case-');
+  // In the same folder, so that the 50 MB case goes with it in afterAll.
+  writeCase = caseFileWriter(folder);
   // The temporary library, made by the command itself; its built-in materials have ids below 999.
   const made = await runLamina(['projects', 'create', 'Brackwater Thermal Engineering, bad-input trial (demo)', '--db', library]);
   expect(made.stdout).toMatch(/^Created project 1 /);
@@ -428,7 +429,7 @@ describe('lamina solve refuses every bad input with one clear sentence (exit 2)'
 
   it('a UTF-8 byte-order mark is accepted', async () => {
     const file = writeCase(Buffer.concat([Buffer.from([0xef, 0xbb, 0xbf]), Buffer.from(JSON.stringify(planar))]));
-    const run = await runLamina(['solve', file]);
+    const run = await runLamina(['solve', file], { db: library });
     expect(run.stderr).toBe('');
     expect(run.code).toBe(0);
     expect(JSON.parse(run.stdout).title).toBe(planar.title);
