@@ -87,8 +87,11 @@ export function interstitialStateAt(
   return {
     insideVapourPressure: pi,
     outsideVapourPressure: pe,
+    // Field by field: an object spread here cost more than the rest of the check.
     layers: v.layers.map((l, j) => ({
-      ...l,
+      index: l.index,
+      name: l.name,
+      sd: l.sd,
       vapourTight: !Number.isFinite(l.sd),
       sdShown: Number.isFinite(l.sd) ? l.sd : null,
       flux: profile.layerFlux[j]!,

@@ -5,7 +5,7 @@
 import { isConstantConductivity } from './conductivity.js';
 import type { Face } from './face-conditions.js';
 import { measureFor, type Measure } from './measure.js';
-import { buildMesh, type Mesh, type MeshPurpose } from './mesh.js';
+import { buildMesh, usesExactLayers, type Mesh, type MeshPurpose } from './mesh.js';
 import type { FaceCondition, Layer, SteadyProblem } from './problem.js';
 import type { MeshSummary } from './result.js';
 
@@ -26,7 +26,8 @@ export interface Discretisation {
 }
 
 export function discretise(problem: SteadyProblem, purpose: MeshPurpose = 'steady'): Discretisation {
-  const mesh = buildMesh(problem.geometry, problem.layers, problem.options?.order ?? 2, purpose);
+  const order = problem.options?.order;
+  const mesh = buildMesh(problem.geometry, problem.layers, order ?? 2, purpose, usesExactLayers(problem.layers, order, purpose));
   const measure = measureFor(problem.geometry);
   const last = mesh.positions.length - 1;
   const faces = [

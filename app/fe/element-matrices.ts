@@ -11,6 +11,7 @@
  */
 import { conductivityAt, conductivitySlopeAt } from './conductivity.js';
 import { referenceElement } from './elements.js';
+import { exactLayerMatrices } from './exact-layer-element.js';
 import { InputError } from './errors.js';
 import type { Measure } from './measure.js';
 import type { Mesh } from './mesh.js';
@@ -39,6 +40,8 @@ export function elementMatrices(
   workspace?: ElementMatrices,
   withCapacity = true,
 ): ElementMatrices {
+  // A layer that is one exact steady element has its matrices in closed form.
+  if (mesh.exactLayers) return exactLayerMatrices(mesh, layers, elementIndex, excess, reference, workspace ?? newElementWorkspace(1));
   const layerIndex = mesh.elementLayer[elementIndex]!;
   const layer = layers[layerIndex]!;
   const firstNode = mesh.elementFirstNode[elementIndex]!;

@@ -17,3 +17,11 @@ export type FlowBasis = 'per-square-metre' | 'per-metre';
 export function flowBasisFor(geometry: Geometry): FlowBasis {
   return geometry.kind === 'planar' ? 'per-square-metre' : 'per-metre';
 }
+
+/**
+ * The conductance factor of a layer from x_1 to x_2, 1 / ∫ dx/μ(x): a heat flow through the layer
+ * is this factor times ∫λ dθ across it. 1/d for a plane layer, 2π/ln(r_2/r_1) per metre of pipe.
+ */
+export function layerConductanceFactor(geometry: Geometry, x1: number, x2: number): number {
+  return geometry.kind === 'planar' ? 1 / (x2 - x1) : (2 * Math.PI) / Math.log(x2 / x1);
+}

@@ -38,6 +38,11 @@ export interface Mesh {
   readonly layerNodes: readonly (readonly [number, number])[];
   /** Element count used in each layer. */
   readonly elementsPerLayer: readonly number[];
+  /**
+   * True when every layer is one exact steady element (exact-layer-element.ts): a steady problem
+   * with no heat generation whose mesh the caller left to the engine.
+   */
+  readonly exactLayers: boolean;
 }
 
 /** Axisymmetric default: at most this much ln(r_out/r_in) per element. */
@@ -74,12 +79,27 @@ export function defaultElementCount(
   return count;
 }
 
-export function buildMesh(geometry: Geometry, layers: readonly Layer[], order: ElementOrder, purpose: MeshPurpose = 'steady'): Mesh {
+/**
+ * A steady problem with no heat generation, whose mesh and element order the caller left to the
+ * engine, is meshed with one exact element per layer: its nodes are the faces and interfaces.
+ */
+export function usesExactLayers(layers: readonly Layer[], order: ElementOrder | undefined, purpose: MeshPurpose): boolean {
+  return purpose === 'steady' && order === undefined && layers.every((l) => l.elements === undefined && (l.heatGeneration ?? 0) === 0);
+}
+
+export function buildMesh(
+  geometry: Geometry,
+  layers: readonly Layer[],
+  order: ElementOrder,
+  purpose: MeshPurpose = 'steady',
+  exactLayers = false,
+): Mesh {
+  if (exactLayers) order = 1;
   // Element counts first, so every array is allocated once at its final size.
   const counts: number[] = [];
   let position = geometry.kind === 'planar' ? 0 : geometry.innerRadius;
   for (const layer of layers) {
-    counts.push(layer.elements ?? defaultElementCount(geometry, layer, position, order, purpose));
+    counts.push(exactLayers ? 1 : (layer.elements ?? defaultElementCount(geometry, layer, position, order, purpose)));
     position += layer.thickness;
   }
   const contactCount = layers.slice(0, -1).filter((l) => (l.contactResistanceToNext ?? 0) > 0).length;
@@ -121,7 +141,7 @@ export function buildMesh(geometry: Geometry, layers: readonly Layer[], order: E
     start = end;
   });
 
-  return { geometry, order, positions, elementFirstNode, elementLayer, layerElements, contacts, layerNodes, elementsPerLayer: counts };
+  return { geometry, order, positions, elementFirstNode, elementLayer, layerElements, contacts, layerNodes, elementsPerLayer: counts, exactLayers };
 }
 
 function layerVertices(geometry: Geometry, start: number, end: number, count: number): number[] {

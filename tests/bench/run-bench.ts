@@ -68,23 +68,42 @@ console.log(`Lamina solver benchmark — Node ${process.version}, ${new Date().t
 
 // 0. Every example through solveCase (parse, solve, checks, report), against the 3-layer constant
 // conduction example measured in the same run. Targets: pipe and flat at most 4×, walls at most 8×.
+// The machine may be busy with other work: batches of the baseline and the case alternate, and the
+// ratio reported is the median of the per-pair ratios, so a slow spell slows both sides alike.
 {
   const examplesDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..', 'data', 'examples');
   const context = caseContext(null);
   const load = (file: string) => JSON.parse(readFileSync(path.join(examplesDir, file), 'utf8')) as unknown;
   const baseline = load('conduction-cold-store-wall.json');
-  const baseMs = time(() => solveCase(baseline, context), 600, 400);
+  const batch = (json: unknown, runs: number) => {
+    const t0 = performance.now();
+    for (let i = 0; i < runs; i++) solveCase(json, context);
+    return (performance.now() - t0) / runs;
+  };
+  const pairedRatio = (json: unknown) => {
+    for (let i = 0; i < 50; i++) solveCase(json, context);
+    const ratios: number[] = [];
+    const times: number[] = [];
+    for (let pair = 0; pair < 25; pair++) {
+      const base = batch(baseline, 40);
+      const ms = batch(json, 40);
+      ratios.push(ms / base);
+      times.push(ms);
+    }
+    return { ratio: median(ratios), ms: median(times) };
+  };
+  for (let i = 0; i < 200; i++) solveCase(baseline, context);
   console.log('0. Cases through solveCase, against the 3-layer constant conduction example (conduction-cold-store-wall)');
-  console.log(`   baseline ${fmt(baseMs)}`);
+  console.log(`   baseline ${fmt(batch(baseline, 400))}`);
   console.log('   example                                    median      ratio  target   iterations / solves');
   for (const file of readdirSync(examplesDir).filter((f) => f.endsWith('.json')).sort()) {
     const json = load(file);
     const solved = solveCase(json, context);
-    const ms = time(() => solveCase(json, context), 600, 400);
+    const { ratio, ms } = pairedRatio(json);
     const target = solved.kind === 'wall' ? 8 : solved.kind === 'conduction' ? null : 4;
-    const r = solved.result as { iterations?: number; solves?: number; wall?: unknown };
+    const r = solved.result as { iterations?: number; solves?: number };
     const work = solved.kind === 'wall' ? `${r.solves} engine solve(s)` : r.iterations !== undefined ? `${r.iterations} iteration(s)` : '';
-    console.log(`   ${file.padEnd(42)} ${fmt(ms).padStart(9)}   ${(ms / baseMs).toFixed(1).padStart(6)}×  ${target === null ? '    –' : `≤ ${target}×`.padStart(5)}   ${work}`);
+    console.log(`   ${file.padEnd(42)} ${fmt(ms).padStart(9)}   ${ratio.toFixed(1).padStart(6)}×  ${target === null ? '    –' : `≤ ${target}×`.padStart(5)}   ${work}`);
   }
   console.log('');
 }
