@@ -16,6 +16,28 @@ export function isObject(value: unknown): value is JsonObject {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
 }
 
+/** A finite number; returns it. `unit` names the unit the number is read in. */
+export function requireFinite(field: string, value: unknown, unit = ''): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new InputError(field, `${field} must be a finite number${unit ? ` in ${unit}` : ''} (got ${shownValue(value)}).`);
+  }
+  return value;
+}
+
+/** A finite number > 0. */
+export function requirePositive(field: string, value: unknown, unit: string): number {
+  const v = requireFinite(field, value, unit);
+  if (!(v > 0)) throw new InputError(field, `${field} must be greater than 0 ${unit} (got ${v}).`);
+  return v;
+}
+
+/** A finite number ≥ 0. */
+export function requireNonNegative(field: string, value: unknown, unit: string): number {
+  const v = requireFinite(field, value, unit);
+  if (!(v >= 0)) throw new InputError(field, `${field} must be 0 ${unit} or more (got ${v}).`);
+  return v;
+}
+
 /** A finite number within `range`. */
 export function requireNumberIn(field: string, value: unknown, range: NumberRange): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {

@@ -18,7 +18,9 @@
  *
  * Safeguard for a start far from the solution (strong radiation, a thin layer on a hot pipe): when
  * a whole step would leave a larger imbalance than before, the step is halved until it does not
- * (a backtracking line search), down to MIN_STEP_FRACTION of the step.
+ * (a backtracking line search), down to MIN_STEP_FRACTION of the step. Before that, a step is
+ * shortened to move no node further than the span of the temperatures the faces name, when the
+ * solution is known to lie within that span (see stepLimit).
  */
 import { BandedMatrix, factorBanded, substituteBanded, ZeroPivotError } from './banded-matrix.js';
 import type { Discretisation } from './discretisation.js';
@@ -57,6 +59,7 @@ export function iterateToSteadyState(d: Discretisation, guess: Float64Array, tol
   const workspace = newBalanceWorkspace(d);
   const solver = new CorrectionSolver(workspace, n, first, last);
   const previous = new Float64Array(n);
+  const limit = stepLimit(d);
 
   assembleTangent(d, temperatures, workspace);
   let imbalance = largestMagnitude(workspace.imbalance, first, last);
@@ -77,9 +80,9 @@ export function iterateToSteadyState(d: Discretisation, guess: Float64Array, tol
       addTo(temperatures, correction, 1, first, last);
       throw notConverged(d, temperatures, workspace, iteration, change, tolerance, first, last);
     }
-    // Take the step, or the largest halving of it that does not make the imbalance worse.
+    // Take the step (within the limit), or the largest halving of it that does not make the imbalance worse.
     previous.set(temperatures);
-    let fraction = 1;
+    let fraction = change > limit ? limit / change : 1;
     for (;;) {
       temperatures.set(previous);
       addTo(temperatures, correction, fraction, first, last);
@@ -93,6 +96,23 @@ export function iterateToSteadyState(d: Discretisation, guess: Float64Array, tol
     }
   }
   throw new ConvergenceError(maxIterations, Number.NaN, 'The nonlinear solve diverged: temperatures stopped being finite numbers.');
+}
+
+/**
+ * The largest nodal change one step may make, K. With no heat entering inside the build-up or
+ * through a face (no generation, no flux face), every temperature of the solution lies between the
+ * coldest and hottest temperature the faces name (the maximum principle), so from an iterate within
+ * that span a larger change can only overshoot. A steep λ(θ) makes exactly such steps: where λ is
+ * 0.04 W/(m·K) beside a table point of 1000, the tangent sees the small value and proposes thousands
+ * of kelvin, and the halvings of the line search stop short of undoing that, so Newton cycles. With
+ * a heat source the solution may leave the span, and no limit applies.
+ */
+function stepLimit(d: Discretisation): number {
+  const conditions = d.faces.map((f) => f.condition);
+  if (d.layers.some((l) => (l.heatGeneration ?? 0) !== 0) || conditions.some((c) => c.kind === 'flux' && c.flux !== 0)) return Infinity;
+  const named = conditions.flatMap((c) => (c.kind === 'temperature' ? [c.temperature] : c.kind === 'film' ? [c.ambient] : []));
+  // Below 1 K the limit would only slow a solve whose faces name (nearly) one temperature.
+  return named.length === 0 ? Infinity : Math.max(1, Math.max(...named) - Math.min(...named));
 }
 
 /** Solves tangent·correction = imbalance on the free nodes: elimination, then refinement. */

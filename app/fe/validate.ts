@@ -1,53 +1,32 @@
 /**
  * Input validation for engine problems. Each failure raises an InputError whose message is one
  * sentence naming the field and the allowed range. The engine validates even though forms and
- * files validate too, because every edge (CLI, IPC, HTTP, import) ends up here.
+ * files validate too, because every edge (CLI, IPC, HTTP, import) ends up here. The number
+ * checks are the engine's one set, in app/base/field-checks.ts.
  */
 import { InputError } from './errors.js';
+import { ABSOLUTE_ZERO_CELSIUS, requireFinite, requireNonNegative, requirePositive, requireWholeNumber } from '../base/field-checks.js';
 import type { ConductivityModel } from './conductivity.js';
 import type { FaceCondition, Layer, SteadyProblem, TransientProblem } from './problem.js';
 
-export const ABSOLUTE_ZERO_CELSIUS = -273.15;
 const MAX_LAYERS = 100;
 const MAX_ELEMENTS_PER_LAYER = 2_000_000;
 const MAX_TIME_STEPS = 1_000_000;
+
+/** Absolute zero, defined once in app/base; re-exported for the FE core's callers. */
+export { ABSOLUTE_ZERO_CELSIUS };
 
 function show(value: unknown): string {
   return typeof value === 'number' ? String(value) : JSON.stringify(value) ?? String(value);
 }
 
-export function requireFinite(value: unknown, field: string, unit: string): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new InputError(field, `${field} must be a finite number in ${unit}; got ${show(value)}.`);
-  }
-  return value;
-}
-
-export function requirePositive(value: unknown, field: string, unit: string): number {
-  const v = requireFinite(value, field, unit);
-  if (v <= 0) throw new InputError(field, `${field} must be greater than 0 ${unit}; got ${v}.`);
-  return v;
-}
-
-export function requireNonNegative(value: unknown, field: string, unit: string): number {
-  const v = requireFinite(value, field, unit);
-  if (v < 0) throw new InputError(field, `${field} must be 0 ${unit} or more; got ${v}.`);
-  return v;
-}
-
-export function requireTemperature(value: unknown, field: string): number {
-  const v = requireFinite(value, field, '°C');
+/** A temperature in °C not below absolute zero (a fixed face temperature or a table point). */
+function requireTemperature(field: string, value: unknown): number {
+  const v = requireFinite(field, value, '°C');
   if (v < ABSOLUTE_ZERO_CELSIUS) {
-    throw new InputError(field, `${field} must not be below absolute zero (−273.15 °C); got ${v} °C.`);
+    throw new InputError(field, `${field} must not be below absolute zero (−273.15 °C) (got ${v} °C).`);
   }
   return v;
-}
-
-function requireInteger(value: unknown, field: string, min: number, max: number): number {
-  if (typeof value !== 'number' || !Number.isInteger(value) || value < min || value > max) {
-    throw new InputError(field, `${field} must be a whole number from ${min} to ${max}; got ${show(value)}.`);
-  }
-  return value;
 }
 
 export function validateConductivity(model: ConductivityModel | undefined, field: string): void {
@@ -56,15 +35,15 @@ export function validateConductivity(model: ConductivityModel | undefined, field
   }
   switch (model.kind) {
     case 'constant':
-      requirePositive(model.value, `${field}.value`, 'W/(m·K)');
+      requirePositive(`${field}.value`, model.value, 'W/(m·K)');
       return;
     case 'polynomial': {
       const c = model.coefficients;
       if (!Array.isArray(c) || c.length < 1 || c.length > 8) {
         throw new InputError(`${field}.coefficients`, `${field}.coefficients must list 1 to 8 numbers (a0 + a1·θ + …, θ in °C).`);
       }
-      c.forEach((a, i) => requireFinite(a, `${field}.coefficients[${i}]`, 'W/(m·K) per °C^' + i));
-      requirePositive(c[0], `${field}.coefficients[0]`, 'W/(m·K) (conductivity at 0 °C)');
+      c.forEach((a, i) => requireFinite(`${field}.coefficients[${i}]`, a, 'W/(m·K) per °C^' + i));
+      requirePositive(`${field}.coefficients[0]`, c[0], 'W/(m·K) (conductivity at 0 °C)');
       return;
     }
     case 'table': {
@@ -76,8 +55,8 @@ export function validateConductivity(model: ConductivityModel | undefined, field
         if (!Array.isArray(pt) || pt.length !== 2) {
           throw new InputError(`${field}.points[${i}]`, `${field}.points[${i}] must be a pair [temperature °C, conductivity W/(m·K)].`);
         }
-        requireTemperature(pt[0], `${field}.points[${i}][0]`);
-        requirePositive(pt[1], `${field}.points[${i}][1]`, 'W/(m·K)');
+        requireTemperature(`${field}.points[${i}][0]`, pt[0]);
+        requirePositive(`${field}.points[${i}][1]`, pt[1], 'W/(m·K)');
         if (i > 0 && pt[0] <= p[i - 1]![0]) {
           throw new InputError(`${field}.points[${i}][0]`, `${field}.points[${i}][0] must be above the previous point's temperature (${p[i - 1]![0]} °C).`);
         }
@@ -92,18 +71,18 @@ export function validateConductivity(model: ConductivityModel | undefined, field
 function validateLayer(layer: Layer, i: number, count: number, transient: boolean): void {
   const f = `layers[${i}]`;
   if (!layer || typeof layer !== 'object') throw new InputError(f, `${f} must be an object with thickness and conductivity.`);
-  requirePositive(layer.thickness, `${f}.thickness`, 'm');
+  requirePositive(`${f}.thickness`, layer.thickness, 'm');
   validateConductivity(layer.conductivity, `${f}.conductivity`);
-  if (transient || layer.density !== undefined) requirePositive(layer.density, `${f}.density`, 'kg/m³');
-  if (transient || layer.specificHeat !== undefined) requirePositive(layer.specificHeat, `${f}.specificHeat`, 'J/(kg·K)');
-  if (layer.heatGeneration !== undefined) requireFinite(layer.heatGeneration, `${f}.heatGeneration`, 'W/m³');
+  if (transient || layer.density !== undefined) requirePositive(`${f}.density`, layer.density, 'kg/m³');
+  if (transient || layer.specificHeat !== undefined) requirePositive(`${f}.specificHeat`, layer.specificHeat, 'J/(kg·K)');
+  if (layer.heatGeneration !== undefined) requireFinite(`${f}.heatGeneration`, layer.heatGeneration, 'W/m³');
   if (layer.contactResistanceToNext !== undefined) {
-    requireNonNegative(layer.contactResistanceToNext, `${f}.contactResistanceToNext`, 'm²·K/W');
+    requireNonNegative(`${f}.contactResistanceToNext`, layer.contactResistanceToNext, 'm²·K/W');
     if (i === count - 1 && layer.contactResistanceToNext > 0) {
       throw new InputError(`${f}.contactResistanceToNext`, `${f}.contactResistanceToNext must be 0 on the last layer, which has no next layer.`);
     }
   }
-  if (layer.elements !== undefined) requireInteger(layer.elements, `${f}.elements`, 1, MAX_ELEMENTS_PER_LAYER);
+  if (layer.elements !== undefined) requireWholeNumber(`${f}.elements`, layer.elements, 1, MAX_ELEMENTS_PER_LAYER);
 }
 
 export function validateFaceCondition(condition: FaceCondition | undefined, field: string): void {
@@ -112,14 +91,14 @@ export function validateFaceCondition(condition: FaceCondition | undefined, fiel
   }
   switch (condition.kind) {
     case 'temperature':
-      requireTemperature(condition.temperature, `${field}.temperature`);
+      requireTemperature(`${field}.temperature`, condition.temperature);
       return;
     case 'flux':
-      requireFinite(condition.flux, `${field}.flux`, 'W/m²');
+      requireFinite(`${field}.flux`, condition.flux, 'W/m²');
       return;
     case 'film':
-      if (typeof condition.coefficient !== 'function') requireNonNegative(condition.coefficient, `${field}.coefficient`, 'W/(m²·K)');
-      requireTemperature(condition.ambient, `${field}.ambient`);
+      if (typeof condition.coefficient !== 'function') requireNonNegative(`${field}.coefficient`, condition.coefficient, 'W/(m²·K)');
+      requireTemperature(`${field}.ambient`, condition.ambient);
       return;
     default:
       throw new InputError(`${field}.kind`, `${field}.kind must be "temperature", "flux" or "film"; got ${show((condition as { kind?: unknown }).kind)}.`);
@@ -132,7 +111,7 @@ export function validateSteadyProblem(problem: SteadyProblem, transient = false)
   if (!g || (g.kind !== 'planar' && g.kind !== 'axisymmetric')) {
     throw new InputError('geometry.kind', `geometry.kind must be "planar" or "axisymmetric"; got ${show((g as { kind?: unknown } | undefined)?.kind)}.`);
   }
-  if (g.kind === 'axisymmetric') requirePositive(g.innerRadius, 'geometry.innerRadius', 'm');
+  if (g.kind === 'axisymmetric') requirePositive('geometry.innerRadius', g.innerRadius, 'm');
   if (!Array.isArray(problem.layers) || problem.layers.length < 1 || problem.layers.length > MAX_LAYERS) {
     throw new InputError('layers', `layers must list 1 to ${MAX_LAYERS} layers; got ${Array.isArray(problem.layers) ? problem.layers.length : show(problem.layers)}.`);
   }
@@ -145,16 +124,16 @@ export function validateSteadyProblem(problem: SteadyProblem, transient = false)
   const o = problem.options;
   if (o !== undefined) {
     if (o.order !== undefined && o.order !== 1 && o.order !== 2) throw new InputError('options.order', `options.order must be 1 (linear) or 2 (quadratic); got ${show(o.order)}.`);
-    if (o.temperatureTolerance !== undefined) requirePositive(o.temperatureTolerance, 'options.temperatureTolerance', 'K');
-    if (o.maxIterations !== undefined) requireInteger(o.maxIterations, 'options.maxIterations', 1, 10_000);
+    if (o.temperatureTolerance !== undefined) requirePositive('options.temperatureTolerance', o.temperatureTolerance, 'K');
+    if (o.maxIterations !== undefined) requireWholeNumber('options.maxIterations', o.maxIterations, 1, 10_000);
   }
 }
 
 export function validateTransientProblem(problem: TransientProblem): void {
   validateSteadyProblem(problem, true);
-  if (typeof problem.initialTemperature !== 'function') requireTemperature(problem.initialTemperature, 'initialTemperature');
-  const dt = requirePositive(problem.timeStep, 'timeStep', 's');
-  const duration = requirePositive(problem.duration, 'duration', 's');
+  if (typeof problem.initialTemperature !== 'function') requireTemperature('initialTemperature', problem.initialTemperature);
+  const dt = requirePositive('timeStep', problem.timeStep, 's');
+  const duration = requirePositive('duration', problem.duration, 's');
   if (Math.ceil(duration / dt - 1e-9) > MAX_TIME_STEPS) {
     throw new InputError('timeStep', `timeStep must give at most ${MAX_TIME_STEPS} steps over the duration; ${duration} s / ${dt} s is too many.`);
   }

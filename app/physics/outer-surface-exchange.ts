@@ -9,15 +9,19 @@
  * depend on θ_s, which is why the builder returns a function; the engine iterates on it.
  *
  * The spec is validated once, when the function is built, so a bad field is reported before the
- * solve starts, in one sentence naming the field and its allowed range.
+ * solve starts, in one sentence naming the field and its allowed range. The function itself
+ * accepts any finite surface temperature: the engine hands it every intermediate iterate of its
+ * Newton solve, and those can lie far from where the surface can be (see evaluationTemperature).
  */
 import type { FilmExchange } from '../fe/problem.js';
 import { combinedConvection } from './combined-convection.js';
 import { forcedConvectionCylinder } from './cylinder-cross-flow.js';
+import { AIR_EXTRAPOLATION_LIMITS } from './air-properties.js';
+import { KELVIN_OFFSET } from './constants.js';
 import { InputError } from './errors.js';
 import { naturalConvectionHorizontalCylinder } from './horizontal-cylinder-natural.js';
 import { naturalConvectionHorizontalPlate } from './horizontal-plate-natural.js';
-import { requireCelsius, requireInRange, requireNonNegative, requireOneOf, requirePositive } from './input-checks.js';
+import { requireCelsius, requireFinite, requireInRange, requireNonNegative, requireOneOf, requirePositive } from './input-checks.js';
 import { forcedConvectionPlate } from './plate-parallel-flow.js';
 import { radiationCoefficient } from './radiation.js';
 import { simplifiedConvection, type SimplifiedCase, type SimplifiedCaseRow } from './simplified-convection.js';
@@ -71,6 +75,12 @@ export interface OuterSurfaceSpec {
   readonly surroundingsTemperature?: number;
   /** Total hemispherical emissivity 0..1; required by every method that adds radiation. */
   readonly emissivity?: number;
+  /**
+   * °C, the coldest and hottest temperature the case names (the fluid or inner face, the air, the
+   * surroundings). With no heat source in the build-up the surface lies between them, so an
+   * iterate outside them is evaluated at the nearer one; see evaluationTemperature.
+   */
+  readonly boundingTemperatures?: { readonly lowest: number; readonly highest: number };
 }
 
 export interface OuterSurfaceExchange extends FilmExchange {
@@ -88,6 +98,61 @@ export interface OuterSurfaceExchange extends FilmExchange {
 export type OuterSurfaceExchangeFunction = (surfaceTemperature: number) => OuterSurfaceExchange;
 
 type ConvectionModel = (surfaceTemperature: number) => { coefficient: number; warnings: readonly string[] };
+
+/**
+ * °C: the coldest surface temperature the film is evaluated at, 0.15 K. Radiation's T⁴ law needs a
+ * temperature above absolute zero; no solution lies anywhere near this floor, so its exact value
+ * only has to keep an iterate's evaluation defined.
+ */
+const COLDEST_EVALUATED = 0.15 - KELVIN_OFFSET;
+
+/** Where the film may be evaluated: the case's bounding temperatures and what the air properties allow. */
+interface EvaluationWindow {
+  readonly lowest: number;
+  readonly highest: number;
+  /** The air-property limits on the surface temperature, for the warning at a converged state. */
+  readonly air: { readonly lowest: number; readonly highest: number } | null;
+}
+
+function evaluationWindow(airTemperature: number, bounds: OuterSurfaceSpec['boundingTemperatures'], usesAirProperties: boolean): EvaluationWindow {
+  // The correlations take air properties at the film temperature (θ_s + θ_a)/2, known only within
+  // the extrapolation limits; that bounds θ_s to 2·limit − θ_a.
+  const air = usesAirProperties
+    ? { lowest: 2 * AIR_EXTRAPOLATION_LIMITS.minimum - airTemperature, highest: 2 * AIR_EXTRAPOLATION_LIMITS.maximum - airTemperature }
+    : null;
+  let lowest = Math.max(COLDEST_EVALUATED, air?.lowest ?? -Infinity);
+  let highest = air?.highest ?? Infinity;
+  if (bounds) {
+    lowest = Math.max(lowest, bounds.lowest);
+    highest = Math.min(highest, bounds.highest);
+  }
+  // Bounds beyond the air limits on both sides cannot happen for a case (air at most 200 °C, so the
+  // air allows a surface up to 600 °C); keep the window ordered all the same.
+  return { lowest: Math.min(lowest, highest), highest, air };
+}
+
+/**
+ * The surface temperature the film is evaluated at for an iterate θ_s. Newton's intermediate
+ * iterates can lie hundreds of kelvin beyond the hottest named temperature (a step through a
+ * steep λ(T) table), or below absolute zero, where neither the air properties nor radiation are
+ * defined; refusing them would stop a solve whose answer is perfectly ordinary. So an iterate is
+ * taken to the nearest temperature of the window. The film is then continuous in θ_s and constant
+ * beyond the window's ends (the heat flow h·(θ_sink − θ_s) still grows with the distance), which
+ * Newton's method handles, and a solution inside the window is evaluated exactly where it lies.
+ */
+function evaluationTemperature(surfaceTemperature: number, window: EvaluationWindow): number {
+  return Math.min(window.highest, Math.max(window.lowest, surfaceTemperature));
+}
+
+/** The warning for a converged surface whose film temperature lies beyond the air properties' limits. */
+function airLimitWarning(surfaceTemperature: number, evaluated: number, window: EvaluationWindow, airTemperature: number): string[] {
+  const air = window.air;
+  if (!air || (surfaceTemperature >= air.lowest && surfaceTemperature <= air.highest)) return [];
+  const film = (surfaceTemperature + airTemperature) / 2;
+  return [
+    `The film temperature ${film.toFixed(1)} °C is beyond the ${AIR_EXTRAPOLATION_LIMITS.minimum} to ${AIR_EXTRAPOLATION_LIMITS.maximum} °C the air properties are known for; convection was evaluated as at a surface of ${evaluated.toFixed(1)} °C.`,
+  ];
+}
 
 function validateShape(shape: OuterSurfaceShape): void {
   if (typeof shape !== 'object' || shape === null) {
@@ -203,6 +268,16 @@ function simplifiedModel(
   };
 }
 
+function validBounds(bounds: OuterSurfaceSpec['boundingTemperatures']): OuterSurfaceSpec['boundingTemperatures'] {
+  if (bounds === undefined) return undefined;
+  const lowest = requireCelsius('boundingTemperatures.lowest', bounds?.lowest);
+  const highest = requireCelsius('boundingTemperatures.highest', bounds?.highest);
+  if (!(lowest <= highest)) {
+    throw new InputError('boundingTemperatures.highest', `boundingTemperatures.highest must be at least boundingTemperatures.lowest (${lowest} °C) (got ${highest}).`);
+  }
+  return { lowest, highest };
+}
+
 /** Builds h(θ_s) for the FE film condition; throws InputError for a bad spec. */
 export function outerSurfaceExchange(spec: OuterSurfaceSpec): OuterSurfaceExchangeFunction {
   if (typeof spec !== 'object' || spec === null) {
@@ -232,8 +307,9 @@ export function outerSurfaceExchange(spec: OuterSurfaceSpec): OuterSurfaceExchan
       radiation: 0,
       warnings: [],
     };
+    // The same exchange at every surface temperature: any finite iterate will do.
     return (surfaceTemperature) => {
-      requireCelsius('surfaceTemperature', surfaceTemperature);
+      requireFinite('surfaceTemperature', surfaceTemperature, '°C');
       return exchange;
     };
   }
@@ -258,13 +334,16 @@ export function outerSurfaceExchange(spec: OuterSurfaceSpec): OuterSurfaceExchan
       convection = correlationModel(spec.shape, airTemperature, windSpeed);
   }
 
+  const window = evaluationWindow(airTemperature, validBounds(spec.boundingTemperatures), methodKind === 'correlations');
   return (surfaceTemperature) => {
-    const θs = requireCelsius('surfaceTemperature', surfaceTemperature);
-    const hc = convection(θs);
-    const hr = radiationCoefficient(emissivity, θs, surroundingsTemperature);
+    const θs = requireFinite('surfaceTemperature', surfaceTemperature, '°C');
+    const θe = evaluationTemperature(θs, window);
+    const hc = convection(θe);
+    const hr = radiationCoefficient(emissivity, θe, surroundingsTemperature);
     const total = hc.coefficient + hr;
     // With no film at all (ε = 0 and no convection) the sink is the air, and the coefficient is 0.
     const ambient = total > 0 ? (hc.coefficient * airTemperature + hr * surroundingsTemperature) / total : airTemperature;
-    return { coefficient: total, ambient, convection: hc.coefficient, radiation: hr, warnings: hc.warnings };
+    const warnings = θe === θs ? hc.warnings : [...airLimitWarning(θs, θe, window, airTemperature), ...hc.warnings];
+    return { coefficient: total, ambient, convection: hc.coefficient, radiation: hr, warnings };
   };
 }

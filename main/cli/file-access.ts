@@ -1,7 +1,7 @@
 import fs from 'node:fs';
 import { decodeUtf8, NotUtf8Error } from '../files/utf8-text.js';
 import { shownPath } from '../storage/shown-path.js';
-import { InvalidInputError } from '../services/service-errors.js';
+import { InputError } from '../../app/index.js';
 
 /**
  * Reading and writing the files a command names (CSV, project files), with each failure told in
@@ -13,12 +13,12 @@ export function readTextFile(file: string): string {
   try {
     bytes = fs.readFileSync(file);
   } catch (error) {
-    throw new InvalidInputError('file', fileAccessSentence(error, file, 'read'));
+    throw new InputError('file', fileAccessSentence(error, file, 'read'));
   }
   try {
     return decodeUtf8(bytes);
   } catch (error) {
-    if (error instanceof NotUtf8Error) throw new InvalidInputError('file', `${shownPath(file)} ${error.message}.`);
+    if (error instanceof NotUtf8Error) throw new InputError('file', `${shownPath(file)} ${error.message}.`);
     throw error;
   }
 }
@@ -27,7 +27,7 @@ export function writeTextFile(file: string, text: string): void {
   try {
     fs.writeFileSync(file, text);
   } catch (error) {
-    throw new InvalidInputError('file', fileAccessSentence(error, file, 'write'));
+    throw new InputError('file', fileAccessSentence(error, file, 'write'));
   }
 }
 

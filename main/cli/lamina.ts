@@ -7,6 +7,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { CliCommand, CliIO } from './command.js';
+import { EXIT_BAD_INPUT, EXIT_DONE } from './exit-code.js';
 import { materialsCommand } from './commands/materials.js';
 import { projectsCommand } from './commands/projects.js';
 import { solveCommand } from './commands/solve.js';
@@ -38,7 +39,7 @@ export async function runCli(args: readonly string[], io: CliIO): Promise<number
   const [name, ...rest] = args;
   if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
     io.stdout(HELP);
-    return name === undefined ? 2 : 0;
+    return name === undefined ? EXIT_BAD_INPUT : EXIT_DONE;
   }
   if (name === '--version') {
     io.stdout(`${version()}\n`);
@@ -47,7 +48,7 @@ export async function runCli(args: readonly string[], io: CliIO): Promise<number
   const command = COMMANDS[name];
   if (!command) {
     io.stderr(`lamina: unknown command "${name}"; use solve, materials or projects (lamina --help).\n`);
-    return 2;
+    return EXIT_BAD_INPUT;
   }
   return command(rest, io);
 }

@@ -13,19 +13,11 @@ import { fitConductivityCurve } from '../services/conductivity-fit.js';
 import { validateMaterialInput } from '../services/material-validation.js';
 import { projectFileFromJson, projectFileToJson } from '../services/project-file.js';
 import { PROJECT_LIMITS } from '../services/project-validation.js';
-import { InputError } from '../../app/base/input-error.js';
-import { InvalidInputError, NotFoundError, RefusedError } from '../services/service-errors.js';
+import { NotFoundError, RefusedError } from '../services/service-errors.js';
+import { InputError, SingularProblemError } from '../../app/index.js';
 import { isPlainObject, optionalText, rejectUnknownKeys, requireId, requireOneOf, requireText } from '../services/validate.js';
 import { StorageError } from '../storage/storage-error.js';
 import { LibraryUnavailableError, type LibraryHost } from './library-host.js';
-
-/** Input that a handler refuses; the message is one sentence naming the field and what is allowed. */
-export class InvalidRequestError extends Error {
-  override name = 'InvalidRequestError';
-  constructor(message: string, readonly field?: string) {
-    super(message);
-  }
-}
 
 export type OperationHandlers = {
   readonly [C in ApiChannel]: (request: unknown) => Promise<ApiResponse<C>>;
@@ -163,13 +155,13 @@ export function createOperations(context: OperationContext): OperationHandlers {
     'projects:add-case': async (request) => {
       const r = fields('projects:add-case', request, ['projectId', 'draft']);
       const projectId = requireId(r['projectId'], 'projectId');
-      if (!isPlainObject(r['draft'])) throw new InvalidRequestError('draft must be an object with a name and inputs.', 'draft');
+      if (!isPlainObject(r['draft'])) throw new InputError('draft', 'draft must be an object with a name and inputs.');
       return lib().projects.addCase(projectId, r['draft']);
     },
     'projects:update-case': async (request) => {
       const r = fields('projects:update-case', request, ['caseId', 'changes']);
       const caseId = requireId(r['caseId'], 'caseId');
-      if (!isPlainObject(r['changes'])) throw new InvalidRequestError('changes must be an object with a name, inputs or both.', 'changes');
+      if (!isPlainObject(r['changes'])) throw new InputError('changes', 'changes must be an object with a name, inputs or both.');
       return lib().projects.updateCase(caseId, r['changes']);
     },
     'projects:remove-case': async (request) => {
@@ -203,17 +195,15 @@ export function createOperations(context: OperationContext): OperationHandlers {
 
 /** HTTP status and ApiError for a failure the user can act on; undefined for a bug (logged, not shown). */
 export function describeFailure(error: unknown): { status: number; body: ApiError } | undefined {
-  if (error instanceof InvalidRequestError) return { status: 400, body: withField(error.message, error.field) };
-  if (error instanceof InvalidInputError || error instanceof InputError) return { status: 400, body: withField(error.message, error.field) };
+  // The one place bad input becomes HTTP 400 (and the IPC refusal): the engine's InputError, which
+  // the services and the request checks above raise too, and a problem with no unique solution.
+  if (error instanceof InputError) return { status: 400, body: { error: error.message, field: error.field } };
+  if (error instanceof SingularProblemError) return { status: 400, body: { error: error.message } };
   if (error instanceof NotFoundError) return { status: 404, body: { error: error.message } };
   if (error instanceof RefusedError) return { status: 409, body: { error: error.message } };
   if (error instanceof LibraryUnavailableError) return { status: 409, body: { error: error.message } };
   if (error instanceof StorageError) return { status: 503, body: { error: error.message } };
   return undefined;
-}
-
-function withField(error: string, field: string | undefined): ApiError {
-  return field ? { error, field } : { error };
 }
 
 /** A request with no parameters may arrive as undefined, null or {}; anything else is refused. */
@@ -225,14 +215,16 @@ function requireNoFields(channel: ApiChannel, request: unknown): void {
 function fields(channel: keyof ApiChannels, request: unknown, known: readonly string[]): Record<string, unknown> {
   if (request === undefined || request === null) return {};
   if (!isPlainObject(request)) {
-    throw new InvalidRequestError(
+    throw new InputError(
+      'request',
       known.length ? `The ${channel} request must be a JSON object with ${known.join(', ')}.` : `The ${channel} request must be an empty JSON object.`,
     );
   }
   const keys = Object.keys(request);
   const unknown = keys.find((key) => !known.includes(key));
   if (unknown !== undefined) {
-    throw new InvalidRequestError(
+    throw new InputError(
+      unknown,
       known.length === 0
         ? `The ${channel} request takes no fields, but it was sent "${unknown}".`
         : `The ${channel} request has no field "${unknown}" (allowed: ${known.join(', ')}).`,
@@ -253,14 +245,14 @@ function materialFilter(channel: ApiChannel, request: unknown): MaterialFilter {
 
 /** Project fields are checked in full by the service; here only that they are an object of known fields. */
 function projectFields(value: unknown, field: string): Record<string, unknown> {
-  if (!isPlainObject(value)) throw new InvalidRequestError(`${field} must be an object of project fields.`, field);
-  rejectUnknownKeys(value, field, PROJECT_FIELDS);
+  if (!isPlainObject(value)) throw new InputError(field, `${field} must be an object of project fields.`);
+  rejectUnknownKeys(value, PROJECT_FIELDS, field);
   return value;
 }
 
 function requireLongText(value: unknown, field: string): string {
-  if (typeof value !== 'string') throw new InvalidRequestError(`${field} must be text.`, field);
-  if (value.length > MAX_TEXT_REQUEST) throw new InvalidRequestError(`${field} must be at most ${MAX_TEXT_REQUEST / 1_000_000} MB.`, field);
+  if (typeof value !== 'string') throw new InputError(field, `${field} must be text.`);
+  if (value.length > MAX_TEXT_REQUEST) throw new InputError(field, `${field} must be at most ${MAX_TEXT_REQUEST / 1_000_000} MB.`);
   return value;
 }
 

@@ -1,6 +1,5 @@
 import { CASE_KINDS, type CaseInputs, type CaseKind } from '../../app/api/project-types.js';
-import { parseCase, type CaseContext } from '../../app/index.js';
-import { InvalidInputError } from './service-errors.js';
+import { InputError, parseCase, type CaseContext } from '../../app/index.js';
 import { isPlainObject, requireId } from './validate.js';
 
 /**
@@ -26,24 +25,24 @@ export function isMaterialReferenceKey(key: string): boolean {
  * depth). What the case means is checked by the engine: see `checkCaseSolvable`.
  */
 export function validateCaseInputs(value: unknown, field = 'inputs'): CaseInputs {
-  if (!isPlainObject(value)) throw new InvalidInputError(field, `${field} must be an object.`);
+  if (!isPlainObject(value)) throw new InputError(field, `${field} must be an object.`);
   assertPlainJson(value, field, 0);
   if (value['schemaVersion'] !== CASE_INPUTS_SCHEMA_VERSION) {
-    throw new InvalidInputError(`${field}.schemaVersion`, `${field}.schemaVersion must be ${CASE_INPUTS_SCHEMA_VERSION}.`);
+    throw new InputError(`${field}.schemaVersion`, `${field}.schemaVersion must be ${CASE_INPUTS_SCHEMA_VERSION}.`);
   }
   if (typeof value['kind'] !== 'string' || !(CASE_KINDS as readonly string[]).includes(value['kind'])) {
-    throw new InvalidInputError(`${field}.kind`, `${field}.kind must be one of ${CASE_KINDS.join(', ')}.`);
+    throw new InputError(`${field}.kind`, `${field}.kind must be one of ${CASE_KINDS.join(', ')}.`);
   }
   for (const { path, id } of materialReferences(value)) requireId(id, `${field}${path}`);
-  if (JSON.stringify(value).length > MAX_INPUTS_BYTES) throw new InvalidInputError(field, `${field} must be at most ${MAX_INPUTS_BYTES} characters of JSON.`);
+  if (JSON.stringify(value).length > MAX_INPUTS_BYTES) throw new InputError(field, `${field} must be at most ${MAX_INPUTS_BYTES} characters of JSON.`);
   return value as unknown as CaseInputs;
 }
 
 function assertPlainJson(value: unknown, path: string, depth: number): void {
-  if (depth > MAX_DEPTH) throw new InvalidInputError(path, `${path} is nested more than ${MAX_DEPTH} levels deep.`);
+  if (depth > MAX_DEPTH) throw new InputError(path, `${path} is nested more than ${MAX_DEPTH} levels deep.`);
   if (value === null || typeof value === 'string' || typeof value === 'boolean') return;
   if (typeof value === 'number') {
-    if (!Number.isFinite(value)) throw new InvalidInputError(path, `${path} must be a finite number.`);
+    if (!Number.isFinite(value)) throw new InputError(path, `${path} must be a finite number.`);
     return;
   }
   if (Array.isArray(value)) {
@@ -54,7 +53,7 @@ function assertPlainJson(value: unknown, path: string, depth: number): void {
     for (const [k, v] of Object.entries(value)) assertPlainJson(v, `${path}.${k}`, depth + 1);
     return;
   }
-  throw new InvalidInputError(path, `${path} must be plain JSON data (text, numbers, true/false, lists, objects).`);
+  throw new InputError(path, `${path} must be plain JSON data (text, numbers, true/false, lists, objects).`);
 }
 
 /** Every material reference in the inputs, with where it sits. */
@@ -88,6 +87,8 @@ export function remapMaterialIds(value: unknown, map: (id: number) => number): u
 /**
  * Refuses, now rather than at the next solve, a case the engine could not solve: every field,
  * every material reference and everything the solve needs (such as an outer surface emissivity).
+ * Called on every write of a case (add, duplicate, import, save); never on reading, so a library
+ * that holds cases stored before this check still opens and lists them.
  */
 export function checkCaseSolvable(inputs: CaseInputs, context: CaseContext): void {
   parseCase(inputs, context);

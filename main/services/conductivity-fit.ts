@@ -1,7 +1,7 @@
 import { Matrix, solve } from 'ml-matrix';
 import type { ConductivityFit } from '../../app/api/material-types.js';
 import { assertPolynomialPositive, MATERIAL_LIMITS } from './material-validation.js';
-import { InvalidInputError } from './service-errors.js';
+import { InputError } from '../../app/index.js';
 import { requireNumber } from './validate.js';
 
 /**
@@ -23,15 +23,15 @@ export interface FitOptions {
 
 export function fitConductivityCurve(points: unknown, options: FitOptions): ConductivityFit {
   const degree = requireNumber(options.degree, 'degree', { min: 1, max: 3, unit: '' });
-  if (!Number.isInteger(degree)) throw new InvalidInputError('degree', 'degree must be 1, 2 or 3.');
+  if (!Number.isInteger(degree)) throw new InputError('degree', 'degree must be 1, 2 or 3.');
   const low = requireNumber(options.minServiceTemperature, 'minServiceTemperature', MATERIAL_LIMITS.temperature);
   const high = requireNumber(options.maxServiceTemperature, 'maxServiceTemperature', MATERIAL_LIMITS.temperature);
-  if (low >= high) throw new InvalidInputError('maxServiceTemperature', `maxServiceTemperature must be above minServiceTemperature (${low} °C).`);
+  if (low >= high) throw new InputError('maxServiceTemperature', `maxServiceTemperature must be above minServiceTemperature (${low} °C).`);
   if (!Array.isArray(points) || points.length > MATERIAL_LIMITS.maxTablePoints) {
-    throw new InvalidInputError('points', `points must be a list of at most ${MATERIAL_LIMITS.maxTablePoints} [°C, W/(m·K)] pairs.`);
+    throw new InputError('points', `points must be a list of at most ${MATERIAL_LIMITS.maxTablePoints} [°C, W/(m·K)] pairs.`);
   }
   const data = points.map((p, i): [number, number] => {
-    if (!Array.isArray(p) || p.length !== 2) throw new InvalidInputError(`points[${i}]`, `points[${i}] must be a [°C, W/(m·K)] pair.`);
+    if (!Array.isArray(p) || p.length !== 2) throw new InputError(`points[${i}]`, `points[${i}] must be a [°C, W/(m·K)] pair.`);
     return [
       requireNumber(p[0], `points[${i}] temperature`, MATERIAL_LIMITS.temperature),
       requireNumber(p[1], `points[${i}] conductivity`, MATERIAL_LIMITS.conductivity),
@@ -39,7 +39,7 @@ export function fitConductivityCurve(points: unknown, options: FitOptions): Cond
   });
   const distinct = new Set(data.map((p) => p[0])).size;
   if (distinct < degree + 1) {
-    throw new InvalidInputError('points', `points must include at least ${degree + 1} different temperatures for a degree-${degree} fit (got ${distinct}).`);
+    throw new InputError('points', `points must include at least ${degree + 1} different temperatures for a degree-${degree} fit (got ${distinct}).`);
   }
 
   const scale = Math.max(1, ...data.map((p) => Math.abs(p[0])));

@@ -4,7 +4,7 @@ import { formatCsv, parseCsv, CsvSyntaxError } from '../storage/csv.js';
 import type { Material, MaterialInput } from './material-types.js';
 import { validateMaterialInput } from './material-validation.js';
 import { shownValue } from '../../app/base/shown-value.js';
-import { InvalidInputError } from './service-errors.js';
+import { InputError } from '../../app/index.js';
 
 /**
  * The materials CSV format (seed files in data/materials and user import/export).
@@ -40,15 +40,15 @@ const NUMBER = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 function parseNumberCell(cell: string, column: string): number | null {
   const text = cell.trim();
   if (text === '') return null;
-  if (/^[+-]?\d+,\d+$/.test(text)) throw new InvalidInputError(column, `${column} ${quotedCell(text)} uses a comma; write decimals with a point.`);
-  if (!NUMBER.test(text)) throw new InvalidInputError(column, `${column} ${quotedCell(text)} is not a number.`);
+  if (/^[+-]?\d+,\d+$/.test(text)) throw new InputError(column, `${column} ${quotedCell(text)} uses a comma; write decimals with a point.`);
+  if (!NUMBER.test(text)) throw new InputError(column, `${column} ${quotedCell(text)} is not a number.`);
   return Number(text);
 }
 
 function parseConductivityCell(cell: string): ConductivityModel {
   const column = MATERIAL_CSV_HEADER[2];
   const text = cell.trim();
-  if (text === '') throw new InvalidInputError('conductivity', `${column} is required.`);
+  if (text === '') throw new InputError('conductivity', `${column} is required.`);
   const [head, ...rest] = text.split(/\s+/);
   if (head === 'poly') {
     return { kind: 'polynomial', coefficients: rest.map((c) => parseNumberCell(c, `${column} coefficient`) ?? NaN) };
@@ -58,12 +58,12 @@ function parseConductivityCell(cell: string): ConductivityModel {
       kind: 'table',
       points: rest.map((pair) => {
         const parts = pair.split(':');
-        if (parts.length !== 2) throw new InvalidInputError('conductivity', `${column} table point ${quotedCell(pair)} must be written temperature:conductivity.`);
+        if (parts.length !== 2) throw new InputError('conductivity', `${column} table point ${quotedCell(pair)} must be written temperature:conductivity.`);
         return [parseNumberCell(parts[0]!, `${column} temperature`) ?? NaN, parseNumberCell(parts[1]!, column) ?? NaN] as [number, number];
       }),
     };
   }
-  if (rest.length > 0) throw new InvalidInputError('conductivity', `${column} ${quotedCell(text)} must be a number, "poly a0 a1 ..." or "table t:λ t:λ ...".`);
+  if (rest.length > 0) throw new InputError('conductivity', `${column} ${quotedCell(text)} must be a number, "poly a0 a1 ..." or "table t:λ t:λ ...".`);
   return { kind: 'constant', value: parseNumberCell(text, column) ?? NaN };
 }
 
@@ -133,7 +133,7 @@ export function parseMaterialsCsv(text: string): { rows: ParsedMaterialRow[]; pr
       firstLineOfName.set(key, record.line);
       rows.push({ line: record.line, input });
     } catch (error) {
-      if (!(error instanceof InvalidInputError)) throw error;
+      if (!(error instanceof InputError)) throw error;
       problems.push({ line: record.line, message: inColumnTerms(error) });
     }
   }
@@ -160,7 +160,7 @@ const COLUMN_OF_FIELD: Record<string, string> = {
  * A validation message names the material's field (e.g. "conductivity.value must be …"); a person
  * importing a file knows its columns, so the field at the start is replaced by the column's header.
  */
-function inColumnTerms(error: InvalidInputError): string {
+function inColumnTerms(error: InputError): string {
   const field = error.field ?? '';
   const root = field.split(/[.[]/, 1)[0]!;
   const column = COLUMN_OF_FIELD[root];

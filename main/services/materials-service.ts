@@ -7,7 +7,8 @@ import {
   MATERIAL_CATEGORIES, type Material, type MaterialFilter, type MaterialInput, type MaterialUsage,
 } from './material-types.js';
 import { MATERIAL_LIMITS, validateMaterialInput } from './material-validation.js';
-import { InvalidInputError, NotFoundError, RefusedError } from './service-errors.js';
+import { NotFoundError, RefusedError } from './service-errors.js';
+import { InputError } from '../../app/index.js';
 import { isPlainObject, optionalText, rejectUnknownKeys, requireId, requireOneOf, requireText } from './validate.js';
 
 export type { CsvImportResult };
@@ -126,10 +127,10 @@ export class MaterialsService {
    */
   remove(id: number, options: { replaceWith?: number } = {}): { replacedInCases: number } {
     const checkedId = requireId(id, 'id');
-    if (!isPlainObject(options)) throw new InvalidInputError('options', 'options must be an object.');
-    rejectUnknownKeys(options, 'options', ['replaceWith']);
+    if (!isPlainObject(options)) throw new InputError('options', 'options must be an object.');
+    rejectUnknownKeys(options, ['replaceWith'], 'options');
     const replacement = options.replaceWith === undefined ? undefined : requireId(options.replaceWith, 'replaceWith');
-    if (replacement === checkedId) throw new InvalidInputError('replaceWith', 'replaceWith must name a different material than the one being deleted.');
+    if (replacement === checkedId) throw new InputError('replaceWith', 'replaceWith must name a different material than the one being deleted.');
     return inWriteTransaction(this.context, () => {
       const material = this.get(checkedId);
       if (material.builtIn) throw new RefusedError(`"${material.name}" is a built-in material and cannot be deleted.`);
@@ -156,6 +157,10 @@ export class MaterialsService {
     const unlink = this.db.prepare('DELETE FROM case_materials WHERE case_id = ? AND material_id = ?');
     const now = nowIso();
     for (const c of cases) {
+      // Envelope only, not checkCaseSolvable: a case stored before cases were checked completely
+      // (or one a migration carried over) may already be incomplete, and replacing a material must
+      // not fail because of an old gap the replacement did not make; the case still solves or fails
+      // by name at the next solve, and is checked completely when it is next saved.
       const inputs = validateCaseInputs(remapMaterialIds(JSON.parse(c.inputs), (id) => (id === from ? to : id)));
       updateCase.run(JSON.stringify(inputs), now, c.id);
       link.run(c.id, to);
@@ -170,8 +175,8 @@ export class MaterialsService {
    * reported with its line number; nothing is written unless all rows are good.
    */
   importCsv(text: unknown): CsvImportResult {
-    if (typeof text !== 'string') throw new InvalidInputError('csv', 'csv must be text.');
-    if (text.length > 20_000_000) throw new InvalidInputError('csv', 'csv must be at most 20 MB.');
+    if (typeof text !== 'string') throw new InputError('csv', 'csv must be text.');
+    if (text.length > 20_000_000) throw new InputError('csv', 'csv must be at most 20 MB.');
     const { rows, problems } = parseMaterialsCsv(text);
     const all = [...problems];
     for (const row of rows) {
@@ -206,8 +211,8 @@ export class MaterialsService {
 }
 
 function validateFilter(filter: unknown): Required<Pick<MaterialFilter, 'origin'>> & MaterialFilter {
-  if (!isPlainObject(filter)) throw new InvalidInputError('filter', 'filter must be an object.');
-  rejectUnknownKeys(filter, 'filter', ['search', 'category', 'origin']);
+  if (!isPlainObject(filter)) throw new InputError('filter', 'filter must be an object.');
+  rejectUnknownKeys(filter, ['search', 'category', 'origin'], 'filter');
   const search = optionalText(filter['search'], 'search', 200);
   const category = filter['category'] === undefined ? undefined : requireOneOf(filter['category'], 'category', MATERIAL_CATEGORIES);
   const origin = filter['origin'] === undefined ? 'all' : requireOneOf(filter['origin'], 'origin', ['all', 'built-in', 'user'] as const);

@@ -5,7 +5,7 @@ import { validateMaterialInput } from './material-validation.js';
 import { validateProjectFields, validateCaseDraft } from './project-validation.js';
 import type { ProjectFields } from './project-types.js';
 import { requireBoundedNesting } from '../../app/base/json-depth.js';
-import { InvalidInputError } from './service-errors.js';
+import { InputError } from '../../app/index.js';
 import { rejectUnknownKeys, requireId, requireObject } from './validate.js';
 
 /**
@@ -37,7 +37,7 @@ export function projectFileFromJson(text: string): unknown {
   try {
     value = JSON.parse(text, (key, item) => (key === 'vapourResistanceFactor' && item === 'inf' ? Infinity : item));
   } catch (error) {
-    throw new InvalidInputError('file', `The project file is not valid JSON (${(error as Error).message.replace(/\s+/g, ' ')}).`);
+    throw new InputError('file', `The project file is not valid JSON (${(error as Error).message.replace(/\s+/g, ' ')}).`);
   }
   // Before anything walks it recursively (the checks below, a copy, a stringify).
   requireBoundedNesting(value, 'The project file');
@@ -47,41 +47,41 @@ export function projectFileFromJson(text: string): unknown {
 /** Checks the whole file before anything is written. */
 export function readProjectFile(value: unknown): CheckedProjectFile {
   const raw = requireObject(value, 'file');
-  if (raw['format'] !== PROJECT_FILE_FORMAT) throw new InvalidInputError('format', `format must be "${PROJECT_FILE_FORMAT}"; this is not a Lamina project file.`);
+  if (raw['format'] !== PROJECT_FILE_FORMAT) throw new InputError('format', `format must be "${PROJECT_FILE_FORMAT}"; this is not a Lamina project file.`);
   if (raw['formatVersion'] !== PROJECT_FILE_VERSION) {
-    throw new InvalidInputError('formatVersion', `formatVersion must be ${PROJECT_FILE_VERSION} (the file was written by a Lamina this version cannot read).`);
+    throw new InputError('formatVersion', `formatVersion must be ${PROJECT_FILE_VERSION} (the file was written by a Lamina this version cannot read).`);
   }
-  rejectUnknownKeys(raw, 'file', ['format', 'formatVersion', 'exportedAt', 'project', 'materials', 'cases']);
+  rejectUnknownKeys(raw, ['format', 'formatVersion', 'exportedAt', 'project', 'materials', 'cases'], 'file');
   const project = validateProjectFields(raw['project']);
   const rawMaterials = raw['materials'];
   if (!Array.isArray(rawMaterials) || rawMaterials.length > MAX_FILE_MATERIALS) {
-    throw new InvalidInputError('materials', `materials must be a list of at most ${MAX_FILE_MATERIALS} materials.`);
+    throw new InputError('materials', `materials must be a list of at most ${MAX_FILE_MATERIALS} materials.`);
   }
   const fileIds = new Set<number>();
   const materials = rawMaterials.map((m, i) => {
     const { fileId, ...rest } = requireObject(m, `materials[${i}]`);
     const id = requireId(fileId, `materials[${i}].fileId`);
-    if (fileIds.has(id)) throw new InvalidInputError(`materials[${i}].fileId`, `materials[${i}].fileId ${id} is used twice in the file.`);
+    if (fileIds.has(id)) throw new InputError(`materials[${i}].fileId`, `materials[${i}].fileId ${id} is used twice in the file.`);
     fileIds.add(id);
     try {
       return { fileId: id, material: validateMaterialInput(rest) };
     } catch (error) {
-      if (error instanceof InvalidInputError) throw new InvalidInputError(`materials[${i}].${error.field}`, `materials[${i}]: ${error.message}`);
+      if (error instanceof InputError) throw new InputError(`materials[${i}].${error.field}`, `materials[${i}]: ${error.message}`);
       throw error;
     }
   });
   const rawCases = raw['cases'];
-  if (!Array.isArray(rawCases) || rawCases.length > MAX_FILE_CASES) throw new InvalidInputError('cases', `cases must be a list of at most ${MAX_FILE_CASES} cases.`);
+  if (!Array.isArray(rawCases) || rawCases.length > MAX_FILE_CASES) throw new InputError('cases', `cases must be a list of at most ${MAX_FILE_CASES} cases.`);
   const cases = rawCases.map((c, i) => {
     let draft;
     try {
       draft = validateCaseDraft(c, `cases[${i}]`);
     } catch (error) {
-      if (error instanceof InvalidInputError) throw new InvalidInputError(`cases[${i}].${error.field}`, `cases[${i}]: ${error.message}`);
+      if (error instanceof InputError) throw new InputError(`cases[${i}].${error.field}`, `cases[${i}]: ${error.message}`);
       throw error;
     }
     for (const ref of materialReferences(draft.inputs)) {
-      if (!fileIds.has(ref.id as number)) throw new InvalidInputError(`cases[${i}].inputs${ref.path}`, `cases[${i}].inputs${ref.path} refers to material ${String(ref.id)}, which the file does not include.`);
+      if (!fileIds.has(ref.id as number)) throw new InputError(`cases[${i}].inputs${ref.path}`, `cases[${i}].inputs${ref.path} refers to material ${String(ref.id)}, which the file does not include.`);
     }
     return { name: draft.name, inputs: validateCaseInputs(draft.inputs) };
   });

@@ -1,6 +1,6 @@
 import { validateCaseInputs, type CaseInputs } from './case-inputs.js';
 import { PROJECT_FIELDS, UNIT_SYSTEMS, type ProjectFields } from './project-types.js';
-import { InvalidInputError } from './service-errors.js';
+import { InputError } from '../../app/index.js';
 import { optionalText, rejectUnknownKeys, requireObject, requireOneOf, requireText } from './validate.js';
 
 export { PROJECT_LIMITS } from '../../app/api/project-limits.js';
@@ -12,7 +12,7 @@ function validateDate(value: unknown): string {
   const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(text);
   const d = m ? new Date(Date.UTC(+m[1]!, +m[2]! - 1, +m[3]!)) : undefined;
   if (!m || !d || d.getUTCFullYear() !== +m[1]! || d.getUTCMonth() !== +m[2]! - 1 || d.getUTCDate() !== +m[3]!) {
-    throw new InvalidInputError('date', 'date must be a calendar date written YYYY-MM-DD, or empty.');
+    throw new InputError('date', 'date must be a calendar date written YYYY-MM-DD, or empty.');
   }
   return text;
 }
@@ -20,7 +20,7 @@ function validateDate(value: unknown): string {
 /** Validates new project fields; only `name` is required. */
 export function validateProjectFields(value: unknown): ProjectFields {
   const raw = requireObject(value, 'project');
-  rejectUnknownKeys(raw, 'project', PROJECT_FIELDS);
+  rejectUnknownKeys(raw, PROJECT_FIELDS, 'project');
   return {
     name: requireText(raw['name'], 'name', { min: 1, max: PROJECT_LIMITS.name }),
     client: optionalText(raw['client'], 'client', PROJECT_LIMITS.text),
@@ -37,7 +37,7 @@ export function validateProjectFields(value: unknown): ProjectFields {
 /** Validates a partial update and merges it over the current fields. */
 export function mergeProjectFields(current: ProjectFields, changes: unknown): ProjectFields {
   const raw = requireObject(changes, 'changes');
-  rejectUnknownKeys(raw, 'changes', PROJECT_FIELDS);
+  rejectUnknownKeys(raw, PROJECT_FIELDS, 'changes');
   const base: Record<string, unknown> = {};
   for (const key of PROJECT_FIELDS) base[key] = current[key];
   return validateProjectFields({ ...base, ...raw });
@@ -45,7 +45,7 @@ export function mergeProjectFields(current: ProjectFields, changes: unknown): Pr
 
 export function validateCaseDraft(value: unknown, field = 'case'): { name: string; inputs: CaseInputs } {
   const raw = requireObject(value, field);
-  rejectUnknownKeys(raw, field, ['name', 'inputs']);
+  rejectUnknownKeys(raw, ['name', 'inputs'], field);
   return {
     name: requireText(raw['name'], 'name', { min: 1, max: PROJECT_LIMITS.caseName }),
     inputs: validateCaseInputs(raw['inputs']),

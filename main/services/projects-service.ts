@@ -1,4 +1,5 @@
-import { materialIdsOf, remapMaterialIds, validateCaseInputs, type CaseInputs } from './case-inputs.js';
+import { caseContext } from '../cases/case-context.js';
+import { checkCaseSolvable, materialIdsOf, remapMaterialIds, validateCaseInputs, type CaseInputs } from './case-inputs.js';
 import { inWriteTransaction, nowIso, type DatabaseContext } from './database-context.js';
 import { materialInputOf, sameMaterialData } from './material-rows.js';
 import type { MaterialsService } from './materials-service.js';
@@ -7,7 +8,8 @@ import { MATERIAL_LIMITS } from './material-validation.js';
 import { mergeProjectFields, PROJECT_LIMITS, validateCaseDraft, validateProjectFields } from './project-validation.js';
 import { readProjectFile, type ProjectFile } from './project-file.js';
 import type { Project, ProjectCase, ProjectFields, ProjectSummary, UnitSystem } from './project-types.js';
-import { InvalidInputError, NotFoundError, RefusedError } from './service-errors.js';
+import { NotFoundError, RefusedError } from './service-errors.js';
+import { InputError } from '../../app/index.js';
 import { isPlainObject, rejectUnknownKeys, requireId, requireText } from './validate.js';
 
 interface ProjectRow {
@@ -39,6 +41,20 @@ function fieldParameters(fields: ProjectFields) {
     name: fields.name, client: fields.client, site: fields.site, reference: fields.reference, engineer: fields.engineer,
     revision: fields.revision, project_date: fields.date, unit_system: fields.unitSystem, notes: fields.notes,
   };
+}
+
+/**
+ * Runs `store` for the case at `index`; a refusal names the case, since the person copying or
+ * importing a project did not write that case just now.
+ */
+function storeNamingCase(index: number, name: string, store: () => void): void {
+  try {
+    store();
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    const field = /^inputs\b/.test(error.field) ? error.field : `inputs.${error.field}`;
+    throw new InputError(`cases[${index}].${field}`, `Case "${name}" cannot be stored: ${error.message}`);
+  }
 }
 
 /**
@@ -75,7 +91,7 @@ export class ProjectsService {
 
   update(id: number, changes: unknown): Project {
     const checkedId = requireId(id, 'id');
-    if (!isPlainObject(changes)) throw new InvalidInputError('changes', 'changes must be an object.');
+    if (!isPlainObject(changes)) throw new InputError('changes', 'changes must be an object.');
     return inWriteTransaction(this.context, () => {
       const current = this.openEditable(checkedId);
       const merged = mergeProjectFields(current, changes);
@@ -101,7 +117,7 @@ export class ProjectsService {
     return inWriteTransaction(this.context, () => {
       const original = this.open(checkedId);
       const copyId = this.insertProject({ ...original, name: checkedName ?? `${original.name} (copy)`.slice(0, PROJECT_LIMITS.name) });
-      for (const c of original.cases) this.insertCase(copyId, c.name, c.inputs);
+      original.cases.forEach((c, i) => storeNamingCase(i, c.name, () => this.insertCase(copyId, c.name, c.inputs)));
       return this.open(copyId);
     });
   }
@@ -144,8 +160,8 @@ export class ProjectsService {
   updateCase(caseId: number, changes: unknown): ProjectCase {
     const checkedId = requireId(caseId, 'caseId');
     const raw = isPlainObject(changes) ? changes : undefined;
-    if (!raw) throw new InvalidInputError('changes', 'changes must be an object.');
-    rejectUnknownKeys(raw, 'changes', ['name', 'inputs']);
+    if (!raw) throw new InputError('changes', 'changes must be an object.');
+    rejectUnknownKeys(raw, ['name', 'inputs'], 'changes');
     const name = raw['name'] === undefined ? undefined : requireText(raw['name'], 'name', { min: 1, max: PROJECT_LIMITS.caseName });
     const inputs = raw['inputs'] === undefined ? undefined : validateCaseInputs(raw['inputs']);
     return inWriteTransaction(this.context, () => {
@@ -154,7 +170,7 @@ export class ProjectsService {
       const now = nowIso();
       if (name !== undefined) this.db.prepare('UPDATE cases SET name = ?, updated_at = ? WHERE id = ?').run(name, now, checkedId);
       if (inputs !== undefined) {
-        this.assertMaterialsExist(inputs);
+        this.assertStorable(inputs);
         this.db.prepare('UPDATE cases SET inputs = ?, updated_at = ? WHERE id = ?').run(JSON.stringify(inputs), now, checkedId);
         this.db.prepare('DELETE FROM case_materials WHERE case_id = ?').run(checkedId);
         this.linkMaterials(checkedId, inputs);
@@ -221,10 +237,10 @@ export class ProjectsService {
         created++;
       }
       const projectId = this.insertProject(parsed.project);
-      for (const c of parsed.cases) {
+      parsed.cases.forEach((c, i) => {
         const inputs = validateCaseInputs(remapMaterialIds(c.inputs, (fileId) => idMap.get(fileId)!));
-        this.insertCase(projectId, c.name, inputs);
-      }
+        storeNamingCase(i, c.name, () => this.insertCase(projectId, c.name, inputs));
+      });
       return { project: this.open(projectId), materialsReused: reused, materialsCreated: created };
     });
   }
@@ -252,7 +268,7 @@ export class ProjectsService {
   }
 
   private insertCase(projectId: number, name: string, inputs: CaseInputs): number {
-    this.assertMaterialsExist(inputs);
+    this.assertStorable(inputs);
     const position = (this.db.prepare('SELECT COALESCE(MAX(position), -1) + 1 AS next FROM cases WHERE project_id = ?').get(projectId) as { next: number }).next;
     const now = nowIso();
     const result = this.db
@@ -268,10 +284,20 @@ export class ProjectsService {
     for (const materialId of materialIdsOf(inputs)) link.run(caseId, materialId);
   }
 
+  /**
+   * A case is stored only if it can be solved: its materials exist (the service's own sentence),
+   * then the engine parses it completely, as the next solve will (an outer surface emissivity, μ
+   * on a wall layer, every field in its range), and refuses it now in one sentence naming the field.
+   */
+  private assertStorable(inputs: CaseInputs): void {
+    this.assertMaterialsExist(inputs);
+    checkCaseSolvable(inputs, caseContext(this.materials));
+  }
+
   private assertMaterialsExist(inputs: CaseInputs): void {
     const exists = this.db.prepare('SELECT 1 FROM materials WHERE id = ?');
     for (const materialId of materialIdsOf(inputs)) {
-      if (!exists.get(materialId)) throw new InvalidInputError('inputs', `inputs refer to material id ${materialId}, which is not in the library.`);
+      if (!exists.get(materialId)) throw new InputError('inputs', `inputs refer to material id ${materialId}, which is not in the library.`);
     }
   }
 

@@ -1,18 +1,9 @@
 /**
- * Errors the service layer raises. Each message is one sentence that names the field or the thing
- * and what is allowed, so a form, the command line and an IPC caller can show it as it is.
+ * Errors the service layer raises besides bad input. Each message is one sentence that names the
+ * thing and what is allowed, so a form, the command line and an IPC caller can show it as it is.
+ * Bad input is the engine's own InputError (app/base/input-error.ts), one vocabulary for the
+ * engine and the services alike.
  */
-import { boundedMessage } from '../../app/base/input-error.js';
-
-export class InvalidInputError extends Error {
-  readonly field: string;
-  constructor(field: string, message: string) {
-    super(boundedMessage(message));
-    this.name = 'InvalidInputError';
-    this.field = boundedMessage(field, 120);
-  }
-}
-
 export class NotFoundError extends Error {
   constructor(message: string) {
     super(message);

@@ -150,7 +150,7 @@ const CORPUS: readonly BadInput[] = [
     field: 'layers[1].elements',
     gap: {
       reported: "the engine's own check (app/fe/validate.ts) runs first and states its limit of 2000000, while a case allows at most 10000",
-      outcome: /^exit 2: lamina solve: layers\[1\]\.elements must be a whole number from 1 to 2000000; got 1000000000\.\n$/,
+      outcome: /^exit 2: lamina solve: layers\[1\]\.elements must be a whole number from 1 to 2000000 \(got 1000000000\)\.\n$/,
     },
   },
   { name: 'element order 3', kind: 'conduction', content: { ...planar, options: { order: 3 } }, field: 'options.order' },

@@ -100,7 +100,7 @@ describe('lamina solve', () => {
     expect(r.code).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr.trim().split('\n')).toHaveLength(1);
-    expect(r.stderr).toMatch(/layers\[1\]\.thickness must be greater than 0 m; got -0\.1\./);
+    expect(r.stderr).toMatch(/layers\[1\]\.thickness must be greater than 0 m \(got -0\.1\)\./);
   });
 
   it('invalid JSON, unknown kind, unknown field, missing file: exit 2 with one line', () => {

@@ -100,13 +100,13 @@ describe('browser-mode server', () => {
 
     const extra = await raw('POST', '/api/app-info', { body: '{"path":"/etc"}', headers: withKey });
     expect(extra.status).toBe(400);
-    expect(JSON.parse(extra.body)).toEqual({ error: 'The app:info request takes no fields, but it was sent "path".' });
+    expect(JSON.parse(extra.body)).toEqual({ error: 'The app:info request takes no fields, but it was sent "path".', field: 'path' });
 
     const notJson = await raw('POST', '/api/app-info', { body: '{', headers: withKey });
     expect(JSON.parse(notJson.body)).toEqual({ error: 'The request body is not valid JSON.' });
 
     const array = await raw('POST', '/api/app-info', { body: '[]', headers: withKey });
-    expect(JSON.parse(array.body)).toEqual({ error: 'The app:info request must be an empty JSON object.' });
+    expect(JSON.parse(array.body)).toEqual({ error: 'The app:info request must be an empty JSON object.', field: 'request' });
 
     // A plain HTML form can post text/plain across origins; the API takes JSON only.
     expect((await raw('POST', '/api/app-info', { body: 'a=1', headers: { ...withKey, 'Content-Type': 'text/plain' } })).status).toBe(415);

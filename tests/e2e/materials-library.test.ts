@@ -11,6 +11,7 @@ import type { Page } from 'playwright-core';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
 import { resultsFolder, useBrowserSession } from './browser-session.js';
+import { pipeCase, seedIds } from '../storage/case-fixtures.js';
 
 const session = useBrowserSession('lamina-library-e2e-');
 const tempDatabasePath = (): string => path.join(session.tempFolder(), 'lamina.sqlite');
@@ -92,9 +93,10 @@ describe('materials library in the browser', () => {
 
       // Deleting a material a project uses is refused with the reason.
       const project = services.projects.create({ name: 'Harrowgate depot boiler house' });
+      const seed = seedIds((name) => services.materials.findByName(name));
       services.projects.addCase(project.id, {
         name: 'Header run',
-        inputs: { schemaVersion: 1, kind: 'pipe', length: 18, layers: [{ materialId: saved!.id, thickness: 0.004 }] },
+        inputs: pipeCase({ pipe: saved!.id, insulation: [seed.pipeInsulation], jacket: seed.cladding }, { length: 18 }),
       });
       await page.fill('#material-search', 'Harrowgate');
       await page.selectOption('#material-category-filter', '');

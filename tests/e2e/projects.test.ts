@@ -11,6 +11,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import { resultsFolder, useBrowserSession } from './browser-session.js';
+import { pipeCase, wallCase } from '../storage/case-fixtures.js';
 
 const session = useBrowserSession('lamina-projects-e2e-');
 const tempFolder = session.tempFolder;
@@ -138,8 +139,10 @@ describe('projects in the browser', () => {
         specificHeat: 1400, vapourResistanceFactor: 60, equivalentAirLayerThickness: null, emissivity: 0.9,
         minServiceTemperature: -30, maxServiceTemperature: 90, source: 'demo values for an invented site', notes: '',
       });
-      services.projects.addCase(id, { name: 'Loading bay wall', inputs: { schemaVersion: 1, kind: 'wall', area: 42, layers: [{ materialId: board.id, thickness: 0.1 }] } });
-      services.projects.addCase(id, { name: 'Chilled water main', inputs: { schemaVersion: 1, kind: 'pipe', length: 36, layers: [{ materialId: board.id, thickness: 0.03 }] } });
+      const steel = services.materials.findByName('Carbon steel pipe')!;
+      services.projects.addCase(id, { name: 'Loading bay wall', inputs: wallCase([board.id], { area: 42 }) });
+      const chilled = { inner: { kind: 'surface', temperature: 6 }, length: 36 };
+      services.projects.addCase(id, { name: 'Chilled water main', inputs: pipeCase({ pipe: steel.id, insulation: [board.id] }, chilled) });
       await page.click('#project-close');
       await page.reload();
       await page.click('#view-projects');

@@ -26,7 +26,7 @@ function expectInputError(problem: unknown, field: string, pattern: RegExp) {
 
 describe('input validation', () => {
   it('zero or negative thickness', () => {
-    expectInputError({ ...good, layers: [{ ...good.layers[0], thickness: 0 }] }, 'layers[0].thickness', /layers\[0\]\.thickness must be greater than 0 m; got 0\./);
+    expectInputError({ ...good, layers: [{ ...good.layers[0], thickness: 0 }] }, 'layers[0].thickness', /layers\[0\]\.thickness must be greater than 0 m \(got 0\)\./);
     expectInputError({ ...good, layers: [{ ...good.layers[0], thickness: -0.01 }] }, 'layers[0].thickness', /greater than 0 m/);
   });
   it('conductivity not above zero', () => {

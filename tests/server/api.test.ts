@@ -11,6 +11,7 @@ import { startBrowserServer, type BrowserServer } from '../../main/server/browse
 import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
 import { API_CHANNELS } from '../../main/server/operations.js';
 import { call, ok } from './api-client.js';
+import { wallCase } from '../storage/case-fixtures.js';
 
 const running: BrowserServer[] = [];
 const folders: string[] = [];
@@ -89,7 +90,7 @@ describe('materials channels', () => {
       ['materials:list', { search: 'x'.repeat(201) }, 400, { error: 'search must be at most 200 characters long.', field: 'search' }],
       ['materials:create', { material: { ...userMaterial, density: -5 } }, 400, { error: 'density must be more than 0 and at most 25000 kg/m³ (got -5).', field: 'density' }],
       ['materials:create', { material: { ...userMaterial, emissivity: 1.5 } }, 400, { error: 'emissivity must be more than 0 and at most 1 (got 1.5).', field: 'emissivity' }],
-      ['materials:create', { material: userMaterial, extra: 1 }, 400, { error: 'The materials:create request has no field "extra" (allowed: material).' }],
+      ['materials:create', { material: userMaterial, extra: 1 }, 400, { error: 'The materials:create request has no field "extra" (allowed: material).', field: 'extra' }],
       ['materials:import-csv', { csv: 42 }, 400, { error: 'csv must be text.', field: 'csv' }],
       ['materials:fit-conductivity', { points: [[10, 0.035]], degree: 2, minServiceTemperature: 0, maxServiceTemperature: 300 }, 400,
         { error: 'points must include at least 3 different temperatures for a degree-2 fit (got 1).', field: 'points' }],
@@ -144,7 +145,7 @@ describe('materials channels', () => {
     const project = await ok(url, 'projects:create', { fields: { name: 'Harrowgate depot, north wall', client: 'Fenwick Storage Ltd' } });
     const added = await ok(url, 'projects:add-case', {
       projectId: project.id,
-      draft: { name: 'North wall', inputs: { schemaVersion: 1, kind: 'wall', area: 40, layers: [{ materialId: material.id, thickness: 0.02 }] } },
+      draft: { name: 'North wall', inputs: wallCase([material.id], { area: 40 }) },
     });
     const usage = await ok(url, 'materials:usage', { id: material.id });
     expect(usage).toEqual([{ projectId: project.id, projectName: 'Harrowgate depot, north wall', caseId: added.id, caseName: 'North wall', inRecycleBin: false }]);
@@ -165,7 +166,7 @@ describe('projects channels', () => {
     const { url } = await serve(folder);
     const material = await ok(url, 'materials:create', { material: userMaterial });
     const project = await ok(url, 'projects:create', { fields: { name: 'Depot boiler room', engineer: 'R. Okafor', date: '2031-04-02' } });
-    await ok(url, 'projects:add-case', { projectId: project.id, draft: { name: 'Wall A', inputs: { schemaVersion: 1, kind: 'wall', layers: [{ materialId: material.id, thickness: 0.03 }] } } });
+    await ok(url, 'projects:add-case', { projectId: project.id, draft: { name: 'Wall A', inputs: wallCase([material.id]) } });
     expect((await ok(url, 'projects:rename', { id: project.id, name: 'Depot boiler room, rev B' })).name).toBe('Depot boiler room, rev B');
     expect((await ok(url, 'projects:update', { id: project.id, changes: { revision: 'B' } })).revision).toBe('B');
     const badDate = await call(url, 'projects:update', { id: project.id, changes: { date: '2031-02-30' } });

@@ -4,15 +4,16 @@ import { describe, expect, it } from 'vitest';
 import { listBackups, restoreBackup } from '../../main/storage/backups.js';
 import { openLamina } from '../../main/services/lamina-services.js';
 import { StorageError } from '../../main/storage/storage-error.js';
-import { tempDatabasePath, wallInputs } from './temp-folder.js';
+import { wallCase } from './case-fixtures.js';
+import { tempDatabasePath } from './temp-folder.js';
 
 /** A real library with one project, closed, plus a manual backup of it. */
 async function savedLibrary(): Promise<{ file: string; backup: string }> {
   const file = tempDatabasePath();
   const lamina = await openLamina(file);
-  const board = lamina.materials.create({ name: 'Site board', category: 'insulation', conductivity: { kind: 'constant', value: 0.036 } });
+  const board = lamina.materials.create({ name: 'Site board', category: 'insulation', conductivity: { kind: 'constant', value: 0.036 }, vapourResistanceFactor: 1 });
   const project = lamina.projects.create({ name: 'Kestrel Lane depot', client: 'Northwind Cold Stores' });
-  lamina.projects.addCase(project.id, { name: 'North wall', inputs: wallInputs(board.id) });
+  lamina.projects.addCase(project.id, { name: 'North wall', inputs: wallCase([board.id]) });
   const backup = (await lamina.backups.create()).file;
   lamina.close();
   return { file, backup };

@@ -1,8 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { openLamina } from '../../main/services/lamina-services.js';
 import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
-import { InvalidInputError, RefusedError } from '../../main/services/service-errors.js';
-import { tempDatabasePath, wallInputs } from './temp-folder.js';
+import { RefusedError } from '../../main/services/service-errors.js';
+import { InputError } from '../../app/index.js';
+import { wallCase } from './case-fixtures.js';
+import { tempDatabasePath } from './temp-folder.js';
 
 const board = { name: 'Northwind site board', category: 'insulation', conductivity: { kind: 'constant', value: 0.034 }, density: 35 };
 
@@ -49,7 +51,7 @@ describe('materials library', () => {
       [{ ...board, minServiceTemperature: 50, maxServiceTemperature: 20 }, 'maxServiceTemperature must be above minServiceTemperature (50 °C).'],
       [{ ...board, conductivity: { kind: 'table', points: [[50, 0.04], [10, 0.03]] } }, 'conductivity.points must have strictly increasing temperatures (point 2 is not above point 1).'],
       [{ ...board, conductivity: { kind: 'polynomial', coefficients: [0.03, 1e-4] } }, 'minServiceTemperature and maxServiceTemperature are required for a polynomial conductivity (the curve is only trusted inside that range).'],
-      [{ ...board, colour: 'red' }, 'material.colour is not a known field (allowed: name, category, conductivity, density, specificHeat, vapourResistanceFactor, equivalentAirLayerThickness, emissivity, minServiceTemperature, maxServiceTemperature, source, notes).'],
+      [{ ...board, colour: 'red' }, 'material.colour is not a known field here; allowed: name, category, conductivity, density, specificHeat, vapourResistanceFactor, equivalentAirLayerThickness, emissivity, minServiceTemperature, maxServiceTemperature, source, notes.'],
     ];
     for (const [input, message] of cases) {
       const error = (() => {
@@ -59,7 +61,7 @@ describe('materials library', () => {
           return e;
         }
       })();
-      expect(error).toBeInstanceOf(InvalidInputError);
+      expect(error).toBeInstanceOf(InputError);
       expect((error as Error).message).toBe(message);
     }
     // A polynomial that dips to zero inside the service range is refused: 0.05 - 5e-4·θ is 0 at 100 °C.
@@ -72,14 +74,14 @@ describe('materials library', () => {
 
   it('refuses to delete a material in use, or deletes it with an explicit replacement', async () => {
     const lamina = await openLamina(tempDatabasePath());
-    const mine = lamina.materials.create(board);
+    const mine = lamina.materials.create({ ...board, vapourResistanceFactor: 1 }); // μ: a wall case needs it on every layer
     const other = lamina.materials.findByName('Mineral wool board')!;
     const project = lamina.projects.create({ name: 'Quarry Street offices' });
-    const wall = lamina.projects.addCase(project.id, { name: 'East wall', inputs: wallInputs(mine.id, other.id, mine.id) });
+    const wall = lamina.projects.addCase(project.id, { name: 'East wall', inputs: wallCase([mine.id, other.id, mine.id]) });
     lamina.projects.remove(project.id); // still counts while in the recycle bin
     expect(() => lamina.materials.remove(mine.id)).toThrow('"Northwind site board" is used by 1 case(s) in project "Quarry Street offices" (in the recycle bin); choose a replacement material or remove it from those cases first.');
     lamina.projects.restore(project.id);
-    expect(() => lamina.materials.remove(mine.id, { replaceWith: mine.id })).toThrow(InvalidInputError);
+    expect(() => lamina.materials.remove(mine.id, { replaceWith: mine.id })).toThrow(InputError);
     expect(lamina.materials.remove(mine.id, { replaceWith: other.id })).toEqual({ replacedInCases: 1 });
     expect(lamina.projects.getCase(wall.id).inputs.layers.map((l) => l.materialId)).toEqual([other.id, other.id, other.id]);
     expect(lamina.materials.usage(other.id)).toHaveLength(1);

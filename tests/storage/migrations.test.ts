@@ -73,6 +73,15 @@ describe('schema migrations', () => {
         expect(lamina.materials.usage(used)).toHaveLength(1);
         expect(() => lamina.materials.remove(used)).toThrow(/is used by 1 case/);
         if (version < 2) expect(lamina.materials.list({ search: 'old board' }).map((m) => m.name).sort()).toEqual(['Old board', `old BOARD (#${used + 1})`]);
+        // The stored case predates complete checks (it has no pipe and no ambient): it opens as it was
+        // stored, replacing its material still rewrites it (envelope only), and saving it is refused.
+        const stored = opened.cases[0]!;
+        const spare = lamina.materials.create({ name: 'Harbour Road spare board', category: 'insulation', conductivity: { kind: 'constant', value: 0.04 } });
+        expect(lamina.materials.remove(used, { replaceWith: spare.id })).toEqual({ replacedInCases: 1 });
+        const replaced = lamina.projects.getCase(stored.id);
+        expect(replaced.inputs.layers[0]!.materialId).toBe(spare.id);
+        expect(() => lamina.projects.updateCase(stored.id, { inputs: replaced.inputs })).toThrow('ambient must be an object.');
+        expect(lamina.projects.getCase(stored.id)).toEqual(replaced);
       } finally {
         lamina.close();
       }

@@ -23,8 +23,3 @@ export function tempFolder(): string {
 export function tempDatabasePath(): string {
   return path.join(tempFolder(), 'lamina.sqlite');
 }
-
-/** A minimal valid case envelope using the given material ids as layers. */
-export function wallInputs(...materialIds: number[]) {
-  return { schemaVersion: 1, kind: 'wall', area: 12.5, layers: materialIds.map((materialId, i) => ({ materialId, thickness: 0.05 * (i + 1) })) };
-}

@@ -44,7 +44,7 @@ export function calculateFlatSurface(input: FlatSurfaceInput): FlatSurfaceResult
     assumptions.push('wind taken along the surface over its height (vertical) or characteristic length (horizontal)');
   }
 
-  const exchange = surfaceExchangeFor(shape, input.ambient, method, emissivity);
+  const exchange = surfaceExchangeFor(shape, input.inner, input.ambient, method, emissivity);
 
   const { engine: _engine, heatOut, ...solution } = solveStack({
     geometry: { kind: 'planar' },

@@ -211,13 +211,20 @@ export function surfaceChecks(problem: StackProblem, solution: Omit<StackSolutio
   return { dewPoint: surfaceCondensation.dewPoint, checks };
 }
 
-/** The outer film of a pipe or flat surface in its ambient conditions (convection + radiation). */
+/**
+ * The outer film of a pipe or flat surface in its ambient conditions (convection + radiation).
+ * The build-up generates no heat, so its surface lies between the coldest and hottest of the inner,
+ * air and surroundings temperatures; the film is told so, to evaluate the solve's intermediate
+ * iterates within them.
+ */
 export function surfaceExchangeFor(
   shape: OuterSurfaceShape,
+  inner: InnerCondition,
   ambient: AmbientConditions,
   method: SurfaceMethod,
   emissivity: { readonly value: number } | null,
 ): OuterSurfaceExchangeFunction {
+  const named = [inner.temperature, ambient.airTemperature, ambient.surroundingsTemperature ?? ambient.airTemperature];
   return outerSurfaceExchange({
     shape,
     exposure: ambient.exposure,
@@ -225,5 +232,6 @@ export function surfaceExchangeFor(
     airTemperature: ambient.airTemperature,
     ...(ambient.surroundingsTemperature !== undefined ? { surroundingsTemperature: ambient.surroundingsTemperature } : {}),
     ...(emissivity ? { emissivity: emissivity.value } : {}),
+    boundingTemperatures: { lowest: Math.min(...named), highest: Math.max(...named) },
   });
 }

@@ -67,7 +67,7 @@ export function calculatePipe(input: PipeInput): PipeResult {
   if (input.ambient.surroundingsTemperature === undefined) assumptions.push('surroundings (radiant) temperature taken equal to the air temperature');
   if (input.surfaceMethod === undefined) assumptions.push('outer surface coefficient from the general correlations (natural, forced and mixed convection) plus radiation');
 
-  const exchange = surfaceExchangeFor(shape, input.ambient, method, emissivity);
+  const exchange = surfaceExchangeFor(shape, input.inner, input.ambient, method, emissivity);
 
   const { engine: _engine, heatOut, ...solution } = solveStack({
     geometry: { kind: 'axisymmetric', innerRadius },

@@ -2,11 +2,11 @@ import path from 'node:path';
 import type { CliCommand, CliIO } from '../command.js';
 import { fileAccessSentence, readTextFile, writeTextFile } from '../file-access.js';
 import { resolveDatabaseLocation } from '../../storage/database-path.js';
-import { StorageError } from '../../storage/storage-error.js';
 import { openLamina, type LaminaServices } from '../../services/lamina-services.js';
 import { formatMaterialsCsv } from '../../services/material-csv.js';
 import type { Material } from '../../services/material-types.js';
-import { InvalidInputError, NotFoundError, RefusedError } from '../../services/service-errors.js';
+import { NotFoundError } from '../../services/service-errors.js';
+import { EXIT_BAD_INPUT, exitCodeOf, isMissingFile } from '../exit-code.js';
 
 /**
  * lamina materials list [--search TEXT] [--category CAT] [--origin all|built-in|user] [--json]
@@ -57,22 +57,11 @@ export async function withServices(io: CliIO, dbOption: string | undefined, work
   }
 }
 
+/** Prints a failure in one sentence; its exit code comes from exitCodeOf, like every command's. */
 export function reportError(io: CliIO, error: unknown): number {
-  if (error instanceof InvalidInputError || error instanceof NotFoundError) {
-    io.stderr(`${error.message}\n`);
-    return 2;
-  }
-  if (error instanceof RefusedError || error instanceof StorageError) {
-    io.stderr(`${error.message}\n`);
-    return 1;
-  }
-  const fileError = error as NodeJS.ErrnoException | undefined;
-  if (fileError?.code === 'ENOENT' && fileError.path) {
-    io.stderr(`${fileAccessSentence(fileError, fileError.path, 'read')}\n`);
-    return 2;
-  }
-  io.stderr(`${error instanceof Error ? error.message : String(error)}\n`);
-  return 1;
+  if (isMissingFile(error)) io.stderr(`${fileAccessSentence(error, error.path, 'read')}\n`);
+  else io.stderr(`${error instanceof Error ? error.message : String(error)}\n`);
+  return exitCodeOf(error);
 }
 
 function describe(m: Material): string {
@@ -99,7 +88,7 @@ export const materialsCommand: CliCommand = async (args, io) => {
   const parsed = parseArgs(rest, ['db', 'search', 'category', 'origin'], ['json']);
   if (typeof parsed === 'string') {
     io.stderr(`${parsed} ${USAGE}\n`);
-    return 2;
+    return EXIT_BAD_INPUT;
   }
   const db = parsed.options.get('db');
   const json = parsed.flags.has('json');
@@ -115,7 +104,7 @@ export const materialsCommand: CliCommand = async (args, io) => {
       const key = parsed.positional[0];
       if (!key) {
         io.stderr(`materials show needs a material id or name. ${USAGE}\n`);
-        return 2;
+        return EXIT_BAD_INPUT;
       }
       return withServices(io, db, ({ materials }) => {
         const material = /^\d+$/.test(key) ? materials.get(Number(key)) : materials.findByName(key);
@@ -129,14 +118,14 @@ export const materialsCommand: CliCommand = async (args, io) => {
       const file = parsed.positional[0];
       if (!file) {
         io.stderr(`materials import needs a CSV file. ${USAGE}\n`);
-        return 2;
+        return EXIT_BAD_INPUT;
       }
       return withServices(io, db, ({ materials }) => {
         const result = materials.importCsv(readTextFile(path.resolve(io.cwd, file)));
         if (!result.ok) {
           for (const p of result.problems) io.stderr(`${file} line ${p.line}: ${p.message}\n`);
           io.stderr(`Nothing was imported: ${result.problems.length} problem(s).\n`);
-          return 2;
+          return EXIT_BAD_INPUT;
         }
         io.stdout(`Imported ${result.created.length} material(s).\n`);
         return 0;
@@ -146,7 +135,7 @@ export const materialsCommand: CliCommand = async (args, io) => {
       const file = parsed.positional[0];
       if (!file) {
         io.stderr(`materials export needs a file name (or - for standard output). ${USAGE}\n`);
-        return 2;
+        return EXIT_BAD_INPUT;
       }
       return withServices(io, db, ({ materials }) => {
         const csv = materials.exportCsv(filterOf(parsed));
@@ -160,6 +149,6 @@ export const materialsCommand: CliCommand = async (args, io) => {
     }
     default:
       io.stderr(`${sub === undefined ? 'materials needs a subcommand.' : `unknown subcommand "${sub}".`} ${USAGE}\n`);
-      return 2;
+      return EXIT_BAD_INPUT;
   }
 };

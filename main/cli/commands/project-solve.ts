@@ -8,7 +8,7 @@ import { renderReportText, solveCase } from '../../../app/index.js';
 import { caseContext } from '../../cases/case-context.js';
 import type { MaterialsService } from '../../services/materials-service.js';
 import type { CliIO } from '../command.js';
-import { isInputProblem } from '../exit-code.js';
+import { EXIT_DONE, EXIT_FAILED, isInputProblem } from '../exit-code.js';
 
 interface CaseOutcome {
   readonly id: number;
@@ -44,5 +44,5 @@ export function solveProject(io: CliIO, project: Project, materials: MaterialsSe
   }
   const failed = outcomes.filter((o) => o.error);
   for (const f of failed) io.stderr(`lamina projects solve: case ${f.id} "${f.name}": ${f.error}\n`);
-  return failed.length === 0 ? 0 : 1;
+  return failed.length === 0 ? EXIT_DONE : EXIT_FAILED;
 }

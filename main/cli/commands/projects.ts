@@ -1,11 +1,11 @@
 import fs from 'node:fs';
-import { InputError } from '../../../app/base/input-error.js';
 import { readCaseJson } from '../read-case-file.js';
 import path from 'node:path';
 import type { CliCommand } from '../command.js';
 import { projectFileFromJson, projectFileToJson } from '../../services/project-file.js';
 import { parseArgs, withServices } from './materials.js';
 import { solveProject } from './project-solve.js';
+import { EXIT_BAD_INPUT, exitCodeOf, isInputProblem } from '../exit-code.js';
 
 function caseTitle(inputs: unknown): string | undefined {
   const title = typeof inputs === 'object' && inputs !== null ? (inputs as Record<string, unknown>)['title'] : undefined;
@@ -35,7 +35,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
   const parsed = parseArgs(rest, ['db', 'name', 'format', ...CREATE_FIELDS], ['json', 'deleted']);
   if (typeof parsed === 'string') {
     io.stderr(`${parsed} ${USAGE}\n`);
-    return 2;
+    return EXIT_BAD_INPUT;
   }
   const db = parsed.options.get('db');
   switch (sub) {
@@ -51,7 +51,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
       const [id, file] = parsed.positional;
       if (!id || !/^\d+$/.test(id) || !file) {
         io.stderr(`projects export needs a project id (a whole number) and a file name (or -). ${USAGE}\n`);
-        return 2;
+        return EXIT_BAD_INPUT;
       }
       return withServices(io, db, ({ projects }) => {
         const text = projectFileToJson(projects.exportProject(Number(id)));
@@ -67,7 +67,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
       const file = parsed.positional[0];
       if (!file) {
         io.stderr(`projects import needs a project file. ${USAGE}\n`);
-        return 2;
+        return EXIT_BAD_INPUT;
       }
       return withServices(io, db, ({ projects }) => {
         const result = projects.importProject(projectFileFromJson(fs.readFileSync(path.resolve(io.cwd, file), 'utf8')));
@@ -79,7 +79,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
       const name = parsed.positional[0];
       if (!name) {
         io.stderr(`projects create needs a project name. ${USAGE}\n`);
-        return 2;
+        return EXIT_BAD_INPUT;
       }
       const fields: Record<string, string> = { name };
       for (const key of CREATE_FIELDS) if (parsed.options.has(key)) fields[key] = parsed.options.get(key)!;
@@ -93,15 +93,15 @@ export const projectsCommand: CliCommand = async (args, io) => {
       const [id, file] = parsed.positional;
       if (!id || !/^\d+$/.test(id) || !file) {
         io.stderr(`projects add-case needs a project id (a whole number) and a case file. ${USAGE}\n`);
-        return 2;
+        return EXIT_BAD_INPUT;
       }
       let inputs: unknown;
       try {
         inputs = readCaseJson(file, io.cwd);
       } catch (error) {
-        if (!(error instanceof InputError)) throw error;
+        if (!isInputProblem(error)) throw error;
         io.stderr(`projects add-case: ${error.message}\n`);
-        return 2;
+        return exitCodeOf(error);
       }
       const name = parsed.options.get('name') ?? caseTitle(inputs) ?? path.basename(file, '.json');
       return withServices(io, db, ({ projects }) => {
@@ -115,12 +115,12 @@ export const projectsCommand: CliCommand = async (args, io) => {
       const format = parsed.options.get('format') ?? 'json';
       if (!id || !/^\d+$/.test(id) || (format !== 'json' && format !== 'text')) {
         io.stderr(`projects solve needs a project id (a whole number); --format is json or text. ${USAGE}\n`);
-        return 2;
+        return EXIT_BAD_INPUT;
       }
       return withServices(io, db, ({ projects, materials }) => solveProject(io, projects.open(Number(id)), materials, format));
     }
     default:
       io.stderr(`${sub === undefined ? 'projects needs a subcommand.' : `unknown subcommand "${sub}".`} ${USAGE}\n`);
-      return 2;
+      return EXIT_BAD_INPUT;
   }
 };

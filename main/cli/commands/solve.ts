@@ -4,10 +4,10 @@
  * Reads a case file (or "-" for standard input), validates it, solves it and prints the result.
  * Materials in a case file are inline, or referenced by id from the library (--db).
  */
-import { CASE_KINDS, InputError, renderReportText, solveCase, type CaseContext, type SolvedCase } from '../../../app/index.js';
+import { CASE_KINDS, renderReportText, solveCase, type CaseContext, type SolvedCase } from '../../../app/index.js';
 import { caseContext, refersToLibrary } from '../../cases/case-context.js';
 import type { CliCommand, CliIO } from '../command.js';
-import { exitCodeOf } from '../exit-code.js';
+import { EXIT_BAD_INPUT, exitCodeOf, isInputProblem } from '../exit-code.js';
 import { parseArgs, withServices } from './materials.js';
 import { readCaseJson } from '../read-case-file.js';
 
@@ -43,9 +43,9 @@ export const solveCommand: CliCommand = async (args, io) => {
   try {
     json = readCaseJson(file, io.cwd);
   } catch (error) {
-    if (!(error instanceof InputError)) throw error;
+    if (!isInputProblem(error)) throw error;
     io.stderr(`lamina solve: ${error.message}\n`);
-    return 2;
+    return exitCodeOf(error);
   }
 
   const solveWith = (context: CaseContext): number => {
@@ -66,5 +66,5 @@ export const solveCommand: CliCommand = async (args, io) => {
 
 function usage(io: CliIO, message: string): number {
   io.stderr(`lamina solve: ${message} (lamina solve --help)\n`);
-  return 2;
+  return EXIT_BAD_INPUT;
 }
