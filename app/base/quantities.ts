@@ -1,8 +1,8 @@
 /**
  * The kinds of quantity Lamina shows, each with its SI unit label and the precision a figure of
  * that kind is printed with. Values stay SI everywhere inside; a rendering (text, screen, paper)
- * looks the unit and precision up here by kind, so a heat flow reads alike in every output and a
- * later unit system converts by kind in one place.
+ * looks the unit and precision up here by kind, so a heat flow reads alike in every output, and
+ * app/base/unit-systems gives each kind its US customary unit and conversion in one place.
  *
  * Precision is common practice, no source: temperatures to 0.1 K (what surface thermometers and
  * the inputs justify), heat flows to 3 significant figures, U-values to the 2 significant figures
@@ -58,6 +58,9 @@ export const QUANTITIES = {
   energyPerLength: { unit: 'kJ/m', precision: { significant: 4 } },
   /** Volumetric heat generation. */
   heatGeneration: { unit: 'W/m³', precision: { significant: 3 } },
+  /** A material's density and specific heat capacity (library, transient layers). */
+  density: { unit: 'kg/m³', precision: { significant: 3 } },
+  specificHeat: { unit: 'J/(kg·K)', precision: { significant: 3 } },
 } as const satisfies Record<string, QuantityKind>;
 
 export type QuantityName = keyof typeof QUANTITIES;
