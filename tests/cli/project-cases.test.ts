@@ -1,13 +1,18 @@
 /**
  * Projects from the command line: create a project, store a case file whose materials are library
  * ids, and recompute it from its stored inputs (results are never stored). Real SQLite library in a
- * temporary folder; the pipe's heat flow is checked against the same case solved directly.
+ * temporary folder; the pipe's heat flow is checked against the same case solved directly. A case
+ * the engine could not solve is refused when it is added; one stored before that check (written
+ * here straight into the file) is named when the project is solved, and the others still run.
  */
 import { spawnSync } from 'node:child_process';
+import Database from 'better-sqlite3';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
+import { pipeInputs } from '../storage/case-fixtures.js';
 
 const root = path.resolve(__dirname, '..', '..');
 const cli = path.join(root, 'main', 'cli', 'lamina.mjs');
@@ -19,21 +24,18 @@ describe('lamina projects create / add-case / solve', () => {
     const r = spawnSync(process.execPath, [cli, ...args, '--db', db], { cwd: root, encoding: 'utf8' });
     return { code: r.status, stdout: r.stdout, stderr: r.stderr };
   };
-  const materials = JSON.parse(lamina('materials', 'list', '--json').stdout) as { id: number; name: string }[];
-  const idOf = (name: string) => materials.find((m) => m.name === name)!.id;
-  const pipeCase = {
-    schemaVersion: 1,
-    kind: 'pipe',
-    title: 'DN80 heating flow, boiler house (demo)',
-    pipe: { size: { series: 'steel-iso', nominal: 'DN80' }, materialId: idOf('Carbon steel pipe') },
-    inner: { kind: 'surface', temperature: 75 },
-    layers: [{ materialId: idOf('Rock wool pipe section, typical curve'), thickness: 0.04 }],
-    jacket: { materialId: idOf('Aluminium cladding, bright rolled'), thickness: 0.0006 },
-    orientation: 'horizontal',
-    ambient: { airTemperature: 15, relativeHumidity: 0.6, exposure: { kind: 'indoor' } },
-    length: 25,
-    operatingHours: 5000,
-  };
+  const materialIds = () => JSON.parse(lamina('materials', 'list', '--json').stdout) as { id: number; name: string }[];
+  const idOf = (name: string) => materialIds().find((m) => m.name === name)!.id;
+  const steel = idOf('Carbon steel pipe');
+  const pipeCase = pipeInputs(
+    { pipe: steel, insulation: [idOf('Rock wool pipe section, typical curve')], jacket: idOf('Aluminium cladding, bright rolled') },
+    {
+      title: 'DN80 heating flow, boiler house (demo)',
+      pipe: { size: { series: 'steel-iso', nominal: 'DN80' }, materialId: steel },
+      length: 25,
+      operatingHours: 5000,
+    },
+  );
 
   it('stores a case and recomputes it from its inputs, as lamina solve would', () => {
     expect(lamina('projects', 'create', 'Orrin Valley Creamery, boiler house (demo)', '--client', 'Orrin Valley Dairy Co-operative (invented)').stdout).toMatch(/^Created project 1 /);
@@ -57,10 +59,39 @@ describe('lamina projects create / add-case / solve', () => {
     expect(text.stdout).toMatch(/Heat loss per metre\s+\d+(\.\d+)? W\/m/);
   });
 
+  it('refuses a pipe case whose bare outer insulation has no emissivity when it is added, writing nothing', () => {
+    // A user material without an emissivity, as a site's own foam would be entered.
+    const csv = path.join(dir, 'foam.csv');
+    writeFileSync(csv, `${MATERIAL_CSV_HEADER.join(',')}\nKestrel site foam,insulation,0.035,,,,,,,,invented demo value,\n`);
+    expect(lamina('materials', 'import', csv).code).toBe(0);
+    const file = path.join(dir, 'bare.json');
+    writeFileSync(file, JSON.stringify(pipeInputs({ pipe: steel, insulation: [idOf('Kestrel site foam')] }, { title: 'Bare foam, no emissivity' })));
+    const refused = lamina('projects', 'add-case', '1', file);
+    expect(refused.code).toBe(2);
+    expect(refused.stderr).toBe(
+      'projects add-case: layers[0].material.emissivity is needed for the radiation from the bare insulation surface: give a value from 0 to 1, or add a jacket with an emissivity.\n',
+    );
+    expect(JSON.parse(lamina('projects', 'list', '--json').stdout)[0].caseCount).toBe(1);
+  });
+
+  it('a case stored before the complete check that no longer solves is named, the others still run, exit 1', () => {
+    const stale = { schemaVersion: 1, kind: 'pipe', length: 20, layers: [{ materialId: idOf('Kestrel site foam'), thickness: 0.05 }] };
+    const sqlite = new Database(db);
+    const now = '2024-01-01T00:00:00.000Z';
+    sqlite.prepare(`INSERT INTO cases (project_id, name, position, inputs, created_at, updated_at) VALUES (1, 'Old flow line', 1, ?, ?, ?)`).run(JSON.stringify(stale), now, now);
+    sqlite.close();
+    const solved = lamina('projects', 'solve', '1');
+    expect(solved.code).toBe(1);
+    const out = JSON.parse(solved.stdout);
+    expect(out.cases[0].result).toBeDefined();
+    expect(out.cases[1]).toMatchObject({ name: 'Old flow line', error: 'ambient must be an object.' });
+    expect(solved.stderr).toBe('lamina projects solve: case 2 "Old flow line": ambient must be an object.\n');
+  });
+
   it('stores a case file with inline materials as it is; refuses a project that does not exist', () => {
     const inline = lamina('projects', 'add-case', '1', path.join(root, 'data', 'examples', 'pipe-hot-water-plant-room.json'));
     expect(inline.code).toBe(0);
-    expect(inline.stdout).toMatch(/^Added case 2 /);
+    expect(inline.stdout).toMatch(/^Added case 3 /);
     const missing = lamina('projects', 'solve', '999');
     expect(missing.code).toBe(2);
     expect(missing.stderr.trim().split('\n')).toHaveLength(1);

@@ -11,7 +11,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import { resultsFolder, useBrowserSession } from './browser-session.js';
-import { pipeCase, wallCase } from '../storage/case-fixtures.js';
+import { pipeInputs, wallInputs } from '../storage/case-fixtures.js';
 
 const session = useBrowserSession('lamina-projects-e2e-');
 const tempFolder = session.tempFolder;
@@ -140,9 +140,9 @@ describe('projects in the browser', () => {
         minServiceTemperature: -30, maxServiceTemperature: 90, source: 'demo values for an invented site', notes: '',
       });
       const steel = services.materials.findByName('Carbon steel pipe')!;
-      services.projects.addCase(id, { name: 'Loading bay wall', inputs: wallCase([board.id], { area: 42 }) });
+      services.projects.addCase(id, { name: 'Loading bay wall', inputs: wallInputs([board.id], { area: 42 }) });
       const chilled = { inner: { kind: 'surface', temperature: 6 }, length: 36 };
-      services.projects.addCase(id, { name: 'Chilled water main', inputs: pipeCase({ pipe: steel.id, insulation: [board.id] }, chilled) });
+      services.projects.addCase(id, { name: 'Chilled water main', inputs: pipeInputs({ pipe: steel.id, insulation: [board.id] }, chilled) });
       await page.click('#project-close');
       await page.reload();
       await page.click('#view-projects');
@@ -212,13 +212,14 @@ describe('projects in the browser', () => {
       await download.saveAs(exportedPath);
       expect(download.suggestedFilename()).toMatch(/^Tallow-Quay-cold-store-phase-2.*\.json$/);
       const exported = JSON.parse(fs.readFileSync(exportedPath, 'utf8')) as { format: string; project: { name: string }; materials: { name: string }[]; cases: unknown[] };
-      expect(exported).toMatchObject({ format: 'lamina-project', project: { name: 'Tallow Quay cold store, phase 2' }, materials: [{ name: 'Tallow Quay PIR board' }] });
+      expect(exported).toMatchObject({ format: 'lamina-project', project: { name: 'Tallow Quay cold store, phase 2' } });
+      expect(exported.materials.map((m) => m.name).sort()).toEqual(['Carbon steel pipe', 'Tallow Quay PIR board']); // the pipe wall's and the insulation's
       expect(exported.cases).toHaveLength(1);
       await expect.poll(() => notice(page).textContent()).toContain(`Exported "Tallow Quay cold store, phase 2" as ${download.suggestedFilename()}`);
 
       await page.setInputFiles('#project-import', exportedPath);
       await expect.poll(() => notice(page).textContent()).toContain(
-        `Imported "Tallow Quay cold store, phase 2" from ${download.suggestedFilename()} with 1 case. Its materials: 1 already in your library (reused), 0 added to the library.`,
+        `Imported "Tallow Quay cold store, phase 2" from ${download.suggestedFilename()} with 1 case. Its materials: 2 already in your library (reused), 0 added to the library.`,
       );
       await expect.poll(() => rowNames(page, 'project-row')).toEqual(['Tallow Quay cold store, phase 2', 'Tallow Quay cold store, phase 2']);
       const imported = services.projects.list()[0]!;

@@ -11,7 +11,7 @@ import { startBrowserServer, type BrowserServer } from '../../main/server/browse
 import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
 import { API_CHANNELS } from '../../main/server/operations.js';
 import { call, ok } from './api-client.js';
-import { wallCase } from '../storage/case-fixtures.js';
+import { wallInputs } from '../storage/case-fixtures.js';
 
 const running: BrowserServer[] = [];
 const folders: string[] = [];
@@ -145,7 +145,7 @@ describe('materials channels', () => {
     const project = await ok(url, 'projects:create', { fields: { name: 'Harrowgate depot, north wall', client: 'Fenwick Storage Ltd' } });
     const added = await ok(url, 'projects:add-case', {
       projectId: project.id,
-      draft: { name: 'North wall', inputs: wallCase([material.id], { area: 40 }) },
+      draft: { name: 'North wall', inputs: wallInputs([material.id], { area: 40 }) },
     });
     const usage = await ok(url, 'materials:usage', { id: material.id });
     expect(usage).toEqual([{ projectId: project.id, projectName: 'Harrowgate depot, north wall', caseId: added.id, caseName: 'North wall', inRecycleBin: false }]);
@@ -166,7 +166,7 @@ describe('projects channels', () => {
     const { url } = await serve(folder);
     const material = await ok(url, 'materials:create', { material: userMaterial });
     const project = await ok(url, 'projects:create', { fields: { name: 'Depot boiler room', engineer: 'R. Okafor', date: '2031-04-02' } });
-    await ok(url, 'projects:add-case', { projectId: project.id, draft: { name: 'Wall A', inputs: wallCase([material.id]) } });
+    await ok(url, 'projects:add-case', { projectId: project.id, draft: { name: 'Wall A', inputs: wallInputs([material.id]) } });
     expect((await ok(url, 'projects:rename', { id: project.id, name: 'Depot boiler room, rev B' })).name).toBe('Depot boiler room, rev B');
     expect((await ok(url, 'projects:update', { id: project.id, changes: { revision: 'B' } })).revision).toBe('B');
     const badDate = await call(url, 'projects:update', { id: project.id, changes: { date: '2031-02-30' } });

@@ -7,7 +7,7 @@ import { projectsCommand } from '../../main/cli/commands/projects.js';
 import { defaultDatabasePath } from '../../main/storage/database-path.js';
 import { openLamina } from '../../main/services/lamina-services.js';
 import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
-import { wallCase } from './case-fixtures.js';
+import { wallInputs } from './case-fixtures.js';
 import { tempFolder } from './temp-folder.js';
 
 function captured(cwd: string, env: Record<string, string> = {}) {
@@ -55,7 +55,7 @@ describe('lamina materials / projects commands', () => {
     const lamina = await openLamina(path.join(cwd, 'a.sqlite'));
     const board = lamina.materials.findByName('Mineral wool board')!;
     const p = lamina.projects.create({ name: 'Larkfield school boiler room', client: 'Larkfield Trust' });
-    lamina.projects.addCase(p.id, { name: 'Wall', inputs: wallCase([board.id]) });
+    lamina.projects.addCase(p.id, { name: 'Wall', inputs: wallInputs([board.id]) });
     lamina.close();
     let c = captured(cwd);
     expect(await projectsCommand(['export', String(p.id), 'p.json', '--db', 'a.sqlite'], c.io)).toBe(0);

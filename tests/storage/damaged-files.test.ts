@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { listBackups, restoreBackup } from '../../main/storage/backups.js';
 import { openLamina } from '../../main/services/lamina-services.js';
 import { StorageError } from '../../main/storage/storage-error.js';
-import { wallCase } from './case-fixtures.js';
+import { wallInputs } from './case-fixtures.js';
 import { tempDatabasePath } from './temp-folder.js';
 
 /** A real library with one project, closed, plus a manual backup of it. */
@@ -13,7 +13,7 @@ async function savedLibrary(): Promise<{ file: string; backup: string }> {
   const lamina = await openLamina(file);
   const board = lamina.materials.create({ name: 'Site board', category: 'insulation', conductivity: { kind: 'constant', value: 0.036 }, vapourResistanceFactor: 1 });
   const project = lamina.projects.create({ name: 'Kestrel Lane depot', client: 'Northwind Cold Stores' });
-  lamina.projects.addCase(project.id, { name: 'North wall', inputs: wallCase([board.id]) });
+  lamina.projects.addCase(project.id, { name: 'North wall', inputs: wallInputs([board.id]) });
   const backup = (await lamina.backups.create()).file;
   lamina.close();
   return { file, backup };

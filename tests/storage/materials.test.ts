@@ -3,7 +3,7 @@ import { openLamina } from '../../main/services/lamina-services.js';
 import { MATERIAL_CSV_HEADER } from '../../main/services/material-csv.js';
 import { RefusedError } from '../../main/services/service-errors.js';
 import { InputError } from '../../app/index.js';
-import { wallCase } from './case-fixtures.js';
+import { wallInputs } from './case-fixtures.js';
 import { tempDatabasePath } from './temp-folder.js';
 
 const board = { name: 'Northwind site board', category: 'insulation', conductivity: { kind: 'constant', value: 0.034 }, density: 35 };
@@ -77,7 +77,7 @@ describe('materials library', () => {
     const mine = lamina.materials.create({ ...board, vapourResistanceFactor: 1 }); // μ: a wall case needs it on every layer
     const other = lamina.materials.findByName('Mineral wool board')!;
     const project = lamina.projects.create({ name: 'Quarry Street offices' });
-    const wall = lamina.projects.addCase(project.id, { name: 'East wall', inputs: wallCase([mine.id, other.id, mine.id]) });
+    const wall = lamina.projects.addCase(project.id, { name: 'East wall', inputs: wallInputs([mine.id, other.id, mine.id]) });
     lamina.projects.remove(project.id); // still counts while in the recycle bin
     expect(() => lamina.materials.remove(mine.id)).toThrow('"Northwind site board" is used by 1 case(s) in project "Quarry Street offices" (in the recycle bin); choose a replacement material or remove it from those cases first.');
     lamina.projects.restore(project.id);

@@ -3,7 +3,7 @@ import { openLamina } from '../../main/services/lamina-services.js';
 import { projectFileFromJson, projectFileToJson } from '../../main/services/project-file.js';
 import { RefusedError } from '../../main/services/service-errors.js';
 import { InputError } from '../../app/index.js';
-import { pipeCase, seedIds, wallCase } from './case-fixtures.js';
+import { pipeInputs, seedIds, wallInputs } from './case-fixtures.js';
 import { tempDatabasePath } from './temp-folder.js';
 
 // Invented demo scenario: Brightwater Engineering insulating a plant room for Halden Dairy.
@@ -16,9 +16,9 @@ describe('projects', () => {
     const seed = seedIds((name) => lamina.materials.findByName(name));
     const project = lamina.projects.create(fields);
     expect(project).toMatchObject({ ...fields, caseCount: 0, deletedAt: null, cases: [] });
-    const steamMain = lamina.projects.addCase(project.id, { name: 'Steam main', inputs: pipeCase({ pipe: seed.pipeSteel, insulation: [board.id], jacket: seed.cladding }, { length: 42 }) });
+    const steamMain = lamina.projects.addCase(project.id, { name: 'Steam main', inputs: pipeInputs({ pipe: seed.pipeSteel, insulation: [board.id], jacket: seed.cladding }, { length: 42 }) });
     expect(steamMain.inputs).toMatchObject({ pipe: { outerDiameter: 0.1143 }, length: 42 }); // fields beyond the envelope are kept as given
-    lamina.projects.addCase(project.id, { name: 'Tank wall', inputs: wallCase([board.id]) });
+    lamina.projects.addCase(project.id, { name: 'Tank wall', inputs: wallInputs([board.id]) });
     expect(lamina.projects.rename(project.id, 'Halden Dairy plant room, stage 2').name).toBe('Halden Dairy plant room, stage 2');
     const copy = lamina.projects.duplicate(project.id);
     expect(copy.name).toBe('Halden Dairy plant room, stage 2 (copy)');
@@ -41,7 +41,7 @@ describe('projects', () => {
     const lamina = await openLamina(tempDatabasePath());
     const board = lamina.materials.findByName('Mineral wool board')!;
     const p = lamina.projects.create({ name: 'Test' });
-    const wall = wallCase([board.id]);
+    const wall = wallInputs([board.id]);
     // The envelope and the material references are the service's own checks; the rest is the engine's parse.
     const bad: [unknown, string][] = [
       [{ ...wall, schemaVersion: 2 }, 'inputs.schemaVersion must be 1.'],
@@ -71,14 +71,14 @@ describe('projects', () => {
     // A user insulation without an emissivity: bare on the outside, its surface's radiation is unknown.
     const foam = lamina.materials.create({ name: 'Kestrel site foam', category: 'insulation', conductivity: { kind: 'constant', value: 0.035 } });
     const p = lamina.projects.create({ name: 'Kestrel Lane boiler house' });
-    const bare = pipeCase({ pipe: seed.pipeSteel, insulation: [foam.id] });
+    const bare = pipeInputs({ pipe: seed.pipeSteel, insulation: [foam.id] });
     const needsEmissivity =
       'layers[0].material.emissivity is needed for the radiation from the bare insulation surface: give a value from 0 to 1, or add a jacket with an emissivity.';
     expect(() => lamina.projects.addCase(p.id, { name: 'Bare run', inputs: bare })).toThrow(needsEmissivity);
     expect(lamina.projects.open(p.id).cases).toEqual([]);
     expect(lamina.materials.usage(foam.id)).toEqual([]);
     // Under a jacket the same insulation is complete; saving it without the jacket is refused and the stored case kept.
-    const clad = lamina.projects.addCase(p.id, { name: 'Clad run', inputs: pipeCase({ pipe: seed.pipeSteel, insulation: [foam.id], jacket: seed.cladding }) });
+    const clad = lamina.projects.addCase(p.id, { name: 'Clad run', inputs: pipeInputs({ pipe: seed.pipeSteel, insulation: [foam.id], jacket: seed.cladding }) });
     expect(() => lamina.projects.updateCase(clad.id, { inputs: bare })).toThrow(needsEmissivity);
     expect(lamina.projects.getCase(clad.id)).toEqual(clad);
     // A project file carrying that case is refused naming the case, and nothing of it is written.
@@ -96,7 +96,7 @@ describe('projects', () => {
     const project = home.projects.create(fields);
     const steel = home.materials.findByName('Carbon steel pipe')!;
     const warm = { inner: { kind: 'surface', temperature: 35 } }; // inside the spray foam's table
-    home.projects.addCase(project.id, { name: 'Warm return', inputs: pipeCase({ pipe: steel.id, insulation: [own.id, clash.id], jacket: builtIn.id }, warm) });
+    home.projects.addCase(project.id, { name: 'Warm return', inputs: pipeInputs({ pipe: steel.id, insulation: [own.id, clash.id], jacket: builtIn.id }, warm) });
     const text = projectFileToJson(home.projects.exportProject(project.id));
     home.close();
     expect(JSON.parse(text).materials.map((m: { name: string }) => m.name).sort()).toEqual(['Aluminium cladding, bright rolled', 'Brightwater spray foam', 'Carbon steel pipe', 'Site board']);
@@ -118,7 +118,7 @@ describe('projects', () => {
 
   it('refuses a project file whose cases refer to materials it does not carry, writing nothing', async () => {
     const lamina = await openLamina(tempDatabasePath());
-    const file = { format: 'lamina-project', formatVersion: 1, exportedAt: '', project: { name: 'P' }, materials: [], cases: [{ name: 'c', inputs: wallCase([7]) }] };
+    const file = { format: 'lamina-project', formatVersion: 1, exportedAt: '', project: { name: 'P' }, materials: [], cases: [{ name: 'c', inputs: wallInputs([7]) }] };
     expect(() => lamina.projects.importProject(file)).toThrow('cases[0].inputs.layers[0].materialId refers to material 7, which the file does not include.');
     expect(() => lamina.projects.importProject({ ...file, format: 'other' })).toThrow('format must be "lamina-project"; this is not a Lamina project file.');
     expect(() => projectFileFromJson('{nope')).toThrow(/The project file is not valid JSON/);

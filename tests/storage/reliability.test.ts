@@ -9,7 +9,7 @@ import { StorageError } from '../../main/storage/storage-error.js';
 import { MaterialsService } from '../../main/services/materials-service.js';
 import { ProjectsService } from '../../main/services/projects-service.js';
 import { openLamina } from '../../main/services/lamina-services.js';
-import { wallCase } from './case-fixtures.js';
+import { wallInputs } from './case-fixtures.js';
 import { tempDatabasePath } from './temp-folder.js';
 
 const CHILD = fileURLToPath(new URL('./fixtures/storage-child.mjs', import.meta.url));
@@ -42,7 +42,7 @@ describe('reliability on real files', () => {
     const lamina = await openLamina(file);
     const board = lamina.materials.findByName('Mineral wool board')!;
     const project = lamina.projects.create({ name: 'Source' });
-    for (let i = 0; i < 200; i++) lamina.projects.addCase(project.id, { name: `case ${i}`, inputs: wallCase([board.id, board.id]) });
+    for (let i = 0; i < 200; i++) lamina.projects.addCase(project.id, { name: `case ${i}`, inputs: wallInputs([board.id, board.id]) });
     lamina.close();
 
     const run = startChild(['duplicate-forever', file]);
