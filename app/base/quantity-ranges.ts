@@ -41,7 +41,38 @@ export const QUANTITY_RANGES = {
   openingArea: { min: 0, max: 1e6, unit: 'mm² per m or per m²' },
   /** A surface resistance given directly (ISO 6946 tabulates 0.04 to 0.17). */
   surfaceResistance: { min: 0, minExclusive: true, max: 10, unit: 'm²·K/W' },
+  /**
+   * An unventilated or ventilated air layer of a wall: from 1 mm, below which the boards touch and
+   * the gap is a contact, not an air layer (common practice, no source), to 0.3 m, the largest
+   * ISO 6946's air-layer rules cover (app/physics AIR_LAYER_MAXIMUM_THICKNESS).
+   */
+  airLayerThickness: { min: 0.001, max: 0.3, unit: 'm' },
+  /** An insulation layer, or the plate of a flat surface: a micrometre, as a wall layer, to 2 m. */
+  insulationThickness: { min: 1e-6, max: 2, unit: 'm' },
+  /** A jacket over insulation: a micrometre foil to a 20 mm sheet. */
+  jacketThickness: { min: 1e-6, max: 0.02, unit: 'm' },
+  /**
+   * A pipe wall: a micrometre, as a wall layer, up to (not including) half the largest outer
+   * diameter; the case checks it against half its own pipe's diameter as well.
+   */
+  pipeWallThickness: { min: 1e-6, max: 2.5, maxExclusive: true, unit: 'm' },
+  /**
+   * The height the air rises along a vertical flat surface, or the characteristic length (area over
+   * perimeter) of a horizontal one: from 1 cm, below which the surface is a boss or a fitting that
+   * no plate correlation describes and the film coefficient grows without bound as the length
+   * shrinks (common practice, no source), to 1 km.
+   */
+  surfaceLength: { min: 0.01, max: 1000, unit: 'm' },
+  /** The height the air rises along a vertical pipe: from 1 cm (as surfaceLength) to the longest run. */
+  pipeHeight: { min: 0.01, max: 1e6, unit: 'm' },
 } as const satisfies Record<string, NumberRange>;
 
 /** Elements a case may ask for in one layer; the engine's own limit is higher, for benchmarks. */
 export const MAX_CASE_ELEMENTS_PER_LAYER = 10_000;
+/**
+ * Elements a whole case may have, over all its layers (those it asks for and the engine's defaults
+ * for the rest): five layers at the per-layer limit. A hundred layers of 10,000 elements each
+ * solve for tens of seconds and print hundreds of megabytes of nodal results, far beyond any mesh
+ * a convergence study needs (common practice, no source).
+ */
+export const MAX_CASE_ELEMENTS = 50_000;

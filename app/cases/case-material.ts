@@ -91,8 +91,9 @@ export function resolveCaseMaterial(entry: JsonObject, field: string, resolve: M
   }
   if (hasInline) return parseInlineMaterial(entry['material'], `${field}.material`, defaultCategory);
   const id = entry['materialId'];
-  if (typeof id !== 'number' || !Number.isInteger(id) || id < 1) {
-    throw new InputError(`${field}.materialId`, `${field}.materialId must be a whole number of 1 or more (got ${shown(id)}).`);
+  // A safe integer: beyond 2^53 − 1 a number no longer names one id (the library would refuse it without the field).
+  if (typeof id !== 'number' || !Number.isSafeInteger(id) || id < 1) {
+    throw new InputError(`${field}.materialId`, `${field}.materialId must be a whole number from 1 to ${Number.MAX_SAFE_INTEGER} (got ${shown(id)}).`);
   }
   const material = resolve(id);
   if (material === undefined) {

@@ -5,7 +5,8 @@
  * since a curve fitted between 0 and 300 °C can run to zero or to thousands outside it.
  */
 import { InputError } from '../base/input-error.js';
-import { requireNumberIn } from '../base/field-checks.js';
+import { isObject, requireNumberIn } from '../base/field-checks.js';
+import { shownValue } from '../base/shown-value.js';
 import { describeRange } from '../base/number-range.js';
 import { QUANTITY_RANGES } from '../base/quantity-ranges.js';
 import { conductivityAt, type ConductivityModel } from '../fe/conductivity.js';
@@ -15,12 +16,23 @@ import { MATERIAL_LIMITS } from './material-limits.js';
 const TABLE_TEMPERATURE = MATERIAL_LIMITS.temperature;
 const MAX_TABLE_POINTS = MATERIAL_LIMITS.maxTablePoints;
 const MAX_POLYNOMIAL_TERMS = 8;
+const CONDUCTIVITY_KINDS = ['constant', 'polynomial', 'table'] as const;
 /** Samples of a polynomial between the case's lowest and highest temperature. */
 const POLYNOMIAL_SAMPLES = 64;
 
 /** Structure, then every number in its documented range. */
 export function validateConductivityModel(model: unknown, field: string): ConductivityModel {
+  // Present but neither a model nor (in a case file) a number: say what it must be, not that it is missing.
+  if (model !== undefined && model !== null && !isObject(model)) {
+    throw new InputError(
+      field,
+      `${field} must be a number in W/(m·K), ${describeRange(QUANTITY_RANGES.conductivity)}, or a conductivity model (constant, polynomial or table) (got ${shownValue(model)}).`,
+    );
+  }
   const m = model as ConductivityModel;
+  if (isObject(model) && !(CONDUCTIVITY_KINDS as readonly unknown[]).includes(model['kind'])) {
+    throw new InputError(`${field}.kind`, `${field}.kind must be "constant", "polynomial" or "table"; got ${shownValue(model['kind'])}.`);
+  }
   if (m && typeof m === 'object' && m.kind === 'polynomial' && Array.isArray(m.coefficients) && m.coefficients.length > MAX_POLYNOMIAL_TERMS) {
     throw new InputError(`${field}.coefficients`, `${field}.coefficients must list 1 to ${MAX_POLYNOMIAL_TERMS} numbers (a0 + a1·θ + …, θ in °C).`);
   }

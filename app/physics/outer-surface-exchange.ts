@@ -107,14 +107,14 @@ type ConvectionModel = (surfaceTemperature: number) => { coefficient: number; wa
 const COLDEST_EVALUATED = 0.15 - KELVIN_OFFSET;
 
 /** Where the film may be evaluated: the case's bounding temperatures and what the air properties allow. */
-interface EvaluationWindow {
+interface EvaluationRange {
   readonly lowest: number;
   readonly highest: number;
   /** The air-property limits on the surface temperature, for the warning at a converged state. */
   readonly air: { readonly lowest: number; readonly highest: number } | null;
 }
 
-function evaluationWindow(airTemperature: number, bounds: OuterSurfaceSpec['boundingTemperatures'], usesAirProperties: boolean): EvaluationWindow {
+function evaluationRange(airTemperature: number, bounds: OuterSurfaceSpec['boundingTemperatures'], usesAirProperties: boolean): EvaluationRange {
   // The correlations take air properties at the film temperature (θ_s + θ_a)/2, known only within
   // the extrapolation limits; that bounds θ_s to 2·limit − θ_a.
   const air = usesAirProperties
@@ -127,7 +127,7 @@ function evaluationWindow(airTemperature: number, bounds: OuterSurfaceSpec['boun
     highest = Math.min(highest, bounds.highest);
   }
   // Bounds beyond the air limits on both sides cannot happen for a case (air at most 200 °C, so the
-  // air allows a surface up to 600 °C); keep the window ordered all the same.
+  // air allows a surface up to 600 °C); keep the range ordered all the same.
   return { lowest: Math.min(lowest, highest), highest, air };
 }
 
@@ -136,18 +136,22 @@ function evaluationWindow(airTemperature: number, bounds: OuterSurfaceSpec['boun
  * iterates can lie hundreds of kelvin beyond the hottest named temperature (a step through a
  * steep λ(T) table), or below absolute zero, where neither the air properties nor radiation are
  * defined; refusing them would stop a solve whose answer is perfectly ordinary. So an iterate is
- * taken to the nearest temperature of the window. The film is then continuous in θ_s and constant
- * beyond the window's ends (the heat flow h·(θ_sink − θ_s) still grows with the distance), which
- * Newton's method handles, and a solution inside the window is evaluated exactly where it lies.
+ * taken to the nearest temperature of the range. The film is then continuous in θ_s and constant
+ * beyond the range's ends (the heat flow h·(θ_sink − θ_s) still grows with the distance), which
+ * Newton's method handles, and a solution inside the range is evaluated exactly where it lies.
  */
-function evaluationTemperature(surfaceTemperature: number, window: EvaluationWindow): number {
-  return Math.min(window.highest, Math.max(window.lowest, surfaceTemperature));
+function evaluationTemperature(surfaceTemperature: number, range: EvaluationRange): number {
+  return Math.min(range.highest, Math.max(range.lowest, surfaceTemperature));
 }
 
-/** The warning for a converged surface whose film temperature lies beyond the air properties' limits. */
-function airLimitWarning(surfaceTemperature: number, evaluated: number, window: EvaluationWindow, airTemperature: number): string[] {
-  const air = window.air;
-  if (!air || (surfaceTemperature >= air.lowest && surfaceTemperature <= air.highest)) return [];
+/**
+ * The warning for a surface whose film temperature lies beyond the air properties' limits, when
+ * those limits (not the case's bounding temperatures) are what it was evaluated at.
+ */
+function airLimitWarning(surfaceTemperature: number, evaluated: number, range: EvaluationRange, airTemperature: number): string[] {
+  const air = range.air;
+  const heldAtLimit = air !== null && ((surfaceTemperature > air.highest && evaluated === air.highest) || (surfaceTemperature < air.lowest && evaluated === air.lowest));
+  if (!heldAtLimit) return [];
   const film = (surfaceTemperature + airTemperature) / 2;
   return [
     `The film temperature ${film.toFixed(1)} °C is beyond the ${AIR_EXTRAPOLATION_LIMITS.minimum} to ${AIR_EXTRAPOLATION_LIMITS.maximum} °C the air properties are known for; convection was evaluated as at a surface of ${evaluated.toFixed(1)} °C.`,
@@ -334,16 +338,16 @@ export function outerSurfaceExchange(spec: OuterSurfaceSpec): OuterSurfaceExchan
       convection = correlationModel(spec.shape, airTemperature, windSpeed);
   }
 
-  const window = evaluationWindow(airTemperature, validBounds(spec.boundingTemperatures), methodKind === 'correlations');
+  const range = evaluationRange(airTemperature, validBounds(spec.boundingTemperatures), methodKind === 'correlations');
   return (surfaceTemperature) => {
     const θs = requireFinite('surfaceTemperature', surfaceTemperature, '°C');
-    const θe = evaluationTemperature(θs, window);
+    const θe = evaluationTemperature(θs, range);
     const hc = convection(θe);
     const hr = radiationCoefficient(emissivity, θe, surroundingsTemperature);
     const total = hc.coefficient + hr;
     // With no film at all (ε = 0 and no convection) the sink is the air, and the coefficient is 0.
     const ambient = total > 0 ? (hc.coefficient * airTemperature + hr * surroundingsTemperature) / total : airTemperature;
-    const warnings = θe === θs ? hc.warnings : [...airLimitWarning(θs, θe, window, airTemperature), ...hc.warnings];
+    const warnings = θe === θs ? hc.warnings : [...airLimitWarning(θs, θe, range, airTemperature), ...hc.warnings];
     return { coefficient: total, ambient, convection: hc.coefficient, radiation: hr, warnings };
   };
 }

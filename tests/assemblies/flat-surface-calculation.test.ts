@@ -88,10 +88,10 @@ describe('flat surface with the surface physics', () => {
 describe('flat surface input errors', () => {
   const cases: [string, FlatSurfaceInput, string, RegExp][] = [
     ['area 0', tankWall({ area: 0 }), 'area', /greater than 0 m²/],
-    ['negative height', tankWall({ surface: { kind: 'vertical', height: -1 } }), 'surface.height', /greater than 0 m/],
+    ['negative height', tankWall({ surface: { kind: 'vertical', height: -1 } }), 'surface.height', /at least 0\.01 and at most 1000 m/],
     ['unknown facing', tankWall({ surface: { kind: 'horizontal', facing: 'sideways' as never, characteristicLength: 1 } }), 'surface.facing', /'up', 'down'/],
     ['simplified formulas on a horizontal surface', tankWall({ surface: { kind: 'horizontal', facing: 'up', characteristicLength: 1 }, surfaceMethod: { kind: 'simplified' } }), 'surfaceMethod.kind', /no formula for a horizontal surface/],
-    ['wall thickness 0', tankWall({ wall: { material: steel, thickness: 0 } }), 'wall.thickness', /greater than 0 m/],
+    ['wall thickness 0', tankWall({ wall: { material: steel, thickness: 0 } }), 'wall.thickness', /at least 0\.000001 and at most 2 m/],
     ['relative humidity 1.2', tankWall({ ambient: { airTemperature: 5, relativeHumidity: 1.2, exposure: { kind: 'indoor' } } }), 'ambient.relativeHumidity', /0 up to 100 %/],
     ['wind below 0', tankWall({ ambient: { airTemperature: 5, relativeHumidity: 0.8, exposure: { kind: 'outdoor', windSpeed: -3 } } }), 'ambient.exposure.windSpeed', /between 0 m\/s and 60 m\/s/],
     ['jacket emissivity 1.5', tankWall({ jacket: { material: aluminium, thickness: 0.001, emissivity: 1.5 } }), 'jacket.emissivity', /between 0 and 1/],

@@ -262,7 +262,7 @@ const CROSS_FIELD_RULES: readonly CrossFieldRule[] = [
       const wall = get(json, 'pipe', 'wallThickness');
       return typeof d === 'number' && typeof wall === 'number' && !(wall < d / 2);
     },
-    refusal: /^lamina solve: pipe\.wallThickness must be greater than 0 m and less than half of pipe\.outerDiameter/,
+    refusal: /^lamina solve: pipe\.wallThickness must be at least 0\.000001 m and less than half of pipe\.outerDiameter/,
   },
   {
     // app/fe/validate.ts: at most 1e6 time steps, whatever timeStep and duration are alone.
@@ -322,55 +322,6 @@ const CROSS_FIELD_RULES: readonly CrossFieldRule[] = [
 
 const ruleUses = new Map<string, number>(CROSS_FIELD_RULES.map((r) => [r.rule, 0]));
 
-// ---------------------------------------------------------------------------------------------
-// Inputs inside the code's own documented ranges that the engine still cannot take, reported to
-// the owners of app/ (the schema follows the code's ranges, so it accepts them). Each records the
-// exact misbehaviour seen; once app/ is fixed the probe agrees again and the last test asks for
-// the entry to be removed, so this list only shrinks.
-
-interface KnownGap {
-  readonly gap: string;
-  readonly kinds: readonly string[];
-  readonly leaf: RegExp;
-  readonly values: readonly number[];
-  readonly outcome: RegExp;
-}
-
-const KNOWN_ENGINE_GAPS: readonly KnownGap[] = [
-  {
-    // app/cases/insulated/insulated-inputs.ts, pipe/pipe-input.ts and flat/flat-surface-input.ts
-    // allow any length above 0 m, and the wall's air layer any thickness above 0 m; at 1e-30 m the
-    // system is singular and the message blames the face conditions instead of the field.
-    gap: 'a 1e-30 m layer, pipe wall, jacket, air layer, height or characteristic length is refused as undetermined faces',
-    kinds: ['pipe', 'flat', 'wall'],
-    leaf: /(^|\.)(thickness|wallThickness|height|characteristicLength)$/,
-    values: [1e-30],
-    outcome: /^exit 2: lamina solve: inner and outer leave the temperature level undetermined/,
-  },
-  {
-    // One table point of an insulation at the ends of the conductivity range (1000 or 0.001 W/(m·K)
-    // beside points near 0.04) makes the outer-surface iteration of a pipe or flat surface diverge:
-    // no convergence (exit 1), or a refusal naming an internal quantity instead of the field.
-    gap: 'a conductivity table point at 0.001 or 1000 W/(m·K) in a pipe or flat insulation stops the solve',
-    kinds: ['pipe', 'flat'],
-    leaf: /\.conductivity\.points\[\d+\]\[1\]$/,
-    values: [0.001, 1000],
-    outcome: /^exit 1: lamina solve: The nonlinear solve did not converge|^exit 2: lamina solve: (surfaceTemperature must be above absolute zero|filmTemperature must be between -100 °C and 400 °C)/,
-  },
-  {
-    // ambient.airTemperature may be −100 °C, the lower end of the air-property range; an iterate of
-    // the surface temperature below the air's then leaves that range, and the refusal names the
-    // internal film temperature instead of a field of the case.
-    gap: 'ambient.airTemperature at its lower bound −100 °C is refused naming filmTemperature',
-    kinds: ['pipe', 'flat'],
-    leaf: /^ambient\.airTemperature$/,
-    values: [-100],
-    outcome: /^exit 2: lamina solve: filmTemperature must be between -100 °C and 400 °C/,
-  },
-];
-
-const gapUses = new Map<string, number>(KNOWN_ENGINE_GAPS.map((g) => [g.gap, 0]));
-
 const caseFolder = temporaryFolder('lamina-schema-ranges-');
 const writeCase = caseFileWriter(caseFolder);
 afterAll(() => rmSync(caseFolder, { recursive: true, force: true }));
@@ -398,11 +349,6 @@ describe('(b) ajv and lamina solve agree at every bound of every numeric leaf of
             ruleUses.set(excuse.rule, ruleUses.get(excuse.rule)! + 1);
             continue;
           }
-          const gap = KNOWN_ENGINE_GAPS.find((g) => g.kinds.includes(String(example['kind'])) && g.leaf.test(pathText(leaf.path)) && g.values.includes(probe.value) && g.outcome.test(outcome));
-          if (gap) {
-            gapUses.set(gap.gap, gapUses.get(gap.gap)! + 1);
-            continue;
-          }
           disagreements.push(`${where}: schema ${schemaAccepts ? 'accepts' : 'refuses'}, lamina solve ${outcome}`);
         }
       }
@@ -412,9 +358,5 @@ describe('(b) ajv and lamina solve agree at every bound of every numeric leaf of
 
   it('every cross-field exception was needed by at least one probe', () => {
     expect([...ruleUses].filter(([, uses]) => uses === 0).map(([rule]) => rule)).toEqual([]);
-  });
-
-  it('every known engine gap still reproduces (remove an entry from KNOWN_ENGINE_GAPS once app/ fixes it)', () => {
-    expect([...gapUses].filter(([, uses]) => uses === 0).map(([gap]) => gap)).toEqual([]);
   });
 });

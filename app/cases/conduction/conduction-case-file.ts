@@ -7,7 +7,7 @@
 import { InputError } from '../../fe/errors.js';
 import type { FaceCondition, Layer, SteadyProblem, TransientProblem } from '../../fe/problem.js';
 import { validateSteadyProblem, validateTransientProblem } from '../../fe/validate.js';
-import { checkConductionRanges } from './conduction-ranges.js';
+import { checkConductionRanges, checkLayerElements } from './conduction-ranges.js';
 import { isObject, rejectUnknownKeys, requireArray, requireObject, requireSchemaVersion, requireString, shown } from '../case-fields.js';
 
 export const CONDUCTION_CASE_SCHEMA_VERSION = 1;
@@ -19,6 +19,16 @@ export type ConductionCase =
 const TOP_KEYS = ['$schema', 'schemaVersion', 'kind', 'title', 'notes', 'geometry', 'layers', 'inner', 'outer', 'analysis', 'options'];
 const LAYER_KEYS = ['name', 'thickness', 'conductivity', 'density', 'specificHeat', 'heatGeneration', 'contactResistanceToNext', 'elements'];
 const ANALYSIS_KEYS = { steady: ['kind'], transient: ['kind', 'initialTemperature', 'timeStep', 'duration', 'scheme'] };
+
+/**
+ * The kind of an object the engine branches on, stated the engine's way but with the value as the
+ * user reads it (a missing kind is "nothing"), before the engine's structural checks run.
+ */
+function requireKind(value: unknown, field: string, kinds: readonly string[]): void {
+  if (!isObject(value) || kinds.includes(value['kind'] as string)) return;
+  const listed = kinds.map((k) => `"${k}"`);
+  throw new InputError(`${field}.kind`, `${field}.kind must be ${listed.slice(0, -1).join(', ')} or ${listed[listed.length - 1]}; got ${shown(value['kind'])}.`);
+}
 
 export function parseConductionCaseFile(json: unknown): ConductionCase {
   const file = requireObject(json, 'case');
@@ -32,9 +42,13 @@ export function parseConductionCaseFile(json: unknown): ConductionCase {
     const layer = requireObject(raw, `layers[${i}]`);
     rejectUnknownKeys(layer, LAYER_KEYS, `layers[${i}]`);
     if (layer['name'] !== undefined) requireString(layer['name'], `layers[${i}].name`);
+    checkLayerElements(layer, `layers[${i}]`);
+    requireKind(layer['conductivity'], `layers[${i}].conductivity`, ['constant', 'polynomial', 'table']);
     return layer as unknown as Layer;
   });
+  requireKind(file['geometry'], 'geometry', ['planar', 'axisymmetric']);
   for (const face of ['inner', 'outer'] as const) {
+    requireKind(file[face], face, ['temperature', 'flux', 'film']);
     if (isObject(file[face]) && file[face]['kind'] === 'film' && typeof file[face]['coefficient'] !== 'number') {
       throw new InputError(`${face}.coefficient`, `${face}.coefficient must be a number in W/(m²·K) in a case file.`);
     }

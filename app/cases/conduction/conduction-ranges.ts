@@ -5,7 +5,9 @@
  * system too ill-conditioned to solve.
  */
 import { requireNumberIn, requireWholeNumber } from '../../base/field-checks.js';
-import { QUANTITY_RANGES, MAX_CASE_ELEMENTS_PER_LAYER } from '../../base/quantity-ranges.js';
+import { InputError } from '../../base/input-error.js';
+import { QUANTITY_RANGES, MAX_CASE_ELEMENTS, MAX_CASE_ELEMENTS_PER_LAYER } from '../../base/quantity-ranges.js';
+import { defaultElementCount } from '../../fe/mesh.js';
 import type { FaceCondition, Layer, SteadyProblem } from '../../fe/problem.js';
 import { requireConductivityOver, validateConductivityModel } from '../../materials/conductivity-checks.js';
 import { isObject, type JsonObject } from '../case-fields.js';
@@ -38,7 +40,31 @@ function checkLayer(layer: JsonObject, field: string): void {
   if (layer['contactResistanceToNext'] !== undefined) {
     requireNumberIn(`${field}.contactResistanceToNext`, layer['contactResistanceToNext'], R.contactResistance);
   }
+}
+
+/**
+ * A layer's element count within what a case may ask for. Checked before the engine's own
+ * structural checks, whose limit (for benchmarks) is far higher and would be the one stated.
+ */
+export function checkLayerElements(layer: JsonObject, field: string): void {
   if (layer['elements'] !== undefined) requireWholeNumber(`${field}.elements`, layer['elements'], 1, MAX_CASE_ELEMENTS_PER_LAYER);
+}
+
+/** The elements of the whole case (asked for, or the engine's default for the layer) within MAX_CASE_ELEMENTS. */
+function checkTotalElements(problem: SteadyProblem, transient: boolean): void {
+  const order = problem.options?.order ?? 2;
+  let position = problem.geometry.kind === 'planar' ? 0 : problem.geometry.innerRadius;
+  let total = 0;
+  for (const layer of problem.layers) {
+    total += layer.elements ?? defaultElementCount(problem.geometry, layer, position, order, transient ? 'transient' : 'steady');
+    position += layer.thickness;
+  }
+  if (total > MAX_CASE_ELEMENTS) {
+    throw new InputError(
+      'layers',
+      `layers ask for ${total} elements in all, but a case may have at most ${MAX_CASE_ELEMENTS} (and at most ${MAX_CASE_ELEMENTS_PER_LAYER} in one layer); give fewer elements.`,
+    );
+  }
 }
 
 /**
@@ -49,6 +75,7 @@ export function checkConductionRanges(problem: SteadyProblem, analysis: JsonObje
   const geometry = problem.geometry as unknown as JsonObject;
   if (geometry['kind'] === 'axisymmetric') requireNumberIn('geometry.innerRadius', geometry['innerRadius'], R.innerRadius);
   problem.layers.forEach((layer, i) => checkLayer(layer as unknown as JsonObject, `layers[${i}]`));
+  checkTotalElements(problem, analysis['kind'] === 'transient');
   checkFace(problem.inner, 'inner');
   checkFace(problem.outer, 'outer');
   const named = [...faceTemperatures(problem.inner), ...faceTemperatures(problem.outer)];

@@ -2,7 +2,9 @@
  * The flat kind: an insulated flat surface (duct side, tank wall or roof, equipment casing), per m²
  * and for the area, with the same surface checks as a pipe.
  */
+import type { JsonObject } from '../../base/field-checks.js';
 import type { CaseKind } from '../case-kind.js';
+import { requireInsulatedConductivities } from '../insulated/insulated-conductivity-span.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
 import { withOperationDefaults } from '../insulated/operation-defaults.js';
 import { calculateFlatSurface, type FlatSurfaceResult } from './flat-surface-calculation.js';
@@ -16,6 +18,7 @@ export const flatKind: CaseKind<FlatSurfaceInput, FlatSurfaceResult> = {
   parse(json, context) {
     const { json: complete, assumptions } = withOperationDefaults(json, { length: false });
     const input = parseFlatCaseFile(complete, context.resolveMaterial);
+    requireInsulatedConductivities(complete as JsonObject, input, input.wall ? { entry: 'wall', material: input.wall.material } : null);
     if (methodNeedsEmissivity(input.surfaceMethod ?? { kind: 'correlations' })) outerSurfaceEmissivity(input.layers, input.jacket);
     return { title: input.title ?? 'Flat surface', input, assumptions };
   },

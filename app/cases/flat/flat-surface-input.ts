@@ -4,10 +4,11 @@
  * (the tank or duct plate), insulation layers (inside first), an optional jacket, and the
  * orientation of the outer surface. Field names match the flat case file.
  */
+import { requireNumberIn } from '../../base/field-checks.js';
+import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { requireOneOf } from '../../physics/input-checks.js';
 import type { MaterialLayer } from '../insulated/layer-build.js';
 import {
-  INPUT_LIMITS,
   requireAboveAtMost,
   requireObjectField,
   validateAmbient,
@@ -40,24 +41,22 @@ export interface FlatSurfaceInput extends InsulatedSurfaceInput {
 
 /** m², largest area accepted. */
 export const MAX_FLAT_AREA = 1e6;
-/** m, largest height or characteristic length accepted. */
-export const MAX_FLAT_LENGTH = 1000;
 
 export function validateFlatSurfaceInput(input: unknown): asserts input is FlatSurfaceInput {
   requireObjectField('input', input, 'a flat-surface calculation input');
   const f = input as FlatSurfaceInput;
-  if (f.wall !== undefined) validateMaterialLayer('wall', f.wall, INPUT_LIMITS.layerThickness);
+  if (f.wall !== undefined) validateMaterialLayer('wall', f.wall, QUANTITY_RANGES.insulationThickness);
   validateInnerCondition('inner', f.inner);
   validateInsulationLayers('layers', f.layers);
   if (f.jacket !== undefined) validateJacket('jacket', f.jacket);
   requireObjectField('surface', f.surface, "the surface orientation: { kind: 'vertical', height } or { kind: 'horizontal', facing, characteristicLength }");
   const kind = requireOneOf('surface.kind', f.surface.kind, ['vertical', 'horizontal'] as const);
   if (kind === 'vertical') {
-    requireAboveAtMost('surface.height', (f.surface as { height: unknown }).height, 0, MAX_FLAT_LENGTH, 'm');
+    requireNumberIn('surface.height', (f.surface as { height: unknown }).height, QUANTITY_RANGES.surfaceLength);
   } else {
     const s = f.surface as { facing: unknown; characteristicLength: unknown };
     requireOneOf('surface.facing', s.facing, ['up', 'down'] as const);
-    requireAboveAtMost('surface.characteristicLength', s.characteristicLength, 0, MAX_FLAT_LENGTH, 'm');
+    requireNumberIn('surface.characteristicLength', s.characteristicLength, QUANTITY_RANGES.surfaceLength);
   }
   validateAmbient('ambient', f.ambient);
   if (f.surfaceMethod !== undefined) validateSurfaceMethod('surfaceMethod', f.surfaceMethod, kind === 'horizontal');

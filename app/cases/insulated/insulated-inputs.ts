@@ -4,6 +4,9 @@
  * InputError whose sentence names the field path and the allowed range, before the engine runs.
  * All values SI, temperatures in °C, relative humidity a fraction 0..1.
  */
+import { requireNumberIn } from '../../base/field-checks.js';
+import type { NumberRange } from '../../base/number-range.js';
+import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
 import { validateConductivity } from '../../fe/validate.js';
 import { MATERIAL_CATEGORIES, type MaterialProperties } from '../../materials/material-properties.js';
@@ -34,7 +37,6 @@ export interface JacketInput extends MaterialLayer {
   readonly emissivity?: number;
 }
 
-/** Limits of the accepted inputs; beyond them the engine's physics is not meant to be used. */
 /** What a pipe and a flat surface share: the insulation build-up, its conditions and its use. */
 export interface InsulatedSurfaceInput {
   /** Free text for reports; not used by the calculation. */
@@ -52,6 +54,10 @@ export interface InsulatedSurfaceInput {
   readonly touchLimit?: number;
 }
 
+/**
+ * Limits of the accepted inputs; beyond them the engine's physics is not meant to be used. Lengths
+ * (layers, jacket, pipe wall, heights) take their ranges from QUANTITY_RANGES (app/base).
+ */
 export const INPUT_LIMITS = {
   /** °C, process side (cryogenic to high-temperature lines). */
   innerTemperature: [-270, 1000],
@@ -61,10 +67,6 @@ export const INPUT_LIMITS = {
   innerCoefficient: [0, 1e6],
   /** m/s */
   windSpeed: [0, 60],
-  /** m, each insulation layer or wall. */
-  layerThickness: [0, 2],
-  /** m, a jacket is a thin sheet. */
-  jacketThickness: [0, 0.02],
   /** Number of insulation layers. */
   layerCount: [1, 20],
   /** h per year (366 days at most). */
@@ -150,11 +152,11 @@ export function validateAmbient(field: string, ambient: unknown): void {
   }
 }
 
-export function validateMaterialLayer(field: string, layer: unknown, [min, max]: readonly [number, number]): void {
+export function validateMaterialLayer(field: string, layer: unknown, thickness: NumberRange): void {
   requireObjectField(field, layer, 'a layer with a material and a thickness');
   const l = layer as MaterialLayer;
   validateMaterial(`${field}.material`, l.material);
-  requireAboveAtMost(`${field}.thickness`, l.thickness, min, max, 'm');
+  requireNumberIn(`${field}.thickness`, l.thickness, thickness);
 }
 
 export function validateInsulationLayers(field: string, layers: unknown): void {
@@ -162,11 +164,11 @@ export function validateInsulationLayers(field: string, layers: unknown): void {
   if (!Array.isArray(layers) || layers.length < min || layers.length > max) {
     throw new InputError(field, `${field} must list ${min} to ${max} insulation layers, inside first.`);
   }
-  layers.forEach((layer, i) => validateMaterialLayer(`${field}[${i}]`, layer, INPUT_LIMITS.layerThickness));
+  layers.forEach((layer, i) => validateMaterialLayer(`${field}[${i}]`, layer, QUANTITY_RANGES.insulationThickness));
 }
 
 export function validateJacket(field: string, jacket: unknown): void {
-  validateMaterialLayer(field, jacket, INPUT_LIMITS.jacketThickness);
+  validateMaterialLayer(field, jacket, QUANTITY_RANGES.jacketThickness);
   const e = (jacket as JacketInput).emissivity;
   if (e !== undefined) requireInRange(`${field}.emissivity`, e, 0, 1);
 }

@@ -3,6 +3,8 @@
  * The field names match the pipe case file (app/cases/pipe-case-file.ts), so an error names the
  * same path in both. Radial layer order: pipe wall, insulation layers (inside first), jacket.
  */
+import { requireNumberIn } from '../../base/field-checks.js';
+import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
 import type { MaterialProperties } from '../../materials/material-properties.js';
 import { requireOneOf } from '../../physics/input-checks.js';
@@ -37,7 +39,7 @@ export interface PipeInput extends InsulatedSurfaceInput {
 
 /** m; largest pipe outer diameter accepted. */
 export const MAX_PIPE_DIAMETER = 5;
-/** m; longest run (and largest vertical height) accepted. */
+/** m; longest run accepted (a vertical pipe's height: QUANTITY_RANGES.pipeHeight). */
 export const MAX_RUN_LENGTH = 1e6;
 
 /**
@@ -53,7 +55,8 @@ export const DEFAULT_SURFACE_METHOD: SurfaceMethod = { kind: 'correlations' };
 /** The height used for a vertical pipe, and how it was chosen. */
 export function verticalPipeHeight(input: Pick<PipeInput, 'height' | 'length'>): { height: number; note: string } {
   if (input.height !== undefined) return { height: input.height, note: `height of the vertical pipe as given: ${input.height} m` };
-  const height = Math.min(input.length, VERTICAL_PIPE_DEFAULT_HEIGHT_CAP);
+  // A run shorter than the smallest height a correlation takes is still a pipe of that height to the air.
+  const height = Math.max(QUANTITY_RANGES.pipeHeight.min, Math.min(input.length, VERTICAL_PIPE_DEFAULT_HEIGHT_CAP));
   return {
     height,
     note: `height of the vertical pipe for convection taken as ${height} m: the run length capped at ${VERTICAL_PIPE_DEFAULT_HEIGHT_CAP} m (one storey; common practice, no source)`,
@@ -65,11 +68,11 @@ export function validatePipeInput(input: unknown): asserts input is PipeInput {
   const p = input as PipeInput;
   requireObjectField('pipe', p.pipe, 'the pipe: outerDiameter, wallThickness and material');
   const d = requireAboveAtMost('pipe.outerDiameter', p.pipe.outerDiameter, 0, MAX_PIPE_DIAMETER, 'm');
-  const wall = requireAboveAtMost('pipe.wallThickness', p.pipe.wallThickness, 0, Infinity, 'm');
+  const wall = requireNumberIn('pipe.wallThickness', p.pipe.wallThickness, QUANTITY_RANGES.pipeWallThickness);
   if (!(wall < d / 2)) {
     throw new InputError(
       'pipe.wallThickness',
-      `pipe.wallThickness must be greater than 0 m and less than half of pipe.outerDiameter (${d / 2} m) (got ${wall}).`,
+      `pipe.wallThickness must be at least ${QUANTITY_RANGES.pipeWallThickness.min} m and less than half of pipe.outerDiameter (${d / 2} m) (got ${wall}).`,
     );
   }
   validateMaterial('pipe.material', p.pipe.material);
@@ -79,7 +82,7 @@ export function validatePipeInput(input: unknown): asserts input is PipeInput {
   const orientation = requireOneOf('orientation', p.orientation, ['horizontal', 'vertical'] as const);
   if (p.height !== undefined) {
     if (orientation !== 'vertical') throw new InputError('height', `height applies only to a vertical pipe; remove it or set orientation to 'vertical'.`);
-    requireAboveAtMost('height', p.height, 0, MAX_RUN_LENGTH, 'm');
+    requireNumberIn('height', p.height, QUANTITY_RANGES.pipeHeight);
   }
   validateAmbient('ambient', p.ambient);
   if (p.surfaceMethod !== undefined) validateSurfaceMethod('surfaceMethod', p.surfaceMethod, false);

@@ -3,7 +3,9 @@
  * and the surface checks (condensation, personnel protection, service temperature) on the solved
  * result.
  */
+import type { JsonObject } from '../../base/field-checks.js';
 import type { CaseKind } from '../case-kind.js';
+import { requireInsulatedConductivities } from '../insulated/insulated-conductivity-span.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
 import { withOperationDefaults } from '../insulated/operation-defaults.js';
 import { calculatePipe, type PipeResult } from './pipe-calculation.js';
@@ -22,6 +24,7 @@ export const pipeKind: CaseKind<PipeCase, PipeResult> = {
     const sized = resolvePipeSizeInCase(json, context.pipeSizes);
     const { json: complete, assumptions } = withOperationDefaults(sized.json, { length: true });
     const input = parsePipeCaseFile(complete, context.resolveMaterial);
+    requireInsulatedConductivities(complete as JsonObject, input, { entry: 'pipe', material: input.pipe.material });
     // Radiation needs the outer surface's emissivity: refuse a case without it now, not at the solve.
     if (methodNeedsEmissivity(input.surfaceMethod ?? DEFAULT_SURFACE_METHOD)) outerSurfaceEmissivity(input.layers, input.jacket);
     return { title: input.title ?? 'Pipe', input: { ...input, pipeSize: sized.size }, assumptions };

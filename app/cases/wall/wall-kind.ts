@@ -4,10 +4,12 @@
  * condensation at the design condition and, with a monthly climate, over a year. Each thermal
  * state is solved once and shared by the checks (wall-analysis.ts).
  */
+import { isObject } from '../../base/field-checks.js';
+import { requireConductivitiesOver, type CaseMaterialUse } from '../case-conductivity-span.js';
 import type { CaseKind } from '../case-kind.js';
 import { analyseWall, validateWallCase, type WallAnalysis } from './wall-analysis.js';
 import { parseWallCaseFile } from './wall-case-file.js';
-import type { WallInput } from './wall-input.js';
+import { isAirLayer, type WallInput } from './wall-input.js';
 import { wallReport } from './wall-report.js';
 
 export const wallKind: CaseKind<WallInput, WallAnalysis> = {
@@ -15,6 +17,7 @@ export const wallKind: CaseKind<WallInput, WallAnalysis> = {
   summary: 'a wall or roof build-up: U-value, temperatures, mould and condensation checks',
   parse(json, context) {
     const input = parseWallCaseFile(json, context.resolveMaterial);
+    requireWallConductivities(json, input);
     validateWallCase(input);
     return { title: input.name ?? 'Wall or roof', input, assumptions: [] };
   },
@@ -26,3 +29,14 @@ export const wallKind: CaseKind<WallInput, WallAnalysis> = {
     return wallReport(parsed.input, solved.result);
   },
 };
+
+/** Every material layer over the span of the inside and outside temperatures, at design and in every climate month. */
+function requireWallConductivities(json: unknown, input: WallInput): void {
+  const raw = isObject(json) && Array.isArray(json['layers']) ? json['layers'] : [];
+  const uses = input.layers.flatMap((layer, i): CaseMaterialUse[] =>
+    isAirLayer(layer) ? [] : [{ entry: `layers[${i}]`, raw: raw[i], material: layer.material }],
+  );
+  const months = input.moisture?.climate?.months ?? [];
+  const temperatures = [input.inside, input.outside, ...months.flatMap((m) => [m.inside, m.outside])].map((c) => c.temperature);
+  requireConductivitiesOver(uses, temperatures);
+}

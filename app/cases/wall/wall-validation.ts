@@ -6,7 +6,7 @@ import classTable from '../../../data/physics/humidity-classes.json' with { type
 import { requireNumberIn } from '../../base/field-checks.js';
 import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
-import { AIR_LAYER_MAXIMUM_THICKNESS, airLayerVentilation, HEAT_FLOW_DIRECTIONS } from '../../physics/index.js';
+import { airLayerVentilation, HEAT_FLOW_DIRECTIONS } from '../../physics/index.js';
 import type { MonthlyClimate } from '../../checks/monthly-climate.js';
 import { isAirLayer, type AirCondition, type WallInput } from './wall-input.js';
 
@@ -79,10 +79,7 @@ export function validateWallInput(input: WallInput): void {
     const f = `layers[${i}]`;
     if (!layer || typeof layer !== 'object') throw new InputError(f, `${f} must be a material layer or an air layer.`);
     if (isAirLayer(layer)) {
-      const d = positive(`${f}.thickness`, layer.thickness, 'm');
-      if (d > AIR_LAYER_MAXIMUM_THICKNESS) {
-        throw new InputError(`${f}.thickness`, `${f}.thickness must be greater than 0 m and at most ${AIR_LAYER_MAXIMUM_THICKNESS} m for an air layer (got ${d}).`);
-      }
+      requireNumberIn(`${f}.thickness`, layer.thickness, QUANTITY_RANGES.airLayerThickness);
       if (!(VENTILATIONS as readonly unknown[]).includes(layer.ventilation)) {
         throw new InputError(`${f}.ventilation`, `${f}.ventilation must be one of ${VENTILATIONS.map((v) => `'${v}'`).join(', ')} (got ${shown(layer.ventilation)}).`);
       }

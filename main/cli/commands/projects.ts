@@ -105,9 +105,16 @@ export const projectsCommand: CliCommand = async (args, io) => {
       }
       const name = parsed.options.get('name') ?? caseTitle(inputs) ?? path.basename(file, '.json');
       return withServices(io, db, ({ projects }) => {
-        const added = projects.addCase(Number(id), { name, inputs });
-        io.stdout(`Added case ${added.id} "${added.name}" to project ${id}.\n`);
-        return 0;
+        try {
+          const added = projects.addCase(Number(id), { name, inputs });
+          io.stdout(`Added case ${added.id} "${added.name}" to project ${id}.\n`);
+          return 0;
+        } catch (error) {
+          // A case the service refuses (an unknown kind, a bad field) reads like a file the command refused.
+          if (!isInputProblem(error)) throw error;
+          io.stderr(`projects add-case: ${error.message}\n`);
+          return exitCodeOf(error);
+        }
       });
     }
     case 'solve': {
