@@ -5,12 +5,13 @@ import type { Material, MaterialInput } from './material-types.js';
 import { validateMaterialInput } from './material-validation.js';
 import { shownValue } from '../../app/base/shown-value.js';
 import { InputError } from '../../app/index.js';
+import { MATERIAL_CSV_HEADER } from '../../app/api/material-csv-header.js';
 
 /**
  * The materials CSV format (seed files in data/materials and user import/export).
  *
- * Header row, exactly these columns in this order; the unit of each column is part of its name
- * and values are SI:
+ * Header row, exactly these columns in this order (MATERIAL_CSV_HEADER, in app/api so the renderer
+ * can show it); the unit of each column is part of its name and values are SI:
  *   name, category, conductivity [W/(m.K)], density [kg/m3], specific heat [J/(kg.K)], mu [-],
  *   sd [m], emissivity [-], min service temperature [C], max service temperature [C], source, notes
  * The conductivity cell is one of
@@ -20,10 +21,7 @@ import { InputError } from '../../app/index.js';
  * mu may be `inf` for a vapour-tight material. An empty cell means "not given". A point is the
  * decimal separator.
  */
-export const MATERIAL_CSV_HEADER = [
-  'name', 'category', 'conductivity [W/(m.K)]', 'density [kg/m3]', 'specific heat [J/(kg.K)]', 'mu [-]', 'sd [m]',
-  'emissivity [-]', 'min service temperature [C]', 'max service temperature [C]', 'source', 'notes',
-] as const;
+export { MATERIAL_CSV_HEADER };
 
 export type { CsvProblem };
 

@@ -5,15 +5,18 @@
  */
 import type { CsvProblem, Material, MaterialCategory, MaterialOrigin } from '../../../app/api/contract.js';
 import { fieldOf, laminaApi, messageOf } from '../bridge/lamina-api.js';
+import { freeCopyName } from './copy-name.js';
 import { draftFieldOf, draftOf, emptyDraft, readDraft, type DraftError, type MaterialDraft } from './material-draft.js';
 
 export type Notice = { readonly kind: 'done' | 'refused'; readonly text: string };
 
 export interface Editor {
-  /** undefined while creating a new material. */
+  /** undefined while creating a new material (from blank or as a copy). */
   readonly id: number | undefined;
   /** The name when editing began, for the heading (the name box may be changed). */
   readonly originalName: string;
+  /** The material a new one was copied from; the copy exists only once saved. */
+  readonly copiedFrom?: string;
   draft: MaterialDraft;
   /** Shown once the person has tried to save, so a half-typed form is not covered in red. */
   showErrors: boolean;
@@ -78,25 +81,31 @@ export class MaterialsLibrary {
     this.editor = undefined;
   }
 
-  /** A built-in is never edited in place: a user copy is made and opened in the form. */
+  /**
+   * A built-in is never edited in place: its values open in the form as a new material named
+   * "<name> (copy)", which is created only when saved, so a cancelled copy leaves nothing behind.
+   * The names already taken are asked for first, so the draft's name is one that can be saved.
+   */
   async duplicate(material: Material): Promise<void> {
     try {
-      const copy = await laminaApi().materials.duplicate({ id: material.id });
-      await this.reload();
-      this.startEdit(copy);
-      this.done(`Made "${copy.name}", a copy you can edit.`);
+      const copyName = `${material.name} (copy)`;
+      const similar = await laminaApi().materials.list({ search: copyName, origin: 'all' });
+      const draft = { ...draftOf(material), name: freeCopyName(copyName, similar.map((m) => m.name)) };
+      this.editor = { id: undefined, originalName: '', copiedFrom: material.name, draft, showErrors: false, serverError: undefined };
+      this.notice = undefined;
     } catch (error) {
       this.refuse(error);
     }
   }
 
-  async save(): Promise<void> {
+  /** Returns whether the material was saved; when not, the form or the notice says why. */
+  async save(): Promise<boolean> {
     const editor = this.editor;
-    if (!editor) return;
+    if (!editor) return false;
     editor.showErrors = true;
     editor.serverError = undefined;
     const reading = readDraft(editor.draft);
-    if (!reading.ok) return;
+    if (!reading.ok) return false;
     try {
       const saved = editor.id === undefined
         ? await laminaApi().materials.create({ material: reading.input })
@@ -104,10 +113,12 @@ export class MaterialsLibrary {
       this.editor = undefined;
       this.done(`Saved "${saved.name}".`);
       await this.reload();
+      return true;
     } catch (error) {
       const field = draftFieldOf(fieldOf(error));
       if (field) editor.serverError = { field, message: messageOf(error) };
       else this.refuse(error);
+      return false;
     }
   }
 
