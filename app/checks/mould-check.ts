@@ -135,31 +135,22 @@ export function assessMould(
     return { factor: temperatureFactor(surface, c.inside.temperature, c.outside.temperature), surface };
   };
   const atMould = factorAt(design.mould, solvedSurface.mould);
-  const atCond = factorAt(design.condensation, solvedSurface.condensation);
-  const iMould = design.mould;
-  const iCond = design.condensation;
+  const criterion = (check: 'mould' | 'surface-condensation-inside', limit: number, index: number | null, at: typeof atMould, minimum: (c: SurfaceHumidityCondition) => number | null) =>
+    verdictFor(check, limit, at?.factor ?? null, index === null ? null : conditions[index]!, index === null ? null : minimum(conditions[index]!), source);
   return {
     temperatureFactor: atMould?.factor ?? null,
     insideSurfaceResistance,
     insideSurfaceTemperature: atMould?.surface ?? null,
     conditions,
-    designIndexMould: iMould,
-    designIndexCondensation: iCond,
-    mould: verdictFor(
-      'mould',
-      MOULD_SURFACE_HUMIDITY_LIMIT,
-      atMould?.factor ?? null,
-      iMould === null ? null : conditions[iMould]!,
-      iMould === null ? null : conditions[iMould]!.minimumFactorMould,
-      source,
-    ),
-    surfaceCondensation: verdictFor(
+    designIndexMould: design.mould,
+    designIndexCondensation: design.condensation,
+    mould: criterion('mould', MOULD_SURFACE_HUMIDITY_LIMIT, design.mould, atMould, (c) => c.minimumFactorMould),
+    surfaceCondensation: criterion(
       'surface-condensation-inside',
       CONDENSATION_SURFACE_HUMIDITY_LIMIT,
-      atCond?.factor ?? null,
-      iCond === null ? null : conditions[iCond]!,
-      iCond === null ? null : conditions[iCond]!.minimumFactorCondensation,
-      source,
+      design.condensation,
+      factorAt(design.condensation, solvedSurface.condensation),
+      (c) => c.minimumFactorCondensation,
     ),
   };
 }

@@ -6,6 +6,7 @@ import type { JsonObject } from '../../base/field-checks.js';
 import type { CaseKind } from '../case-kind.js';
 import { requireInsulatedConductivities } from '../insulated/insulated-conductivity-span.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
+import { insulatedSolvedParts } from '../insulated/insulated-solved-parts.js';
 import { withOperationDefaults } from '../insulated/operation-defaults.js';
 import { calculateFlatSurface, type FlatSurfaceResult } from './flat-surface-calculation.js';
 import { parseFlatCaseFile } from './flat-case-file.js';
@@ -23,9 +24,7 @@ export const flatKind: CaseKind<FlatSurfaceInput, FlatSurfaceResult> = {
     return { title: input.title ?? 'Flat surface', input, assumptions };
   },
   solve({ input, assumptions }) {
-    const result = calculateFlatSurface(input);
-    const checks = [result.checks.surfaceCondensation, result.checks.personnelProtection, result.checks.serviceTemperature];
-    return { result, checks, warnings: result.warnings, assumptions: [...assumptions, ...result.assumptions] };
+    return insulatedSolvedParts(calculateFlatSurface(input), assumptions);
   },
   report(parsed, solved) {
     return flatReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions });

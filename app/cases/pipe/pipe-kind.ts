@@ -7,6 +7,7 @@ import type { JsonObject } from '../../base/field-checks.js';
 import type { CaseKind } from '../case-kind.js';
 import { requireInsulatedConductivities } from '../insulated/insulated-conductivity-span.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
+import { insulatedSolvedParts } from '../insulated/insulated-solved-parts.js';
 import { withOperationDefaults } from '../insulated/operation-defaults.js';
 import { calculatePipe, type PipeResult } from './pipe-calculation.js';
 import { parsePipeCaseFile } from './pipe-case-file.js';
@@ -30,9 +31,7 @@ export const pipeKind: CaseKind<PipeCase, PipeResult> = {
     return { title: input.title ?? 'Pipe', input: { ...input, pipeSize: sized.size }, assumptions };
   },
   solve({ input, assumptions }) {
-    const result = calculatePipe(input);
-    const checks = [result.checks.surfaceCondensation, result.checks.personnelProtection, result.checks.serviceTemperature];
-    return { result, checks, warnings: result.warnings, assumptions: [...assumptions, ...result.assumptions] };
+    return insulatedSolvedParts(calculatePipe(input), assumptions);
   },
   report(parsed, solved) {
     return pipeReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions });
