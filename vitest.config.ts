@@ -1,6 +1,8 @@
+import { svelte } from '@sveltejs/vite-plugin-svelte';
 import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
+  plugins: [svelte({ configFile: false, compilerOptions: { runes: true } })],
   test: {
     include: ['tests/**/*.test.ts'],
     environment: 'node',

@@ -4,11 +4,12 @@
  * sections, the energy balance that proves the solve, then assumptions, warnings, sources and the
  * cautions. Plain words and aligned columns, no markup; paragraphs wrap at TEXT_WIDTH. Charts are
  * drawn by the screen and paper renderings; here a chart points to the table that holds its
- * figures, or, when no table does, prints its series as a short table.
+ * figures, or, when no table does, prints its series as a short table. A cross-section points to
+ * the table of its layers.
  */
 import type { CheckVerdict } from '../checks/check-result.js';
 import { formatQuantity, formatQuantityNumber, quantityUnit } from './format-quantity.js';
-import type { CaseReport, ReportBlock, ReportCell, ReportChart, ReportFigure, ReportTable, ReportVerdict } from './report-model.js';
+import type { CaseReport, ReportBlock, ReportCell, ReportChart, ReportCrossSection, ReportFigure, ReportTable, ReportVerdict } from './report-model.js';
 
 export const TEXT_WIDTH = 100;
 
@@ -55,6 +56,7 @@ function blocksLines(blocks: readonly ReportBlock[]): string[] {
     if (block.kind === 'figures') lines.push(...figureLines(block.figures, '  '));
     else if (block.kind === 'table') lines.push(...tableLines(block.table));
     else if (block.kind === 'chart') lines.push(...chartLines(block.chart));
+    else if (block.kind === 'cross-section') lines.push(...crossSectionLines(block.crossSection));
     else lines.push(...block.paragraphs.flatMap((p) => wrap(p, '  ')));
   });
   return lines;
@@ -114,6 +116,11 @@ function chartLines(chart: ReportChart): string[] {
       }));
   const markers = (chart.markers ?? []).map((m) => `    marked at ${categories ? (categories[m.x] ?? String(m.x)) : formatQuantity(m.x, chart.x.quantity)}: ${m.label}`);
   return [...tables.flatMap((t, i) => [...(i > 0 ? [''] : []), ...tableLines(t)]), ...markers];
+}
+
+/** A cross-section is a picture of figures a table of the report already lists: point to that table. */
+function crossSectionLines(section: ReportCrossSection): string[] {
+  return wrap(`Cross-section "${section.title}": drawn on screen and in the printed report; the table "${section.tabulatedIn}" lists its layers.`, '  ');
 }
 
 /** Words of `text` in lines of at most TEXT_WIDTH characters, the first after `first`, the rest after `rest`. */

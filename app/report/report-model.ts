@@ -6,6 +6,7 @@
  */
 import type { QuantityName } from '../base/quantities.js';
 import type { CheckVerdict } from '../checks/check-result.js';
+import type { MaterialCategory } from '../materials/material-properties.js';
 
 /** One number a person reads, with what it is. `value` null prints as "—" (not applicable). */
 export interface ReportFigure {
@@ -52,6 +53,31 @@ export interface ReportChart {
   readonly tabulatedIn?: string;
 }
 
+/** One layer of a cross-section, inside to outside. */
+export interface ReportCrossSectionLayer {
+  readonly name: string;
+  /** Decides the layer's fill in a drawing. */
+  readonly category: MaterialCategory;
+  /** m */
+  readonly thickness: number;
+}
+
+/**
+ * The build-up as a picture to scale: bands of a plane element, or concentric rings round a
+ * pipe's bore. The renderings draw it from these numbers alone.
+ */
+export type ReportCrossSection = {
+  readonly title: string;
+  readonly layers: readonly ReportCrossSectionLayer[];
+  /**
+   * °C at the inner face, at each interface and at the outer face: one more than the layers.
+   * Null where the calculation gives none (layers outside a well ventilated air layer).
+   */
+  readonly temperatures: readonly (number | null)[];
+  /** Title of the table in the same report that lists these layers; a text rendering points to it. */
+  readonly tabulatedIn: string;
+} & ({ readonly geometry: 'plane' } | { readonly geometry: 'cylinder'; /** m, the radius of the bore inside the first layer */ readonly innerRadius: number });
+
 export interface ReportVerdict {
   readonly check: string;
   readonly title: string;
@@ -66,6 +92,7 @@ export type ReportBlock =
   | { readonly kind: 'figures'; readonly figures: readonly ReportFigure[] }
   | { readonly kind: 'table'; readonly table: ReportTable }
   | { readonly kind: 'chart'; readonly chart: ReportChart }
+  | { readonly kind: 'cross-section'; readonly crossSection: ReportCrossSection }
   | { readonly kind: 'paragraphs'; readonly paragraphs: readonly string[] };
 
 export interface ReportSection {

@@ -70,6 +70,24 @@ function expectSoundReport(report: CaseReport, checks: readonly CheckResult[]): 
   return text;
 }
 
+/**
+ * The build-up section's cross-section: the same layers, thicknesses and face temperatures as the
+ * solved result, and a pointer to a table of the same report that lists them.
+ */
+function expectCrossSection(report: CaseReport, sectionId: string, layers: readonly { thickness: number }[], temperatures: readonly (number | null)[]) {
+  const section = report.sections.find((s) => s.id === sectionId)!;
+  const blocks = section.blocks.filter((b) => b.kind === 'cross-section');
+  expect(blocks).toHaveLength(1);
+  const drawing = blocks[0]!.kind === 'cross-section' ? blocks[0]!.crossSection : undefined;
+  expect(drawing!.layers.map((l) => l.thickness)).toEqual(layers.map((l) => l.thickness));
+  expect(drawing!.temperatures).toEqual(temperatures);
+  const tables = report.sections.flatMap((s) => s.blocks.flatMap((b) => (b.kind === 'table' ? [b.table.title] : [])));
+  expect(tables).toContain(drawing!.tabulatedIn);
+  return drawing!;
+}
+
+const faceTemperatures = (layers: readonly { innerTemperature: number; outerTemperature: number }[]) => [layers[0]!.innerTemperature, ...layers.map((l) => l.outerTemperature)];
+
 const figure = (report: CaseReport, label: string | RegExp) => {
   const found = report.keyFigures.find((f) => (typeof label === 'string' ? f.label === label : label.test(f.label)));
   expect(found, `key figure ${String(label)}`).toBeDefined();
@@ -96,6 +114,10 @@ describe('pipe reports', () => {
     expect(report.verdicts[2]!.margin).toMatch(/^\d+\.\d K (below the upper|above the lower) service limit of /);
     expect(report.energyBalance.relativeResidual).toBe(result.energyBalance.relativeResidual);
     expect(text).not.toMatch(/allowed −|− to/);
+    // Rings round the bore: the pipe wall's inner radius, then the pipe wall, insulation and jacket by material category.
+    const drawing = expectCrossSection(report, 'build-up', result.layers, faceTemperatures(result.layers));
+    expect(drawing.geometry === 'cylinder' && drawing.innerRadius).toBe(input.pipe.outerDiameter / 2 - input.pipe.wallThickness);
+    expect(drawing.layers.map((l) => l.category)).toEqual([input.pipe.material, ...input.layers.map((l) => l.material), ...(input.jacket ? [input.jacket.material] : [])].map((m) => m.category));
   });
 
   it('the steam main is judged against the upper service limit of its rock wool', () => {
@@ -122,6 +144,9 @@ describe('flat-surface reports', () => {
     expect(figure(report, /^Energy (lost|gained) per year$/)).toBe(Math.abs(result.annualEnergy));
     expect(figure(report, 'Thermal resistance of the layers')).toBe(result.layerResistance);
     expectSoundReport(report, [result.checks.surfaceCondensation, result.checks.personnelProtection, result.checks.serviceTemperature]);
+    const drawing = expectCrossSection(report, 'build-up', result.layers, faceTemperatures(result.layers));
+    expect(drawing.geometry).toBe('plane');
+    expect(drawing.layers.map((l) => l.category)).toEqual([...(input.wall ? [input.wall.material] : []), ...input.layers.map((l) => l.material), ...(input.jacket ? [input.jacket.material] : [])].map((m) => m.category));
   });
 });
 
@@ -179,6 +204,12 @@ describe('wall reports', () => {
     expect(text).toContain('The mould and inside-surface condensation checks use R_si = 0.250 m²·K/W');
     expect(report.verdicts[0]!.margin).toMatch(/^\d\.\d{3} (above|below) the required temperature factor$/);
     if (analysis.interstitialMonthly) expect(report.sections.map((s) => s.id)).toContain('monthly');
+    // Every layer in the picture, counted or not; a face without a counted layer on either side has no temperature.
+    const faces = [...w.layers.map((l, i) => l.innerTemperature ?? w.layers[i - 1]?.outerTemperature ?? null), w.layers[w.layers.length - 1]!.outerTemperature];
+    const drawing = expectCrossSection(report, 'layers', w.layers, faces);
+    expect(drawing.geometry).toBe('plane');
+    expect(drawing.temperatures[0]).toBe(w.insideSurfaceTemperature);
+    expect(drawing.layers.map((l) => l.category)).toEqual(input.layers.map((l) => ('material' in l ? l.material.category : 'air-layer')));
   });
 
   it('the humidity class provenance moves from the verdicts to the sources', () => {

@@ -35,6 +35,20 @@ const report: CaseReport = {
         },
         { kind: 'paragraphs', paragraphs: ['One short paragraph.'] },
         {
+          kind: 'cross-section',
+          crossSection: {
+            title: 'To scale',
+            geometry: 'cylinder',
+            innerRadius: 0.0243,
+            layers: [
+              { name: 'pipe wall', category: 'pipe', thickness: 0.0029 },
+              { name: 'insulation', category: 'insulation', thickness: 0.03 },
+            ],
+            temperatures: [80, 79.9, 31.25],
+            tabulatedIn: 'Layers',
+          },
+        },
+        {
           kind: 'chart',
           chart: {
             title: 'Temperature',
@@ -95,6 +109,9 @@ describe('renderReportText', () => {
         '    insulation            30.0            —',
         '',
         '  One short paragraph.',
+        '',
+        '  Cross-section "To scale": drawn on screen and in the printed report; the table "Layers" lists its',
+        '  layers.',
         '',
         '  Chart "Temperature": drawn on screen and in the printed report; the table "Layers" lists its',
         '  figures.',

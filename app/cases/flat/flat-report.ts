@@ -44,6 +44,8 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
     },
     { label: 'Thermal resistance of the layers', value: result.layerResistance, quantity: 'thermalResistance', note: 'without the surface films' },
   ];
+  // In the order of the solved layers: wall, insulation layers, jacket.
+  const materials = [...(input.wall ? [input.wall.material] : []), ...input.layers.map((l) => l.material), ...(input.jacket ? [input.jacket.material] : [])];
   const s = input.surface;
   const orientation: ReportFigure[] =
     s.kind === 'vertical'
@@ -57,18 +59,14 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
     verdicts,
     sections: [
       conditionsSection(input, [{ label: 'Area of the surface', value: input.area, quantity: 'area' }, ...orientation]),
-      buildUpSection(result),
+      buildUpSection(result, materials, { geometry: 'plane' }),
       temperaturesSection(result, { positionLabel: 'distance from the inner surface', shownPosition: (x) => x }),
       surfaceSection(result),
     ],
     energyBalance: { ...result.energyBalance, quantity: 'heatFlux' },
     assumptions: insulatedAssumptions(extras.assumptions ?? result.assumptions),
     warnings: result.warnings.map(asSentence),
-    sources: insulatedSources(
-      input,
-      [...(input.wall ? [input.wall.material] : []), ...input.layers.map((l) => l.material), ...(input.jacket ? [input.jacket.material] : [])],
-      convectionOf(input),
-    ),
+    sources: insulatedSources(input, materials, convectionOf(input)),
     cautions: distinctCautions(verdicts),
   };
 }

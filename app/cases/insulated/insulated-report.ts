@@ -1,6 +1,6 @@
 /**
  * The report parts an insulated pipe and an insulated flat surface share: the build-up and
- * temperature tables, the outer surface's heat transfer, the temperature chart, the verdicts of
+ * temperature tables, the cross-section picture, the outer surface's heat transfer, the temperature chart, the verdicts of
  * the three surface checks with their margins in words, the conditions, and the sources. Each is
  * a pure function of the case's input and its solved result; the pipe and flat reports add their
  * own headline figures and subject line.
@@ -13,7 +13,7 @@ import type { MaterialProperties } from '../../materials/material-properties.js'
 import { asSentence } from '../../report/as-sentence.js';
 import { formatQuantity } from '../../report/format-quantity.js';
 import { temperatureMarginPhrase } from '../../report/margin-phrase.js';
-import type { ReportFigure, ReportSection, ReportTable, ReportVerdict } from '../../report/report-model.js';
+import type { ReportCrossSection, ReportFigure, ReportSection, ReportTable, ReportVerdict } from '../../report/report-model.js';
 import { reportVerdict } from '../../report/report-verdicts.js';
 import type { InsulatedSurfaceInput } from './insulated-inputs.js';
 import type { LayerTemperatures, StackSolution } from './insulated-solve.js';
@@ -41,9 +41,23 @@ export function layerLabel(layer: LayerTemperatures, all: readonly LayerTemperat
   return insulation.length === 1 ? 'insulation' : `insulation layer ${insulation.indexOf(layer) + 1}`;
 }
 
-export function buildUpSection(result: InsulatedResult): ReportSection {
+/** The shape of the cross-section picture: a plane build-up, or rings round a pipe's bore (m). */
+export type CrossSectionShape = { readonly geometry: 'plane' } | { readonly geometry: 'cylinder'; readonly innerRadius: number };
+
+const BUILD_UP_TABLE = "Build-up, inside to outside; λ at each layer's mean temperature";
+
+/** `materials` are the stack's materials in the order of `result.layers` (they give each layer its category). */
+export function buildUpSection(result: InsulatedResult, materials: readonly MaterialProperties[], shape: CrossSectionShape): ReportSection {
+  const layers = result.layers;
+  const crossSection: ReportCrossSection = {
+    title: 'Build-up to scale',
+    ...shape,
+    layers: layers.map((l, i) => ({ name: `${layerLabel(l, layers)}: ${l.material}`, category: materials[i]!.category, thickness: l.thickness })),
+    temperatures: [layers[0]!.innerTemperature, ...layers.map((l) => l.outerTemperature)],
+    tabulatedIn: BUILD_UP_TABLE,
+  };
   const table: ReportTable = {
-    title: "Build-up, inside to outside; λ at each layer's mean temperature",
+    title: BUILD_UP_TABLE,
     columns: [
       { label: 'Layer' },
       { label: 'Material' },
@@ -59,7 +73,14 @@ export function buildUpSection(result: InsulatedResult): ReportSection {
       { value: l.meanTemperature, quantity: 'temperature' },
     ]),
   };
-  return { id: 'build-up', heading: 'Build-up', blocks: [{ kind: 'table', table }] };
+  return {
+    id: 'build-up',
+    heading: 'Build-up',
+    blocks: [
+      { kind: 'table', table },
+      { kind: 'cross-section', crossSection },
+    ],
+  };
 }
 
 export function temperaturesSection(result: InsulatedResult, geometry: InsulatedGeometry): ReportSection {

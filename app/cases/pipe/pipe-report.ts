@@ -46,6 +46,8 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
     },
   ];
   const size = input.pipeSize ?? null;
+  // In the order of the solved layers: pipe wall, insulation layers, jacket.
+  const materials = [input.pipe.material, ...input.layers.map((l) => l.material), ...(input.jacket ? [input.jacket.material] : [])];
   return {
     kind: 'pipe',
     title: extras.title ?? input.title ?? 'Insulated pipe',
@@ -57,7 +59,7 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
         { label: 'Length of the run', value: input.length, quantity: 'length' },
         ...(result.height !== null ? [{ label: 'Height for convection on the vertical pipe', value: result.height, quantity: 'length' as const }] : []),
       ]),
-      buildUpSection(result),
+      buildUpSection(result, materials, { geometry: 'cylinder', innerRadius: result.layers[0]!.innerPosition }),
       temperaturesSection(result, { positionLabel: 'radius', shownPosition: (r) => r }),
       surfaceSection(result),
       {
@@ -81,7 +83,7 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
     warnings: result.warnings.map(asSentence),
     sources: [
       ...(size ? [asSentence(`Pipe size ${sizeName(size)} from the ${size.series} table: ${size.source}`)] : []),
-      ...insulatedSources(input, [input.pipe.material, ...input.layers.map((l) => l.material), ...(input.jacket ? [input.jacket.material] : [])], convectionOf(input)),
+      ...insulatedSources(input, materials, convectionOf(input)),
     ],
     cautions: distinctCautions(verdicts),
   };

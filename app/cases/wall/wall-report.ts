@@ -12,7 +12,7 @@ import saturationFormulas from '../../../data/physics/saturation-formulas.json' 
 import { numberAsGiven } from '../../base/number-text.js';
 import { asSentence } from '../../report/as-sentence.js';
 import { formatQuantity } from '../../report/format-quantity.js';
-import type { CaseReport, ReportCell, ReportSection, ReportTable } from '../../report/report-model.js';
+import type { CaseReport, ReportCell, ReportCrossSection, ReportSection, ReportTable } from '../../report/report-model.js';
 import { distinctCautions } from '../../report/report-verdicts.js';
 import type { WallAnalysis } from './wall-analysis.js';
 import { isAirLayer, type WallInput } from './wall-input.js';
@@ -36,7 +36,7 @@ export function wallReport(input: WallInput, analysis: WallAnalysis): CaseReport
       { label: `Heat flow through the ${numberAsGiven(w.area)} m²`, value: w.heatFlow, quantity: 'heatFlow' },
     ],
     verdicts,
-    sections: [conditionsSection(input, analysis), layersSection(analysis), surfaceResistanceSection(input, analysis), mouldSection(analysis), interstitialSection(analysis), ...(monthly ? [monthly] : [])],
+    sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis), mouldSection(analysis), interstitialSection(analysis), ...(monthly ? [monthly] : [])],
     energyBalance: { ...w.energyBalance, quantity: 'heatFlux' },
     assumptions: assumptionsOf(input, analysis),
     warnings: [],
@@ -78,7 +78,7 @@ function conditionsSection(input: WallInput, a: WallAnalysis): ReportSection {
   };
 }
 
-function layersSection(a: WallAnalysis): ReportSection {
+function layersSection(input: WallInput, a: WallAnalysis): ReportSection {
   const w = a.wall;
   const r = (value: number | null): ReportCell => ({ value, quantity: 'thermalResistance' });
   const blank = (quantity: 'thickness' | 'conductivity' | 'temperature'): ReportCell => ({ value: null, quantity });
@@ -118,6 +118,7 @@ function layersSection(a: WallAnalysis): ReportSection {
     heading: 'Layers and temperatures at the design condition',
     blocks: [
       { kind: 'table', table },
+      { kind: 'cross-section', crossSection: crossSectionOf(input, w.layers) },
       ...(w.layers.some((l) => l.kind === 'air-layer')
         ? [{ kind: 'paragraphs' as const, paragraphs: ['An air layer shows no λ: its R is the ISO 6946 thermal resistance of the air layer.'] }]
         : []),
@@ -133,6 +134,24 @@ function layersSection(a: WallAnalysis): ReportSection {
         },
       },
     ],
+  };
+}
+
+/**
+ * Every layer in the picture, counted or not (cladding outside a well ventilated air layer is
+ * still there); a face gets the temperature of the counted layer it bounds, none where neither is.
+ */
+function crossSectionOf(input: WallInput, layers: WallAnalysis['wall']['layers']): ReportCrossSection {
+  const last = layers[layers.length - 1]!;
+  return {
+    title: 'Layers to scale',
+    geometry: 'plane',
+    layers: layers.map((l) => {
+      const given = input.layers[l.index]!;
+      return { name: l.name, category: isAirLayer(given) ? 'air-layer' : given.material.category, thickness: l.thickness };
+    }),
+    temperatures: [...layers.map((l, i) => l.innerTemperature ?? layers[i - 1]?.outerTemperature ?? null), last.outerTemperature],
+    tabulatedIn: LAYER_TABLE,
   };
 }
 
