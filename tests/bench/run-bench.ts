@@ -7,6 +7,7 @@
  *  2. time per unknown from 1e3 to 1e6 nodes (linear growth shows as a flat column);
  *  3. the band solver against ml-matrix's dense LU on the same tridiagonal systems (n = 250, 500, 1000).
  */
+import { execFileSync } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -67,43 +68,33 @@ const pipe: SteadyProblem = {
 console.log(`Lamina solver benchmark — Node ${process.version}, ${new Date().toISOString()}\n`);
 
 // 0. Every example through solveCase (parse, solve, checks, report), against the 3-layer constant
-// conduction example measured in the same run. Targets: pipe and flat at most 4×, walls at most 8×.
-// The machine may be busy with other work: batches of the baseline and the case alternate, and the
-// ratio reported is the median of the per-pair ratios, so a slow spell slows both sides alike.
+// conduction example, targets: pipe and flat at most 4×, walls at most 8×. Each timing runs in a
+// process of its own (case-timing.ts): in one shared process the order of the cases changes their
+// times (compiled code and garbage left by the case before). Baseline and case alternate three
+// times and the medians are compared, so a busy spell of the machine slows both alike.
 {
-  const examplesDir = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', '..', 'data', 'examples');
+  const here = path.dirname(fileURLToPath(import.meta.url));
+  const examplesDir = path.resolve(here, '..', '..', 'data', 'examples');
+  const timing = path.join(here, 'case-timing.ts');
+  const tsx = path.resolve(here, '..', '..', 'node_modules', 'tsx', 'dist', 'cli.mjs');
+  const timeOf = (file: string) => Number(execFileSync(process.execPath, [tsx, timing, path.join(examplesDir, file)], { encoding: 'utf8' }));
   const context = caseContext(null);
-  const load = (file: string) => JSON.parse(readFileSync(path.join(examplesDir, file), 'utf8')) as unknown;
-  const baseline = load('conduction-cold-store-wall.json');
-  const batch = (json: unknown, runs: number) => {
-    const t0 = performance.now();
-    for (let i = 0; i < runs; i++) solveCase(json, context);
-    return (performance.now() - t0) / runs;
-  };
-  const pairedRatio = (json: unknown) => {
-    for (let i = 0; i < 50; i++) solveCase(json, context);
-    const ratios: number[] = [];
-    const times: number[] = [];
-    for (let pair = 0; pair < 25; pair++) {
-      const base = batch(baseline, 40);
-      const ms = batch(json, 40);
-      ratios.push(ms / base);
-      times.push(ms);
-    }
-    return { ratio: median(ratios), ms: median(times) };
-  };
-  for (let i = 0; i < 200; i++) solveCase(baseline, context);
-  console.log('0. Cases through solveCase, against the 3-layer constant conduction example (conduction-cold-store-wall)');
-  console.log(`   baseline ${fmt(batch(baseline, 400))}`);
+  const baselineFile = 'conduction-cold-store-wall.json';
+  console.log('0. Cases through solveCase, each in its own process, against the 3-layer constant conduction example (conduction-cold-store-wall)');
   console.log('   example                                    median      ratio  target   iterations / solves');
   for (const file of readdirSync(examplesDir).filter((f) => f.endsWith('.json')).sort()) {
-    const json = load(file);
-    const solved = solveCase(json, context);
-    const { ratio, ms } = pairedRatio(json);
+    const solved = solveCase(JSON.parse(readFileSync(path.join(examplesDir, file), 'utf8')), context);
+    const baseline: number[] = [];
+    const own: number[] = [];
+    for (let round = 0; round < 3; round++) {
+      baseline.push(timeOf(baselineFile));
+      own.push(timeOf(file));
+    }
+    const ratio = median(own) / median(baseline);
     const target = solved.kind === 'wall' ? 8 : solved.kind === 'conduction' ? null : 4;
     const r = solved.result as { iterations?: number; solves?: number };
     const work = solved.kind === 'wall' ? `${r.solves} engine solve(s)` : r.iterations !== undefined ? `${r.iterations} iteration(s)` : '';
-    console.log(`   ${file.padEnd(42)} ${fmt(ms).padStart(9)}   ${ratio.toFixed(1).padStart(6)}×  ${target === null ? '    –' : `≤ ${target}×`.padStart(5)}   ${work}`);
+    console.log(`   ${file.padEnd(42)} ${fmt(median(own) / 1000).padStart(9)}   ${ratio.toFixed(1).padStart(6)}×  ${target === null ? '    –' : `≤ ${target}×`.padStart(5)}   ${work}`);
   }
   console.log('');
 }
