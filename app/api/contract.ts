@@ -12,6 +12,7 @@ import type { BackupInfo, DatabaseStatus, RestoreResult } from './backup-types.j
 import type {
   ConductivityFit, CsvImportResult, Material, MaterialFilter, MaterialInput, MaterialUsage,
 } from './material-types.js';
+import type { PipeSize } from '../cases/pipe/pipe-sizes.js';
 import type { CaseDraft, Project, ProjectCase, ProjectFields, ProjectSummary } from './project-types.js';
 
 export type * from './backup-types.js';
@@ -31,6 +32,8 @@ type Id = { readonly id: number };
 export interface ApiChannels {
   'app:info': { readonly request: NoFields; readonly response: AppInfo };
   'database:status': { readonly request: NoFields; readonly response: DatabaseStatus };
+  /** The pipe and tube size tables (data/pipe-sizes), for the case editor and for solving named sizes in the page. */
+  'pipe-sizes:list': { readonly request: NoFields; readonly response: readonly PipeSize[] };
 
   'materials:list': { readonly request: MaterialFilter; readonly response: readonly Material[] };
   'materials:get': { readonly request: Id; readonly response: Material };
@@ -110,6 +113,7 @@ export type ApiCall<C extends ApiChannel> = NoFields extends ApiRequest<C>
 export interface LaminaApi {
   appInfo: ApiCall<'app:info'>;
   databaseStatus: ApiCall<'database:status'>;
+  pipeSizes: ApiCall<'pipe-sizes:list'>;
   materials: {
     list: ApiCall<'materials:list'>;
     get: ApiCall<'materials:get'>;

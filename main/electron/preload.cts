@@ -23,6 +23,7 @@ async function invoke<C extends ApiChannel>(channel: C, request: ApiRequest<C> |
 const api: LaminaApi = {
   appInfo: (request) => invoke('app:info', request),
   databaseStatus: (request) => invoke('database:status', request),
+  pipeSizes: (request) => invoke('pipe-sizes:list', request),
   materials: {
     list: (request) => invoke('materials:list', request),
     get: (request) => invoke('materials:get', request),

@@ -5,6 +5,7 @@
  * transports behave the same. A refusal is one sentence naming the field; describeFailure turns
  * any expected failure into the contract's ApiError.
  */
+import { pipeSizeCatalogue } from '../pipe-sizes/pipe-size-catalogue.js';
 import type { ApiChannel, ApiChannels, ApiError, ApiResponse } from '../../app/api/contract.js';
 import { MATERIAL_LIMITS } from '../../app/api/material-limits.js';
 import { MATERIAL_CATEGORIES, MATERIAL_ORIGINS, type MaterialFilter } from '../../app/api/material-types.js';
@@ -25,7 +26,7 @@ export type OperationHandlers = {
 
 /** Every channel, for loops that register handlers or routes (checked against the contract below). */
 export const API_CHANNELS = [
-  'app:info', 'database:status',
+  'app:info', 'database:status', 'pipe-sizes:list',
   'materials:list', 'materials:get', 'materials:create', 'materials:update', 'materials:duplicate', 'materials:remove',
   'materials:usage', 'materials:import-csv', 'materials:export-csv', 'materials:fit-conductivity',
   'projects:list', 'projects:list-recycle-bin', 'projects:open', 'projects:create', 'projects:update', 'projects:rename',
@@ -63,6 +64,10 @@ export function createOperations(context: OperationContext): OperationHandlers {
     'app:info': async (request) => {
       requireNoFields('app:info', request);
       return { name: context.name, version: context.version };
+    },
+    'pipe-sizes:list': async (request) => {
+      requireNoFields('pipe-sizes:list', request);
+      return pipeSizeCatalogue();
     },
     'database:status': async (request) => {
       requireNoFields('database:status', request);

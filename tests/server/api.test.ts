@@ -57,6 +57,18 @@ const userMaterial: MaterialInput = {
 
 const csvHeader = MATERIAL_CSV_HEADER.join(',');
 
+describe('pipe sizes channel', () => {
+  it('answers the size tables of data/pipe-sizes; refuses fields it does not take', async () => {
+    const { url } = await serve(tempFolder());
+    const sizes = await ok(url, 'pipe-sizes:list', {});
+    // ISO 4200 / EN 10220 series 1 outside diameter of DN100: 114.3 mm (from memory, as the table says).
+    expect(sizes.find((s) => s.series === 'steel-iso' && s.nominal === 'DN100')?.outerDiameter).toBeCloseTo(0.1143, 10);
+    expect(new Set(sizes.map((s) => s.series))).toEqual(new Set(['steel-iso', 'steel-asme', 'copper-en1057', 'copper-astm-b88', 'plastic-metric']));
+    const refused = await call(url, 'pipe-sizes:list', { series: 'steel-iso' });
+    expect(refused.status).toBe(400);
+  });
+});
+
 describe('materials channels', () => {
   it('lists, searches and filters the built-in library', async () => {
     const { url } = await serve(tempFolder());

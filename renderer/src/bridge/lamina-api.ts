@@ -46,6 +46,7 @@ function call<C extends ApiChannel>(channel: C) {
 const httpApi: LaminaApi = {
   appInfo: call('app:info'),
   databaseStatus: call('database:status'),
+  pipeSizes: call('pipe-sizes:list'),
   materials: {
     list: call('materials:list'),
     get: call('materials:get'),
