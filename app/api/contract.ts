@@ -77,6 +77,8 @@ export interface ApiChannels {
     readonly response: ProjectCase;
   };
   'projects:remove-case': { readonly request: { readonly caseId: number }; readonly response: null };
+  /** Puts the case at `position` (0 = first) among its project's cases; the others keep their order. */
+  'projects:move-case': { readonly request: { readonly caseId: number; readonly position: number }; readonly response: Project };
   /** The project as one self-contained file (JSON text) and a suggested file name. */
   'projects:export-file': { readonly request: Id; readonly response: { readonly fileName: string; readonly text: string } };
   'projects:import-file': {
@@ -140,6 +142,7 @@ export interface LaminaApi {
     addCase: ApiCall<'projects:add-case'>;
     updateCase: ApiCall<'projects:update-case'>;
     removeCase: ApiCall<'projects:remove-case'>;
+    moveCase: ApiCall<'projects:move-case'>;
     exportProject: ApiCall<'projects:export-file'>;
     importProject: ApiCall<'projects:import-file'>;
   };

@@ -50,6 +50,7 @@ const api: LaminaApi = {
     addCase: (request) => invoke('projects:add-case', request),
     updateCase: (request) => invoke('projects:update-case', request),
     removeCase: (request) => invoke('projects:remove-case', request),
+    moveCase: (request) => invoke('projects:move-case', request),
     exportProject: (request) => invoke('projects:export-file', request),
     importProject: (request) => invoke('projects:import-file', request),
   },

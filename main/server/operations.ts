@@ -31,7 +31,7 @@ export const API_CHANNELS = [
   'materials:usage', 'materials:import-csv', 'materials:export-csv', 'materials:fit-conductivity',
   'projects:list', 'projects:list-recycle-bin', 'projects:open', 'projects:create', 'projects:update', 'projects:rename',
   'projects:duplicate', 'projects:remove', 'projects:restore', 'projects:empty-recycle-bin', 'projects:add-case',
-  'projects:update-case', 'projects:remove-case', 'projects:export-file', 'projects:import-file',
+  'projects:update-case', 'projects:remove-case', 'projects:move-case', 'projects:export-file', 'projects:import-file',
   'backups:list', 'backups:create', 'backups:restore',
 ] as const satisfies readonly ApiChannel[];
 // A channel in the contract but missing from the list above fails to compile here.
@@ -173,6 +173,13 @@ export function createOperations(context: OperationContext): OperationHandlers {
       lib().projects.removeCase(requireId(fields('projects:remove-case', request, ['caseId'])['caseId'], 'caseId'));
       return null;
     },
+    'projects:move-case': async (request) => {
+      const r = fields('projects:move-case', request, ['caseId', 'position']);
+      const caseId = requireId(r['caseId'], 'caseId');
+      // The upper end depends on the project's cases: the service checks it.
+      const position = requirePosition(r['position'], 'position');
+      return lib().projects.moveCase(caseId, position);
+    },
     'projects:export-file': async (request) => {
       const id = requireId(fields('projects:export-file', request, ['id'])['id'], 'id');
       const file = lib().projects.exportProject(id);
@@ -252,6 +259,14 @@ function materialFilter(channel: ApiChannel, request: unknown): MaterialFilter {
 function projectFields(value: unknown, field: string): Record<string, unknown> {
   if (!isPlainObject(value)) throw new InputError(field, `${field} must be an object of project fields.`);
   rejectUnknownKeys(value, PROJECT_FIELDS, field);
+  return value;
+}
+
+/** A place in a list: a whole number from 0 (the service knows the list's length). */
+function requirePosition(value: unknown, field: string): number {
+  if (typeof value !== 'number' || !Number.isSafeInteger(value) || value < 0) {
+    throw new InputError(field, `${field} must be a whole number from 0 (the first place).`);
+  }
   return value;
 }
 

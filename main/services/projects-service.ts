@@ -190,6 +190,30 @@ export class ProjectsService {
     });
   }
 
+  /**
+   * Puts a case at `position` (0 = first) among its project's cases, the others keeping their
+   * order, and stores every case's place as 0, 1, 2, … so positions stay dense after removals.
+   */
+  moveCase(caseId: number, position: number): Project {
+    const checkedId = requireId(caseId, 'caseId');
+    if (typeof position !== 'number' || !Number.isSafeInteger(position) || position < 0) {
+      throw new InputError('position', 'position must be a whole number from 0 (the first place).');
+    }
+    return inWriteTransaction(this.context, () => {
+      const project = this.openEditable(this.getCase(checkedId).projectId);
+      const last = project.cases.length - 1;
+      if (position > last) {
+        throw new InputError('position', `position must be a whole number from 0 to ${last}: project "${project.name}" has ${project.cases.length} case${last === 0 ? '' : 's'}.`);
+      }
+      const order = project.cases.map((c) => c.id).filter((id) => id !== checkedId);
+      order.splice(position, 0, checkedId);
+      const place = this.db.prepare('UPDATE cases SET position = ? WHERE id = ?');
+      order.forEach((id, index) => place.run(index, id));
+      this.touch(project.id);
+      return this.open(project.id);
+    });
+  }
+
   getCase(caseId: number): ProjectCase {
     const checkedId = requireId(caseId, 'caseId');
     const row = this.db.prepare('SELECT * FROM cases WHERE id = ?').get(checkedId) as CaseRow | undefined;

@@ -73,6 +73,7 @@ const httpApi: LaminaApi = {
     addCase: call('projects:add-case'),
     updateCase: call('projects:update-case'),
     removeCase: call('projects:remove-case'),
+    moveCase: call('projects:move-case'),
     exportProject: call('projects:export-file'),
     importProject: call('projects:import-file'),
   },
