@@ -1,6 +1,6 @@
 /** How the library table writes a material's figures: short, SI, never NaN (an absent value is "–"). */
 import type { ConductivityModel, MaterialCategory } from '../../../app/api/contract.js';
-import { formatValue } from '../wall/number-format.js';
+import { formatValue } from '../shared/number-format.js';
 
 export const CATEGORY_LABELS: Readonly<Record<MaterialCategory, string>> = {
   building: 'Building material',
