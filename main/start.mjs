@@ -85,7 +85,7 @@ async function startBrowserMode(port, databaseOption, why) {
   await ensureRendererBuilt();
   let server;
   try {
-    server = await startBrowserServer({ port, host: '127.0.0.1', databasePath });
+    server = await startBrowserServer({ port, host: '127.0.0.1', databasePath, demoProjectOnCreate: true });
   } catch (error) {
     if (error && error.code === 'EADDRINUSE') {
       fail(`Port ${port} is already in use; pass --port <number> or set LAMINA_PORT (0 picks a free port).`);

@@ -81,10 +81,17 @@ export interface ApiChannels {
   'projects:move-case': { readonly request: { readonly caseId: number; readonly position: number }; readonly response: Project };
   /** The project as one self-contained file (JSON text) and a suggested file name. */
   'projects:export-file': { readonly request: Id; readonly response: { readonly fileName: string; readonly text: string } };
+  /**
+   * A project exchange file. When a project from the same file (same name, client and reference) is
+   * already there, the request must say `onExisting`: 'copy' (add beside it) or 'replace' (add, and
+   * move the existing one to the recycle bin); without it the refusal's field is 'onExisting'.
+   */
   'projects:import-file': {
-    readonly request: { readonly text: string };
-    readonly response: { readonly project: Project; readonly materialsReused: number; readonly materialsCreated: number };
+    readonly request: { readonly text: string; readonly onExisting?: 'copy' | 'replace' };
+    readonly response: { readonly project: Project; readonly materialsReused: number; readonly materialsCreated: number; readonly replaced: number | null };
   };
+  /** Adds the demo project of data/demo again (a new library starts with it). */
+  'projects:add-demo': { readonly request: NoFields; readonly response: Project };
 
   'backups:list': { readonly request: NoFields; readonly response: readonly BackupInfo[] };
   'backups:create': { readonly request: NoFields; readonly response: BackupInfo };
@@ -145,6 +152,7 @@ export interface LaminaApi {
     moveCase: ApiCall<'projects:move-case'>;
     exportProject: ApiCall<'projects:export-file'>;
     importProject: ApiCall<'projects:import-file'>;
+    addDemo: ApiCall<'projects:add-demo'>;
   };
   backups: {
     list: ApiCall<'backups:list'>;

@@ -68,6 +68,9 @@ function isTrustedSender(event: IpcMainInvokeEvent): boolean {
 function openLibrary(): Promise<LibraryHost> {
   return LibraryHost.open(path.join(app.getPath('userData'), DATABASE_FILE_NAME), {
     seedFolder: path.join(app.getAppPath(), 'data', 'materials'),
+    // A first start opens on a complete, solved example (data/demo).
+    demoProjectOnCreate: true,
+    dataFolder: path.join(app.getAppPath(), 'data'),
   });
 }
 

@@ -53,6 +53,7 @@ const api: LaminaApi = {
     moveCase: (request) => invoke('projects:move-case', request),
     exportProject: (request) => invoke('projects:export-file', request),
     importProject: (request) => invoke('projects:import-file', request),
+    addDemo: (request) => invoke('projects:add-demo', request),
   },
   backups: {
     list: (request) => invoke('backups:list', request),

@@ -52,6 +52,8 @@ export interface BrowserServerOptions {
   readonly seedFolder?: string;
   /** Run the daily backup while serving (default true). */
   readonly dailyBackups?: boolean;
+  /** Add the demo project to a library this start creates (default false; `npm start` asks for it). */
+  readonly demoProjectOnCreate?: boolean;
 }
 
 export interface BrowserServer {
@@ -81,6 +83,7 @@ export async function startBrowserServer(options: BrowserServerOptions): Promise
   const library = await LibraryHost.open(options.databasePath, {
     ...(options.seedFolder ? { seedFolder: options.seedFolder } : {}),
     ...(options.dailyBackups === undefined ? {} : { dailyBackups: options.dailyBackups }),
+    ...(options.demoProjectOnCreate ? { demoProjectOnCreate: true } : {}),
   });
   const operations = createOperations({ ...readAppIdentity(), library });
   const routes = new Map(API_CHANNELS.map((channel) => [httpPathFor(channel), channel] as const));

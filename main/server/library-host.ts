@@ -33,6 +33,11 @@ export class LibraryHost {
 
   private constructor(readonly databasePath: string, private readonly options: LibraryHostOptions) {}
 
+  /** The data folder (demo/, examples/) the library was opened with; undefined for the project's own. */
+  get dataFolder(): string | undefined {
+    return this.options.dataFolder;
+  }
+
   /** Opens the library; never throws for a storage problem (see status()). */
   static async open(databasePath: string, options: LibraryHostOptions = {}): Promise<LibraryHost> {
     const host = new LibraryHost(databasePath, options);

@@ -6,6 +6,7 @@
  * any expected failure into the contract's ApiError.
  */
 import { pipeSizeCatalogue } from '../pipe-sizes/pipe-size-catalogue.js';
+import { addDemoProject } from '../services/demo-project.js';
 import type { ApiChannel, ApiChannels, ApiError, ApiResponse } from '../../app/api/contract.js';
 import { MATERIAL_LIMITS } from '../../app/api/material-limits.js';
 import { MATERIAL_CATEGORIES, MATERIAL_ORIGINS, type MaterialFilter } from '../../app/api/material-types.js';
@@ -31,7 +32,7 @@ export const API_CHANNELS = [
   'materials:usage', 'materials:import-csv', 'materials:export-csv', 'materials:fit-conductivity',
   'projects:list', 'projects:list-recycle-bin', 'projects:open', 'projects:create', 'projects:update', 'projects:rename',
   'projects:duplicate', 'projects:remove', 'projects:restore', 'projects:empty-recycle-bin', 'projects:add-case',
-  'projects:update-case', 'projects:remove-case', 'projects:move-case', 'projects:export-file', 'projects:import-file',
+  'projects:update-case', 'projects:remove-case', 'projects:move-case', 'projects:export-file', 'projects:import-file', 'projects:add-demo',
   'backups:list', 'backups:create', 'backups:restore',
 ] as const satisfies readonly ApiChannel[];
 // A channel in the contract but missing from the list above fails to compile here.
@@ -186,8 +187,12 @@ export function createOperations(context: OperationContext): OperationHandlers {
       return { fileName: projectFileName(file.project.name), text: projectFileToJson(file) };
     },
     'projects:import-file': async (request) => {
-      const r = fields('projects:import-file', request, ['text']);
-      return lib().projects.importProject(projectFileFromJson(requireLongText(r['text'], 'text')));
+      const r = fields('projects:import-file', request, ['text', 'onExisting']);
+      return lib().projects.importProject(projectFileFromJson(requireLongText(r['text'], 'text')), r['onExisting']);
+    },
+    'projects:add-demo': async (request) => {
+      requireNoFields('projects:add-demo', request);
+      return addDemoProject(lib().projects, host().dataFolder);
     },
 
     'backups:list': async (request) => {

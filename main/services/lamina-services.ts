@@ -1,6 +1,7 @@
 import { DEFAULT_BACKUPS_KEPT } from '../storage/backups.js';
 import { openDatabase } from '../storage/open-database.js';
 import { BackupsService } from './backups-service.js';
+import { addDemoProject } from './demo-project.js';
 import type { DatabaseContext } from './database-context.js';
 import { MaterialsService } from './materials-service.js';
 import { ProjectsService } from './projects-service.js';
@@ -28,6 +29,13 @@ export interface OpenLaminaOptions {
   readonly busyTimeoutMs?: number;
   /** Create the database's folder when it is missing (default true; see OpenOptions.createFolder). */
   readonly createFolder?: boolean;
+  /**
+   * Add the demo project (data/demo) to a library this call creates, so a new user meets a complete,
+   * solved example (default false: the app asks for it; the command line and tests do not).
+   */
+  readonly demoProjectOnCreate?: boolean;
+  /** The data folder holding demo/ and examples/ (default the project's data/; the packaged app passes its own). */
+  readonly dataFolder?: string;
 }
 
 export async function openLamina(databasePath: string, options: OpenLaminaOptions = {}): Promise<LaminaServices> {
@@ -41,12 +49,15 @@ export async function openLamina(databasePath: string, options: OpenLaminaOption
   try {
     const materials = new MaterialsService(context);
     seedBuiltInMaterials(context, materials, options.seedFolder ?? DEFAULT_SEED_FOLDER);
+    const projects = new ProjectsService(context, materials);
+    // migratedFrom 0: this call created the file (a first start).
+    if (options.demoProjectOnCreate && opened.migratedFrom === 0) addDemoProject(projects, options.dataFolder);
     return {
       databasePath: opened.path,
       migratedFrom: opened.migratedFrom,
       ...(opened.preMigrationBackup ? { preMigrationBackup: opened.preMigrationBackup } : {}),
       materials,
-      projects: new ProjectsService(context, materials),
+      projects,
       backups: new BackupsService(context, keep),
       close: () => opened.db.close(),
     };

@@ -10,6 +10,7 @@ import { readProjectFile, type ProjectFile } from './project-file.js';
 import type { Project, ProjectCase, ProjectFields, ProjectSummary, UnitSystem } from './project-types.js';
 import { NotFoundError, RefusedError } from './service-errors.js';
 import { InputError } from '../../app/index.js';
+import { requireOneOf } from '../../app/base/field-checks.js';
 import { isPlainObject, rejectUnknownKeys, requireId, requireText } from './validate.js';
 
 interface ProjectRow {
@@ -241,8 +242,19 @@ export class ProjectsService {
    * (same name, same data) is reused; one whose name is taken by different data is added as
    * "<name> (imported)"; others are added as user materials.
    */
-  importProject(file: unknown): { project: Project; materialsReused: number; materialsCreated: number } {
+  /**
+   * Imports a project file. When the library already holds a project with the same name, client
+   * and reference (the same export, imported before), `onExisting` says what to do: 'copy' adds
+   * this one beside it, 'replace' adds it and moves the existing one to the recycle bin (so
+   * nothing is lost); without it the import is refused with a sentence naming `onExisting`.
+   */
+  importProject(file: unknown, onExisting?: unknown): { project: Project; materialsReused: number; materialsCreated: number; replaced: number | null } {
     const parsed = readProjectFile(file);
+    const choice = onExisting === undefined ? undefined : requireOneOf('onExisting', onExisting, ['copy', 'replace'] as const);
+    const same = this.list().find((p) => p.name === parsed.project.name && p.client === parsed.project.client && p.reference === parsed.project.reference);
+    if (same && choice === undefined) {
+      throw new InputError('onExisting', `A project "${same.name}" from the same file is already in the library: choose whether to add this one as a copy or to replace it (onExisting: copy or replace).`);
+    }
     return inWriteTransaction(this.context, () => {
       const idMap = new Map<number, number>();
       let reused = 0;
@@ -265,7 +277,9 @@ export class ProjectsService {
         const inputs = validateCaseInputs(remapMaterialIds(c.inputs, (fileId) => idMap.get(fileId)!));
         storeNamingCase(i, c.name, () => this.insertCase(projectId, c.name, inputs));
       });
-      return { project: this.open(projectId), materialsReused: reused, materialsCreated: created };
+      const replaced = same && choice === 'replace' ? same.id : null;
+      if (replaced !== null) this.remove(replaced);
+      return { project: this.open(projectId), materialsReused: reused, materialsCreated: created, replaced };
     });
   }
 

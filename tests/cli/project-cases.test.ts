@@ -96,4 +96,20 @@ describe('lamina projects create / add-case / solve', () => {
     expect(missing.code).toBe(2);
     expect(missing.stderr.trim().split('\n')).toHaveLength(1);
   });
+
+  it('imports its own export again only as a copy or a replacement, as the user chooses', () => {
+    const file = path.join(dir, 'export.json');
+    const id = /^Created project (\d+) /.exec(lamina('projects', 'create', 'Exported yard').stdout)![1]!;
+    expect(lamina('projects', 'add-case', id, path.join(root, 'data', 'examples', 'pipe-steam-outdoor.json')).code).toBe(0);
+    expect(lamina('projects', 'export', id, file).code).toBe(0);
+    const again = lamina('projects', 'import', file);
+    expect(again.code).toBe(2);
+    expect(again.stderr).toMatch(/from the same file is already in the library: choose whether to add this one as a copy or to replace it/);
+    const copy = lamina('projects', 'import', file, '--on-existing', 'copy');
+    expect(copy.code).toBe(0);
+    const replace = lamina('projects', 'import', file, '--on-existing', 'replace');
+    expect(replace.code).toBe(0);
+    expect(replace.stdout).toMatch(/ it replaces is in the recycle bin\.\n$/);
+    expect(lamina('projects', 'import', file, '--on-existing', 'merge').stderr).toMatch(/onExisting must be one of 'copy', 'replace'/);
+  });
 });

@@ -190,13 +190,26 @@ describe('projects channels', () => {
     expect((await ok(url, 'projects:list-recycle-bin', {})).map((p) => p.id)).toEqual([project.id]);
     expect((await ok(url, 'projects:restore', { id: project.id })).deletedAt).toBeNull();
 
-    const imported = await ok(url, 'projects:import-file', { text: exported.text });
+    // The project is still there: importing its own export asks first (field onExisting), then adds a copy.
+    const asks = await call(url, 'projects:import-file', { text: exported.text });
+    expect(asks.status).toBe(400);
+    expect((asks.body as ApiError).field).toBe('onExisting');
+    const imported = await ok(url, 'projects:import-file', { text: exported.text, onExisting: 'copy' });
+    expect(imported.replaced).toBeNull();
     expect(imported.materialsReused).toBe(1);
     expect(imported.project.cases).toHaveLength(1);
     expect((await ok(url, 'projects:list', {})).length).toBe(2);
     const notAFile = await call(url, 'projects:import-file', { text: '{"format":"something else"}' });
     expect(notAFile.status).toBe(400);
     expect((notAFile.body as ApiError).error).toBe('format must be "lamina-project"; this is not a Lamina project file.');
+  });
+
+  it('adds the demo project of data/demo again on request', async () => {
+    const { url } = await serve(tempFolder());
+    const demo = await ok(url, 'projects:add-demo', {});
+    expect(demo.name).toBe('Orrin Valley Creamery (demo)');
+    expect(demo.cases).toHaveLength(6);
+    expect((await call(url, 'projects:add-demo', { again: true })).status).toBe(400);
   });
 });
 

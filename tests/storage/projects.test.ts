@@ -83,7 +83,7 @@ describe('projects', () => {
     expect(lamina.projects.getCase(clad.id)).toEqual(clad);
     // A project file carrying that case is refused naming the case, and nothing of it is written.
     const file = projectFileToJson({ ...lamina.projects.exportProject(p.id), cases: [{ name: 'Bare run', inputs: bare }] });
-    expect(() => lamina.projects.importProject(projectFileFromJson(file))).toThrow(`Case "Bare run" cannot be stored: ${needsEmissivity}`);
+    expect(() => lamina.projects.importProject(projectFileFromJson(file), 'copy')).toThrow(`Case "Bare run" cannot be stored: ${needsEmissivity}`);
     expect(lamina.projects.list().map((project) => project.name)).toEqual(['Kestrel Lane boiler house']);
     lamina.close();
   });
@@ -111,8 +111,17 @@ describe('projects', () => {
     expect(away.materials.get((imported!.inputs['jacket'] as { materialId: number }).materialId)).toMatchObject({ name: 'Aluminium cladding, bright rolled', builtIn: true });
     expect(away.materials.findByName('Brightwater spray foam')!.vapourResistanceFactor).toBe(Infinity);
     expect(result.project).toMatchObject({ ...fields });
-    // Importing the same file again reuses everything.
-    expect(away.projects.importProject(projectFileFromJson(text))).toMatchObject({ materialsReused: 4, materialsCreated: 0 });
+    // The same file again: refused until the user chooses; as a copy it reuses every material.
+    expect(() => away.projects.importProject(projectFileFromJson(text))).toThrow(
+      `A project "${fields.name}" from the same file is already in the library: choose whether to add this one as a copy or to replace it (onExisting: copy or replace).`,
+    );
+    expect(away.projects.importProject(projectFileFromJson(text), 'copy')).toMatchObject({ materialsReused: 4, materialsCreated: 0, replaced: null });
+    expect(away.projects.list().filter((p) => p.name === fields.name)).toHaveLength(2);
+    // Replacing moves one existing copy to the recycle bin, where it can be restored.
+    const replacing = away.projects.importProject(projectFileFromJson(text), 'replace');
+    expect(replacing.replaced).not.toBeNull();
+    expect(away.projects.list().filter((p) => p.name === fields.name)).toHaveLength(2);
+    expect(away.projects.listRecycleBin().map((p) => p.id)).toEqual([replacing.replaced]);
     away.close();
   });
 

@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import { readCaseJson } from '../read-case-file.js';
+import { readTextFile } from '../file-access.js';
 import path from 'node:path';
 import type { CliCommand } from '../command.js';
 import { projectFileFromJson, projectFileToJson } from '../../services/project-file.js';
@@ -15,14 +16,14 @@ function caseTitle(inputs: unknown): string | undefined {
 /**
  * lamina projects list [--deleted] [--json]
  * lamina projects export ID FILE.json|-
- * lamina projects import FILE.json
+ * lamina projects import FILE.json [--on-existing copy|replace]   (when the same project is already there)
  * lamina projects create NAME [--client TEXT] [--site TEXT] [--reference TEXT] [--engineer TEXT]
  * lamina projects add-case ID CASE.json [--name NAME]   (a case file; materials inline or by library id)
  * lamina projects solve ID [--format json|text]          (recomputes every case from its stored inputs)
  * Every form accepts --db PATH (else LAMINA_DB, else the per-system default).
  */
 const USAGE =
-  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE | add-case ID CASE.json [--name NAME] | solve ID [--format json|text] [--db PATH]';
+  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | solve ID [--format json|text] [--db PATH]';
 
 const CREATE_FIELDS = ['client', 'site', 'reference', 'engineer'] as const;
 
@@ -32,7 +33,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
     io.stdout(`${USAGE}\n`);
     return 0;
   }
-  const parsed = parseArgs(rest, ['db', 'name', 'format', ...CREATE_FIELDS], ['json', 'deleted']);
+  const parsed = parseArgs(rest, ['db', 'name', 'format', 'on-existing', ...CREATE_FIELDS], ['json', 'deleted']);
   if (typeof parsed === 'string') {
     io.stderr(`${parsed} ${USAGE}\n`);
     return EXIT_BAD_INPUT;
@@ -70,8 +71,9 @@ export const projectsCommand: CliCommand = async (args, io) => {
         return EXIT_BAD_INPUT;
       }
       return withServices(io, db, ({ projects }) => {
-        const result = projects.importProject(projectFileFromJson(fs.readFileSync(path.resolve(io.cwd, file), 'utf8')));
-        io.stdout(`Imported project ${result.project.id} "${result.project.name}" with ${result.project.cases.length} case(s); materials reused ${result.materialsReused}, added ${result.materialsCreated}.\n`);
+        const result = projects.importProject(projectFileFromJson(readTextFile(path.resolve(io.cwd, file))), parsed.options.get('on-existing'));
+        const replaced = result.replaced === null ? '' : ` Project ${result.replaced} it replaces is in the recycle bin.`;
+        io.stdout(`Imported project ${result.project.id} "${result.project.name}" with ${result.project.cases.length} case(s); materials reused ${result.materialsReused}, added ${result.materialsCreated}.${replaced}\n`);
         return 0;
       });
     }

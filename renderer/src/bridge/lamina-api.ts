@@ -76,6 +76,7 @@ const httpApi: LaminaApi = {
     moveCase: call('projects:move-case'),
     exportProject: call('projects:export-file'),
     importProject: call('projects:import-file'),
+    addDemo: call('projects:add-demo'),
   },
   backups: {
     list: call('backups:list'),
