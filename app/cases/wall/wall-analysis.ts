@@ -21,7 +21,8 @@ import {
 import { solveSteady } from '../../fe/steady-solve.js';
 import { wallResultOf } from './wall-calculation.js';
 import { wallEngineProblem } from './wall-engine-problem.js';
-import type { WallInput } from './wall-input.js';
+import { isAirLayer, type WallInput } from './wall-input.js';
+import { conductivityUseWarnings } from '../../checks/plausibility-warnings.js';
 import type { WallResult } from './wall-result.js';
 import { wallStateSolver } from './wall-states.js';
 import { buildThermalStack } from './wall-thermal-stack.js';
@@ -38,6 +39,8 @@ export interface WallAnalysis {
   readonly checks: readonly CheckResult[];
   /** Engine solves this analysis made (each state once; a linear wall needs one per stack). */
   readonly solves: number;
+  /** Conductivity curves read beyond their data or service range at the design condition. */
+  readonly warnings: readonly string[];
 }
 
 /** Everything the analysis will need of the input, checked up front (a missing μ is found here, not halfway). */
@@ -87,5 +90,26 @@ export function analyseWall(input: WallInput): WallAnalysis {
   );
 
   const checks = [mould.mould, mould.surfaceCondensation, interstitialDesign.check, ...(interstitialMonthly ? [interstitialMonthly.check] : [])];
-  return { wall: wallResultOf(input, stack, design), mould, interstitialDesign, interstitialMonthly, checks, solves: 1 + states.solves() + mouldStates.solves() };
+  const wall = wallResultOf(input, stack, design);
+  return { wall, mould, interstitialDesign, interstitialMonthly, checks, solves: 1 + states.solves() + mouldStates.solves(), warnings: wallConductivityWarnings(input, wall) };
+}
+
+/** Each material layer's λ(θ) against its table's points and its service range, at the design condition. */
+function wallConductivityWarnings(input: WallInput, wall: WallResult): string[] {
+  return conductivityUseWarnings(
+    wall.layers.flatMap((l) => {
+      const layer = input.layers[l.index]!;
+      if (isAirLayer(layer) || l.innerTemperature === null || l.outerTemperature === null) return [];
+      return [
+        {
+          name: l.name,
+          conductivity: layer.material.conductivity,
+          lowest: Math.min(l.innerTemperature, l.outerTemperature),
+          highest: Math.max(l.innerTemperature, l.outerTemperature),
+          minServiceTemperature: layer.material.minServiceTemperature ?? null,
+          maxServiceTemperature: layer.material.maxServiceTemperature ?? null,
+        },
+      ];
+    }),
+  );
 }

@@ -23,7 +23,7 @@ export const wallKind: CaseKind<WallInput, WallAnalysis> = {
   },
   solve({ input }) {
     const result = analyseWall(input);
-    return { result, checks: result.checks, warnings: [], assumptions: [] };
+    return { result, checks: result.checks, warnings: result.warnings, assumptions: [] };
   },
   report(parsed, solved) {
     return wallReport(parsed.input, solved.result);

@@ -39,7 +39,7 @@ export function wallReport(input: WallInput, analysis: WallAnalysis): CaseReport
     sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis), mouldSection(analysis), interstitialSection(analysis), ...(monthly ? [monthly] : [])],
     energyBalance: { ...w.energyBalance, quantity: 'heatFlux' },
     assumptions: assumptionsOf(input, analysis),
-    warnings: [],
+    warnings: analysis.warnings.map(asSentence),
     sources: sourcesOf(input, analysis),
     cautions: distinctCautions(verdicts),
   };
