@@ -3,7 +3,8 @@
  * window and in browser mode alike. One definition so that the two cannot drift apart.
  *
  * Everything comes from Lamina's own origin; no inline script or style, no remote content, no
- * plug-ins, no framing, no form posts. Svelte's build emits its CSS as a file, so 'self' suffices.
+ * plug-ins, no framing, no form posts; workers only from the app's own files. Svelte's build emits
+ * its CSS as a file, so 'self' suffices.
  */
 export const CONTENT_SECURITY_POLICY = [
   "default-src 'self'",
@@ -12,6 +13,8 @@ export const CONTENT_SECURITY_POLICY = [
   "img-src 'self' data:",
   "font-src 'self'",
   "connect-src 'self'",
+  // The case editor solves in a module Web Worker loaded from the app's own files.
+  "worker-src 'self'",
   "object-src 'none'",
   "base-uri 'none'",
   "form-action 'none'",

@@ -1,0 +1,52 @@
+/**
+ * Numbers at the edge of the form: the stored SI value as the project's unit system shows it in a
+ * box, and typed text back to the SI value to store. Conversion goes through the engine's one
+ * table (app/base/unit-systems); nothing else in the editor knows a unit.
+ */
+import type { QuantityName } from '../../../app/base/quantities.js';
+import type { NumberRange } from '../../../app/base/number-range.js';
+import { fromDisplay, toDisplay, unitLabel, type UnitSystem } from '../../../app/base/unit-systems.js';
+
+/** Digits a box shows: enough to round-trip any typed value, few enough to hide binary noise (0.0036 m -> "3.6" mm). */
+const BOX_DIGITS = 12;
+
+export function boxText(stored: number, quantity: QuantityName, system: UnitSystem): string {
+  const shown = Number(toDisplay(stored, quantity, system).toPrecision(BOX_DIGITS));
+  return String(Object.is(shown, -0) ? 0 : shown);
+}
+
+export type TextReading = { readonly ok: true; readonly value: number } | { readonly ok: false; readonly message: string };
+
+/** Typed text to the stored SI value; a decimal comma is read as a point, a minus sign as "-". */
+export function readBoxText(text: string, quantity: QuantityName, system: UnitSystem, label: string): TextReading {
+  const cleaned = text.trim().replace(',', '.').replace('−', '-');
+  const unit = unitLabel(quantity, system);
+  if (cleaned === '' || !/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(cleaned)) {
+    return { ok: false, message: `${label} must be a number${unit ? ` in ${unit}` : ''}.` };
+  }
+  return { ok: true, value: fromDisplay(Number(cleaned), quantity, system) };
+}
+
+/**
+ * The value to store for typed text: unchanged when the text reads as the stored value already
+ * shows (so an untouched or retyped number keeps every stored digit), else the converted value.
+ */
+export function storedValueFor(text: string, current: number | undefined, quantity: QuantityName, system: UnitSystem, label: string): TextReading {
+  if (current !== undefined && Number.isFinite(current) && text.trim() === boxText(current, quantity, system)) return { ok: true, value: current };
+  return readBoxText(text, quantity, system, label);
+}
+
+/** "Allowed −100 to 200 °C" in the project's units (a range's open ends say "above" and "below"). */
+export function rangeHint(range: NumberRange, quantity: QuantityName, system: UnitSystem): string {
+  const unit = unitLabel(quantity, system);
+  const low = Number(toDisplay(range.min, quantity, system).toPrecision(6));
+  const high = Number(toDisplay(range.max, quantity, system).toPrecision(6));
+  const from = range.minExclusive ? `above ${formatBound(low)}` : formatBound(low);
+  const to = range.maxExclusive ? `below ${formatBound(high)}` : formatBound(high);
+  return `Allowed ${from} to ${to}${unit ? ` ${unit}` : ''}`;
+}
+
+function formatBound(value: number): string {
+  const text = Math.abs(value) >= 1e5 ? value.toExponential().replace('e+', 'e') : String(value);
+  return text.replace(/^-/, '−');
+}

@@ -1,0 +1,32 @@
+/** What the page and the solving worker say to each other (structured-clone data only). */
+import type { PipeSize } from '../../../app/index.js';
+import type { CaseReport } from '../../../app/report/report-model.js';
+import type { MaterialProperties } from '../../../app/materials/material-properties.js';
+
+export interface SolveRequest {
+  readonly id: number;
+  readonly caseJson: unknown;
+  /** The library materials the case refers to, by id. */
+  readonly materials: readonly (readonly [number, MaterialProperties])[];
+  /** Sent with the first request only; the worker keeps them. */
+  readonly pipeSizes?: readonly PipeSize[];
+}
+
+export type SolveAnswer =
+  | {
+      readonly id: number;
+      readonly ok: true;
+      readonly report: CaseReport;
+      /** Mean temperature (°C) of each material slot's layer, by slot path ("layers[1]", "jacket"). */
+      readonly layerMeans: Readonly<Record<string, number>>;
+      /** Time the solve took inside the worker, ms. */
+      readonly solveMs: number;
+    }
+  | {
+      readonly id: number;
+      readonly ok: false;
+      /** The case path the engine names, when it names one. */
+      readonly field?: string;
+      readonly message: string;
+      readonly solveMs: number;
+    };
