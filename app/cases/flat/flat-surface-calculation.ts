@@ -6,7 +6,7 @@
  */
 import type { OuterSurfaceShape } from '../../physics/outer-surface-exchange.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity } from '../insulated/insulated-inputs.js';
-import { solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
+import { reportedStackSolution, solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
 import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
 import { DEFAULT_SURFACE_METHOD } from '../pipe/pipe-input.js';
 
@@ -46,7 +46,7 @@ export function calculateFlatSurface(input: FlatSurfaceInput): FlatSurfaceResult
 
   const exchange = surfaceExchangeFor(shape, input.inner, input.ambient, method, emissivity);
 
-  const { engine: _engine, heatOut, ...solution } = solveStack({
+  const solved = solveStack({
     geometry: { kind: 'planar' },
     stack,
     inner: input.inner,
@@ -54,6 +54,8 @@ export function calculateFlatSurface(input: FlatSurfaceInput): FlatSurfaceResult
     ambient: input.ambient,
     ...(input.touchLimit !== undefined ? { touchLimit: input.touchLimit } : {}),
   });
+  const heatOut = solved.heatOut;
+  const solution = reportedStackSolution(solved);
   const heatLoss = heatOut * input.area;
   // Σ d/λ_eff over the layers, from the engine's per-layer resistances where they are defined.
   const layerResistance = solution.layers.reduce((sum, l) => sum + (l.thermalResistance ?? l.thickness / (l.effectiveConductivity ?? l.conductivityAtMeanTemperature)), 0);

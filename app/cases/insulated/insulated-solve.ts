@@ -92,6 +92,28 @@ export interface StackSolution {
   readonly checks: SolveChecks;
 }
 
+/** The part of a stack solution a pipe or flat result reports (everything but the engine's own result and the signed flow). */
+export type ReportedStackSolution = Omit<StackSolution, 'engine' | 'heatOut'>;
+
+/**
+ * Those fields, named one by one: an object rest (`{ engine, heatOut, ...rest }`) takes V8's slow
+ * property-copying path and cost more than the pipe's whole surface-check step.
+ */
+export function reportedStackSolution(s: StackSolution): ReportedStackSolution {
+  return {
+    innerSurfaceTemperature: s.innerSurfaceTemperature,
+    surfaceTemperature: s.surfaceTemperature,
+    layers: s.layers,
+    interfaces: s.interfaces,
+    surfaceCoefficient: s.surfaceCoefficient,
+    warnings: s.warnings,
+    energyBalance: s.energyBalance,
+    iterations: s.iterations,
+    dewPoint: s.dewPoint,
+    checks: s.checks,
+  };
+}
+
 export interface StackProblem {
   readonly geometry: Geometry;
   readonly stack: readonly StackLayer[];

@@ -15,7 +15,7 @@ import {
   outerSurfaceEmissivity,
   type ResolvedEmissivity,
 } from '../insulated/insulated-inputs.js';
-import { solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
+import { reportedStackSolution, solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
 import { DEFAULT_SURFACE_METHOD, validatePipeInput, verticalPipeHeight, type PipeInput } from './pipe-input.js';
 
 export interface PipeResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
@@ -69,7 +69,7 @@ export function calculatePipe(input: PipeInput): PipeResult {
 
   const exchange = surfaceExchangeFor(shape, input.inner, input.ambient, method, emissivity);
 
-  const { engine: _engine, heatOut, ...solution } = solveStack({
+  const solved = solveStack({
     geometry: { kind: 'axisymmetric', innerRadius },
     stack,
     inner: input.inner,
@@ -77,6 +77,8 @@ export function calculatePipe(input: PipeInput): PipeResult {
     ambient: input.ambient,
     ...(input.touchLimit !== undefined ? { touchLimit: input.touchLimit } : {}),
   });
+  const heatOut = solved.heatOut;
+  const solution = reportedStackSolution(solved);
 
   const surfaceAreaPerMetre = Math.PI * outerDiameter;
   const warnings = [...geometryPlausibilityWarnings(innerRadius), ...solution.warnings];
