@@ -77,6 +77,11 @@ function kindChoice(path: string, label: string, pairs: readonly (readonly [stri
   };
 }
 
+/** The case after a choice: unchanged when the choice is what the case already says (its own values are kept). */
+export function applyChoice(field: ChoiceField, doc: Json, value: string, context: FormContext): Json {
+  return field.read(doc) === value ? doc : field.write(doc, value, context);
+}
+
 const TITLE: TextField = { type: 'text', path: 'title', label: 'Title', maxLength: 200 };
 
 const temperatureRange = (min: number, max: number): NumberRange => ({ min, max, unit: '°C' });
