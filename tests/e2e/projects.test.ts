@@ -99,6 +99,9 @@ describe('projects in the browser', () => {
       expect(await row.textContent()).toContain('TQ-2025-017');
       await row.getByRole('button', { name: 'Tallow Quay cold store' }).click();
       await expect.poll(() => page.inputValue('#project-client')).toBe('Brackenridge Dairies Ltd');
+      // A project that has its details shows them folded away; they unfold to be edited.
+      expect(await page.locator('#project-date').isVisible()).toBe(false);
+      await page.click('#project-details-toggle');
       expect(await page.inputValue('#project-date')).toBe('2025-04-09');
       expect(await page.inputValue('#project-unitSystem')).toBe('IP');
       expect(await page.inputValue('#project-notes')).toBe('Chilled water mains in the plant room; loading bay wall.');
@@ -133,7 +136,7 @@ describe('projects in the browser', () => {
       expect(services.projects.open(id).name).toBe('Tallow Quay cold store, phase 2');
       expect(await page.textContent('#project-details-heading')).toBe('Tallow Quay cold store, phase 2');
 
-      // Cases come from elsewhere for now (a later version edits them): two are stored directly, then renamed and removed here.
+      // Two cases stored directly, then renamed and removed here.
       const board = services.materials.create({
         name: 'Tallow Quay PIR board', category: 'insulation', conductivity: { kind: 'constant', value: 0.024 }, density: 32,
         specificHeat: 1400, vapourResistanceFactor: 60, equivalentAirLayerThickness: null, emissivity: 0.9,
@@ -158,15 +161,14 @@ describe('projects in the browser', () => {
       await page.click('text=Save name');
       await expect.poll(() => rowNames(page, 'case-row')).toEqual(['Loading bay wall', 'Chilled water main, plant room']);
       expect(services.projects.open(id).cases.map((c) => c.name)).toEqual(['Loading bay wall', 'Chilled water main, plant room']);
+      // Removal is at once, with an undo bar (tests/e2e/project-workspace.test.ts takes Undo).
       const wallCase = page.locator('[data-testid="case-row"][data-name="Loading bay wall"]');
-      await wallCase.getByRole('button', { name: 'Remove…' }).click();
-      expect(await wallCase.textContent()).toContain('Remove this case and its inputs for good?');
-      expect(services.projects.open(id).cases).toHaveLength(2); // nothing happens before the confirmation
-      await expectCleanText(page);
-      await shot(page, 'projects-case-remove-confirm.png');
       await wallCase.getByRole('button', { name: 'Remove', exact: true }).click();
       await expect.poll(() => rowNames(page, 'case-row')).toEqual(['Chilled water main, plant room']);
       expect(services.projects.open(id).cases.map((c) => c.name)).toEqual(['Chilled water main, plant room']);
+      expect(await page.locator('[data-testid="undo-bar"]').textContent()).toContain('Case removed.');
+      await expectCleanText(page);
+      await shot(page, 'projects-case-removed.png');
 
       // Duplicate: a copy with the case, opened.
       await page.click('#project-duplicate');

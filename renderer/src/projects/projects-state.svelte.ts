@@ -1,12 +1,12 @@
 /**
  * State of the Projects view: the list and its search, the open project (its autosaving fields and
- * its cases), the recycle bin, and the last message (a success, or a refusal sentence from the
- * Node side). Every call goes through the typed API (bridge/lamina-api.ts).
+ * its workspace of cases), the recycle bin, and the last message (a success, or a refusal sentence
+ * from the Node side). Every call goes through the typed API (bridge/lamina-api.ts).
  */
 import type { Project, ProjectSummary } from '../../../app/api/contract.js';
 import { laminaApi, messageOf } from '../bridge/lamina-api.js';
-import { ProjectCases } from './project-cases.svelte.js';
 import { ProjectEditor } from './project-editor.svelte.js';
+import { ProjectWorkspace } from '../workspace/project-workspace.svelte.js';
 
 export interface ProjectsNotice {
   readonly kind: 'done' | 'refused';
@@ -25,7 +25,9 @@ export class ProjectsState {
   loading = $state(true);
   notice = $state<ProjectsNotice | undefined>(undefined);
   editor = $state<ProjectEditor | undefined>(undefined);
-  cases = $state<ProjectCases | undefined>(undefined);
+  workspace = $state<ProjectWorkspace | undefined>(undefined);
+  /** The open project was just made: its details show unfolded, since they are what it needs first. */
+  detailsOpen = $state(false);
   recycleBin = $state<readonly ProjectSummary[]>([]);
   showingRecycleBin = $state(false);
   confirmingEmpty = $state(false);
@@ -69,14 +71,14 @@ export class ProjectsState {
   async close(): Promise<void> {
     await this.editor?.flush();
     this.editor = undefined;
-    this.cases = undefined;
+    this.workspace = undefined;
   }
 
   async create(): Promise<void> {
     await this.editor?.flush();
     try {
       const project = await laminaApi().projects.create({ fields: { name: NEW_PROJECT_NAME } });
-      this.show(project);
+      this.show(project, { detailsOpen: true });
       this.done(`Made a new project. Give it a name and the details below; each change is saved as you type.`);
       await this.reload();
     } catch (error) {
@@ -105,7 +107,7 @@ export class ProjectsState {
     try {
       await laminaApi().projects.remove({ id: editor.id });
       this.editor = undefined;
-      this.cases = undefined;
+      this.workspace = undefined;
       this.notice = { kind: 'done', text: `Moved "${editor.storedName}" to the recycle bin.`, undoRemovalOf: editor.id };
       await this.reload();
     } catch (error) {
@@ -165,9 +167,10 @@ export class ProjectsState {
     }
   }
 
-  private show(project: Project): void {
+  private show(project: Project, { detailsOpen = false } = {}): void {
     this.editor = new ProjectEditor(project, () => void this.reload());
-    this.cases = new ProjectCases(project.cases, () => void this.reload());
+    this.workspace = new ProjectWorkspace(project, () => void this.reload());
+    this.detailsOpen = detailsOpen;
   }
 
   private done(text: string): void {
