@@ -7,6 +7,7 @@
  * Harrow Mill dyehouse and its client) is invented.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import fs from 'node:fs';
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import type { CaseKind, ProjectCase } from '../../app/api/contract.js';
@@ -18,7 +19,7 @@ import { startBrowserServer, type BrowserServer } from '../../main/server/browse
 import type { LaminaServices } from '../../main/services/lamina-services.js';
 import { blankCaseInputs } from '../../renderer/src/workspace/blank-cases.js';
 import { VERDICT_WORDS } from '../../renderer/src/report-view/verdict-words.js';
-import { resultsFolder, useBrowserSession } from './browser-session.js';
+import { projectRoot, resultsFolder, useBrowserSession } from './browser-session.js';
 
 const session = useBrowserSession('lamina-workspace-e2e-');
 let server: BrowserServer;
@@ -118,6 +119,40 @@ describe('the project workspace', () => {
     await expectNoHorizontalScroll(page);
     await shot(page, 'workspace-1280.png');
     expect(problems).toEqual([]);
+    await page.close();
+  });
+
+  it('adds a case from a case file read in the page, and refuses a file the service cannot store in its one sentence', async () => {
+    const problems: string[] = [];
+    const projectId = seedProject('Harrow Mill plant room');
+    const page = await openProject('Harrow Mill plant room', problems);
+    const example = path.join(projectRoot, 'data', 'examples', 'pipe-hot-water-plant-room.json');
+    const title = (JSON.parse(fs.readFileSync(example, 'utf8')) as { title: string }).title;
+
+    await page.setInputFiles('#case-add-file', example);
+    await expect.poll(() => rowNames(page)).toEqual([title]);
+    const stored = services.projects.open(projectId).cases[0]!;
+    const key = solvedReport(stored).keyFigures[0]!;
+    expect(await row(page, title).locator('[data-testid="case-key-value"]').textContent()).toBe(formatQuantity(key.value, key.quantity, 'SI'));
+
+    // A pipe run with no insulation layers: the service's refusal, prefixed with what was not done.
+    const bare = { schemaVersion: 1, kind: 'pipe', ...JSON.parse(fs.readFileSync(example, 'utf8')), layers: [] };
+    await page.setInputFiles('#case-add-file', { name: 'bare-pipe.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify(bare)) });
+    const refusal = (() => {
+      try {
+        services.projects.addCase(projectId, { name: 'bare', inputs: bare });
+      } catch (error) {
+        return (error as Error).message;
+      }
+      throw new Error('The service stored a pipe run without insulation.');
+    })();
+    await expect.poll(() => page.locator('[data-testid="cases-notice"]').textContent()).toBe(`Nothing was added from bare-pipe.json: ${refusal}`);
+    await page.setInputFiles('#case-add-file', { name: 'notes.json', mimeType: 'application/json', buffer: Buffer.from('{ site visit') });
+    await expect.poll(() => page.locator('[data-testid="cases-notice"]').textContent()).toMatch(/^Nothing was added from notes\.json: it is not JSON \(.+\)\.$/);
+    expect(storedNames(projectId)).toEqual([title]);
+    await shot(page, 'workspace-file-refused.png');
+    // The only console line is Chromium logging the refused add's HTTP 400, which the page showed above.
+    expect(problems).toEqual(['error: Failed to load resource: the server responded with a status of 400 (Bad Request)']);
     await page.close();
   });
 
