@@ -20,6 +20,8 @@ import { SolveClient, type TimedAnswer } from './solve-client.js';
 
 /** Pause after the last edit before saving (as the project details wait). */
 export const CASE_SAVE_DELAY_MS = 400;
+/** A pause in typing this long ends an undo step even while the box keeps the focus. */
+export const UNDO_PAUSE_MS = 1000;
 
 export type CaseSavePhase = 'idle' | 'waiting' | 'saving' | 'failed';
 
@@ -38,6 +40,8 @@ export class CaseEditorState {
   solveMs = $state<number | null>(null);
   roundTripMs = $state<number | null>(null);
   solving = $state(false);
+  /** Set when the solving worker could not start or stopped. */
+  solverProblem = $state('');
   phase = $state<CaseSavePhase>('idle');
   failure = $state('');
   canUndo = $state(false);
@@ -56,6 +60,7 @@ export class CaseEditorState {
   private timer: ReturnType<typeof setTimeout> | undefined;
   private saving: Promise<void> | undefined;
   private ready = false;
+  private lastEditAt = 0;
 
   constructor(projectCase: ProjectCase, private readonly onSaved: (saved: ProjectCase) => void) {
     this.caseId = projectCase.id;
@@ -69,7 +74,14 @@ export class CaseEditorState {
     const [materials, sizes] = await Promise.all([laminaApi().materials.list({}), laminaApi().pipeSizes()]);
     this.library = new Map(materials.map((m) => [m.id, m]));
     this.pipeSizes = sizes;
-    this.solver = new SolveClient(() => this.pipeSizes, (timed) => this.answered(timed));
+    this.solver = new SolveClient(
+      () => this.pipeSizes,
+      (timed) => this.answered(timed),
+      (message) => {
+        this.solving = false;
+        this.solverProblem = `The results cannot be worked out in this window: ${message}.`;
+      },
+    );
     this.ready = true;
     this.requestSolve();
   }
@@ -114,6 +126,9 @@ export class CaseEditorState {
   /** Any other change: a choice, a text, a build-up step. `group` joins typing in one box into one undo step. */
   edit(next: Json, group: string | null = null): void {
     if (next === this.doc) return;
+    const now = performance.now();
+    if (now - this.lastEditAt > UNDO_PAUSE_MS) this.history.seal();
+    this.lastEditAt = now;
     this.history.record(this.doc, group);
     if (group === null) this.history.seal();
     this.doc = next;

@@ -23,9 +23,15 @@ export class SolveClient {
   constructor(
     private readonly pipeSizes: () => readonly PipeSize[],
     private readonly onAnswer: (timed: TimedAnswer) => void,
+    private readonly onFailure: (message: string) => void,
   ) {
     this.worker = new Worker(new URL('./solve-worker.ts', import.meta.url), { type: 'module' });
     this.worker.onmessage = (event: MessageEvent<SolveAnswer>) => this.received(event.data);
+    // A worker that cannot load or crashes says so once; the page keeps its last good results.
+    this.worker.onerror = (event: ErrorEvent) => {
+      this.inFlight = null;
+      this.onFailure(event.message || 'the solver stopped unexpectedly');
+    };
   }
 
   solve(caseJson: unknown, materials: readonly (readonly [number, MaterialProperties])[]): void {
