@@ -4,7 +4,6 @@
  * from the flat-surface input and its solved result. Pure: the same input and result give the
  * same report.
  */
-import { numberAsGiven } from '../../base/number-text.js';
 import { asSentence } from '../../report/as-sentence.js';
 import { formatQuantity } from '../../report/format-quantity.js';
 import type { CaseReport, ReportFigure } from '../../report/report-model.js';
@@ -34,7 +33,7 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
   const verdicts = insulatedVerdicts(result);
   const keyFigures: ReportFigure[] = [
     { label: `Heat ${word} per m² of surface`, value: Math.abs(result.heatFlowDensity), quantity: 'heatFlux' },
-    { label: `Heat ${word} over the ${numberAsGiven(input.area)} m²`, value: Math.abs(result.heatLoss), quantity: 'heatFlow' },
+    { label: `Heat ${word} over the whole area`, value: Math.abs(result.heatLoss), quantity: 'heatFlow' },
     { label: 'Outer surface temperature', value: result.surfaceTemperature, quantity: 'temperature' },
     {
       label: `Energy ${lost ? 'lost' : 'gained'} per year`,
@@ -74,12 +73,12 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
 /** "Vertical surface 6 m high, 150 m²; wall 8.0 mm Carbon steel; insulation 100.0 mm Rock wool; …". */
 function subjectOf(input: FlatSurfaceInput): string {
   const s = input.surface;
-  const shape = s.kind === 'vertical' ? `Vertical surface ${numberAsGiven(s.height)} m high` : `Horizontal surface facing ${s.facing}`;
+  const shape = s.kind === 'vertical' ? `Vertical surface ${formatQuantity(s.height, 'length')} high` : `Horizontal surface facing ${s.facing}`;
   const wall = input.wall ? `; wall ${formatQuantity(input.wall.thickness, 'thickness')} ${input.wall.material.name}` : '';
   const insulation = input.layers.map((l) => `${formatQuantity(l.thickness, 'thickness')} ${l.material.name}`).join(' + ');
   const jacket = input.jacket ? `; jacket ${formatQuantity(input.jacket.thickness, 'thickness')} ${input.jacket.material.name}` : '; no jacket';
   const exposure = input.ambient.exposure.kind === 'outdoor' ? `outdoors in ${formatQuantity(input.ambient.exposure.windSpeed, 'windSpeed')} wind` : 'indoors in still air';
-  return `${shape}, ${numberAsGiven(input.area)} m²${wall}; insulation ${insulation}${jacket}; ${exposure}.`;
+  return `${shape}, ${formatQuantity(input.area, 'area')}${wall}; insulation ${insulation}${jacket}; ${exposure}.`;
 }
 
 /** The correlations the outer film uses for this surface, for the sources. */

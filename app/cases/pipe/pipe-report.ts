@@ -3,7 +3,6 @@
  * temperature and checks, the build-up and temperatures, from the pipe input and its solved
  * result. Pure: the same input and result give the same report.
  */
-import { numberAsGiven } from '../../base/number-text.js';
 import { asSentence } from '../../report/as-sentence.js';
 import { formatQuantity, formatQuantityNumber } from '../../report/format-quantity.js';
 import type { CaseReport, ReportFigure } from '../../report/report-model.js';
@@ -35,7 +34,7 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
   const verdicts = insulatedVerdicts(result);
   const keyFigures: ReportFigure[] = [
     { label: `Heat ${word} per metre`, value: Math.abs(result.heatLossPerMetre), quantity: 'heatFlowPerLength' },
-    { label: `Heat ${word} over the ${numberAsGiven(input.length)} m run`, value: Math.abs(result.heatLoss), quantity: 'heatFlow' },
+    { label: `Heat ${word} over the whole run`, value: Math.abs(result.heatLoss), quantity: 'heatFlow' },
     { label: 'Outer surface temperature', value: result.surfaceTemperature, quantity: 'temperature' },
     { label: `Heat flow density ${lost ? 'from' : 'into'} the outer surface`, value: Math.abs(result.heatFlowDensityAtSurface), quantity: 'heatFlux' },
     {

@@ -33,7 +33,7 @@ export function wallReport(input: WallInput, analysis: WallAnalysis): CaseReport
       { label: 'Total thermal resistance R_T', value: w.totalResistance, quantity: 'thermalResistance', note: 'surface to surface plus R_si and R_se' },
       { label: 'Inside surface temperature', value: w.insideSurfaceTemperature, quantity: 'temperature', note: `at the design condition, with R_si = ${formatQuantity(w.insideSurfaceResistance, 'thermalResistance')}` },
       { label: 'Heat flow density', value: w.heatFlowDensity, quantity: 'heatFlux', note: 'from the inside to the outside' },
-      { label: `Heat flow through the ${numberAsGiven(w.area)} m²`, value: w.heatFlow, quantity: 'heatFlow' },
+      { label: 'Heat flow through the whole area', value: w.heatFlow, quantity: 'heatFlow' },
     ],
     verdicts,
     sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis), mouldSection(analysis), interstitialSection(analysis), ...(monthly ? [monthly] : [])],
