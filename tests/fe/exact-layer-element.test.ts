@@ -9,6 +9,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { solveSteady, type ConductivityModel } from '../../app/fe/index.js';
+import { exactLayerProfile } from '../../app/fe/exact-layer-profile.js';
 
 /** ∫_0^θ λ, written from the model's definition (antiderivative of the polynomial; trapezoids of the table). */
 function kirchhoff(model: ConductivityModel, theta: number): number {
@@ -78,5 +79,23 @@ describe('one exact element per layer reproduces the Kirchhoff solution', () => 
     expect(asked.mesh.elementsPerLayer).toEqual([4]);
     const ordered = solveSteady({ ...base, layers: [{ thickness: 0.1, conductivity: polynomial }], options: { order: 2 } });
     expect(ordered.mesh.order).toBe(2);
+  });
+});
+
+describe('the temperature inside an exact layer, for drawing', () => {
+  it('constant λ in a cylinder: the logarithmic profile θ = θ1 + (θ2 − θ1)·ln(r/r1)/ln(r2/r1) (Incropera §3.3.1, eq. 3.26)', () => {
+    const [r1, r2, t1, t2] = [0.0571, 0.1071, 80, 29.7];
+    for (const [r, t] of exactLayerProfile('axisymmetric', { kind: 'constant', value: 0.04 }, r1, r2, t1, t2, 10)) {
+      expect(Math.abs(t - (t1 + ((t2 - t1) * Math.log(r / r1)) / Math.log(r2 / r1)))).toBeLessThan(1e-9);
+    }
+  });
+
+  it('λ(θ) in a plane layer: ∫λdθ from the face grows linearly with depth (Kirchhoff transform, Carslaw & Jaeger §1.7)', () => {
+    const [d, t1, t2] = [0.08, 300, 40];
+    const profile = exactLayerProfile('planar', polynomial, 0, d, t1, t2, 8);
+    const total = kirchhoff(polynomial, t2) - kirchhoff(polynomial, t1);
+    for (const [x, t] of profile) expect(Math.abs(kirchhoff(polynomial, t) - kirchhoff(polynomial, t1) - (total * x) / d)).toBeLessThan(1e-9 * Math.abs(total));
+    expect(profile[0]).toEqual([0, t1]);
+    expect(profile[8]).toEqual([d, t2]);
   });
 });

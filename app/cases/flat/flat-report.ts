@@ -59,7 +59,7 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
     sections: [
       conditionsSection(input, [{ label: 'Area of the surface', value: input.area, quantity: 'area' }, ...orientation]),
       buildUpSection(result, materials, { geometry: 'plane' }),
-      temperaturesSection(result, { positionLabel: 'distance from the inner surface', shownPosition: (x) => x }),
+      temperaturesSection(result, { positionLabel: 'distance from the inner surface', shownPosition: (x) => x, profile: { kind: 'planar', conductivities: materials.map((m) => m.conductivity) } }),
       surfaceSection(result),
     ],
     energyBalance: { ...result.energyBalance, quantity: 'heatFlux' },

@@ -5,6 +5,8 @@
  * a pure function of the case's input and its solved result; the pipe and flat reports add their
  * own headline figures and subject line.
  */
+import type { ConductivityModel } from '../../fe/conductivity.js';
+import { exactLayerProfile } from '../../fe/exact-layer-profile.js';
 import saturationFormulas from '../../../data/physics/saturation-formulas.json' with { type: 'json' };
 import { numberAsGiven } from '../../base/number-text.js';
 import { DEFAULT_TOUCH_LIMIT } from '../../checks/personnel-protection.js';
@@ -28,7 +30,12 @@ export interface InsulatedGeometry {
   readonly positionLabel: string;
   /** Distance shown for a stored position (a pipe shows the radius itself, a flat surface the distance from its inner face). */
   readonly shownPosition: (position: number) => number;
+  /** How the temperature runs inside each layer (for the chart): the geometry and each layer's λ(θ). */
+  readonly profile: { readonly kind: 'planar' | 'axisymmetric'; readonly conductivities: readonly ConductivityModel[] };
 }
+
+/** Points drawn inside each layer, so a cylinder's logarithmic profile and a λ(θ) layer's curve show as they are. */
+const PROFILE_POINTS_PER_LAYER = 12;
 
 const TEMPERATURES_TABLE = 'Temperatures through the build-up';
 
@@ -101,9 +108,12 @@ export function temperaturesSection(result: InsulatedResult, geometry: Insulated
       row(`outer surface of the ${layerLabel(last, layers)}`, last.outerPosition, last.outerTemperature),
     ],
   };
-  const points = [[first.innerPosition, first.innerTemperature] as const, ...layers.map((l) => [l.outerPosition, l.outerTemperature] as const)].map(
-    ([x, t]) => [geometry.shownPosition(x), t] as const,
-  );
+  const points = layers
+    .flatMap((l, i) => {
+      const inside = exactLayerProfile(geometry.profile.kind, geometry.profile.conductivities[i]!, l.innerPosition, l.outerPosition, l.innerTemperature, l.outerTemperature, PROFILE_POINTS_PER_LAYER);
+      return i === 0 ? inside : inside.slice(1);
+    })
+    .map(([x, t]) => [geometry.shownPosition(x), t] as const);
   const ends = [points[0]![0], points[points.length - 1]![0]];
   return {
     id: 'temperatures',

@@ -59,7 +59,7 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
         ...(result.height !== null ? [{ label: 'Height for convection on the vertical pipe', value: result.height, quantity: 'length' as const }] : []),
       ]),
       buildUpSection(result, materials, { geometry: 'cylinder', innerRadius: result.layers[0]!.innerPosition }),
-      temperaturesSection(result, { positionLabel: 'radius', shownPosition: (r) => r }),
+      temperaturesSection(result, { positionLabel: 'radius', shownPosition: (r) => r, profile: { kind: 'axisymmetric', conductivities: materials.map((m) => m.conductivity) } }),
       surfaceSection(result),
       {
         id: 'pipe',

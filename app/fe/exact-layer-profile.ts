@@ -1,0 +1,45 @@
+/**
+ * Temperatures inside a layer solved as one exact element (exact-layer-element.ts), for drawing:
+ * in steady conduction without heat generation the Kirchhoff potential ∫λ dθ varies linearly in
+ * x (plane) or in ln r (cylinder) across the layer, so the temperature at any point follows from
+ * the two face temperatures. For a constant λ this is the straight line of a plane layer and the
+ * logarithmic profile of a cylindrical one; with λ(θ) it is curved as the physics says.
+ */
+import type { ConductivityModel } from './conductivity.js';
+import { meanConductivityBetween } from './conductivity-mean.js';
+import type { Geometry } from './problem.js';
+
+/** `count` + 1 points from the inner face (x1, t1) to the outer face (x2, t2), positions in m, °C. */
+export function exactLayerProfile(
+  geometry: Geometry['kind'],
+  model: ConductivityModel,
+  x1: number,
+  x2: number,
+  t1: number,
+  t2: number,
+  count: number,
+): [number, number][] {
+  const total = meanConductivityBetween(model, t1, t2) * (t2 - t1);
+  const share = (x: number) => (geometry === 'planar' ? (x - x1) / (x2 - x1) : Math.log(x / x1) / Math.log(x2 / x1));
+  const points: [number, number][] = [];
+  for (let i = 0; i <= count; i++) {
+    const x = geometry === 'planar' ? x1 + ((x2 - x1) * i) / count : x1 * Math.pow(x2 / x1, i / count);
+    points.push([x, i === 0 ? t1 : i === count ? t2 : temperatureAtShare(model, t1, t2, total, share(x))]);
+  }
+  return points;
+}
+
+/** θ between t1 and t2 where ∫_{t1}^{θ} λ = s·total (λ > 0, so the integral is monotone in θ): bisection to round-off. */
+function temperatureAtShare(model: ConductivityModel, t1: number, t2: number, total: number, s: number): number {
+  let lo = Math.min(t1, t2);
+  let hi = Math.max(t1, t2);
+  const rising = t2 > t1;
+  for (let k = 0; k < 60 && hi - lo > 1e-12 * (1 + Math.abs(hi)); k++) {
+    const mid = (lo + hi) / 2;
+    const reached = meanConductivityBetween(model, t1, mid) * (mid - t1);
+    // Short of the share: move away from t1.
+    if (Math.abs(reached) < Math.abs(s * total) === rising) lo = mid;
+    else hi = mid;
+  }
+  return (lo + hi) / 2;
+}
