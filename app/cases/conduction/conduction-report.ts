@@ -5,6 +5,7 @@
  * inside (the cold-store example starts at the warm outside face), so the faces are the exposed
  * faces of the first and last layers, the first at x = 0. Unnamed layers are "layer 1", "layer 2".
  */
+import { exactLayerProfile } from '../../fe/exact-layer-profile.js';
 import { numberAsGiven } from '../../base/number-text.js';
 import type { QuantityName } from '../../base/quantities.js';
 import type { FaceCondition, SteadyProblem, TransientProblem } from '../../fe/problem.js';
@@ -100,6 +101,15 @@ const ASSUMPTIONS = [
   'A conductivity that depends on temperature is evaluated at the local temperature.',
 ];
 
+/** Points to draw: each layer's exact profile where no layer generates heat (exact-layer-profile.ts), else the nodal values. */
+function steadyProfile(problem: SteadyProblem, r: SteadyResult): (readonly [number, number])[] {
+  if (problem.layers.some((l) => (l.heatGeneration ?? 0) !== 0)) return r.positions.map((x, k) => [x, r.temperatures[k]!] as const);
+  return r.layers.flatMap((l, i) => {
+    const inside = exactLayerProfile(problem.geometry.kind, problem.layers[i]!.conductivity, l.innerPosition, l.outerPosition, l.innerTemperature, l.outerTemperature, 12);
+    return i === 0 ? inside : inside.slice(1);
+  });
+}
+
 function steadyReport(title: string, problem: SteadyProblem, r: SteadyResult, warnings: readonly string[], naming: Naming): CaseReport {
   const q = r.faces.inner.heatIn;
   const generated = r.balance.generated !== 0;
@@ -157,7 +167,7 @@ function steadyReport(title: string, problem: SteadyProblem, r: SteadyResult, wa
               title: 'Temperature through the layers',
               x: { label: naming.position, quantity: 'position' },
               y: { label: 'temperature', quantity: 'temperature' },
-              series: [{ name: 'temperature', points: r.positions.map((x, k) => [x, r.temperatures[k]!] as const) }],
+              series: [{ name: 'temperature', points: steadyProfile(problem, r) }],
               markers: r.interfaces.map((f) => ({ x: f.position, label: `between ${naming.layers[f.index]} and ${naming.layers[f.index + 1]}` })),
               tabulatedIn: temperatures.title,
             },
