@@ -16,7 +16,12 @@ export interface BackupInfo {
  * it aside).
  */
 export type DatabaseStatus =
-  | { readonly state: 'open'; readonly databasePath: string }
+  | {
+      readonly state: 'open';
+      readonly databasePath: string;
+      /** True when this start created the library (a first start): the app then opens on the demo project. */
+      readonly createdAtThisStart: boolean;
+    }
   | {
       readonly state: 'unavailable';
       readonly databasePath: string;

@@ -46,7 +46,7 @@ export class LibraryHost {
   }
 
   status(): DatabaseStatus {
-    if (this.services) return { state: 'open', databasePath: this.services.databasePath };
+    if (this.services) return { state: 'open', databasePath: this.services.databasePath, createdAtThisStart: this.services.migratedFrom === 0 };
     const failure = this.failure ?? { message: 'The library is closed.', reason: 'closed' };
     return { state: 'unavailable', databasePath: this.databasePath, ...failure, backups: this.backups() };
   }

@@ -33,5 +33,6 @@ export function demoProjectFile(dataFolder = DEFAULT_DATA_FOLDER): unknown {
 }
 
 export function addDemoProject(projects: ProjectsService, dataFolder = DEFAULT_DATA_FOLDER): Project {
-  return projects.importProject(demoProjectFile(dataFolder)).project;
+  // Asked for again, it is added beside any demo already there.
+  return projects.importProject(demoProjectFile(dataFolder), 'copy').project;
 }

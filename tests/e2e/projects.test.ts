@@ -220,6 +220,13 @@ describe('projects in the browser', () => {
       await expect.poll(() => notice(page).textContent()).toContain(`Exported "Tallow Quay cold store, phase 2" as ${download.suggestedFilename()}`);
 
       await page.setInputFiles('#project-import', exportedPath);
+      // The project is already in the library: Lamina asks whether to add a copy or replace it.
+      await expect.poll(() => page.textContent('[data-testid="import-question"]')).toContain(
+        'A project "Tallow Quay cold store, phase 2" from the same file is already in the library: choose whether to add this one as a copy or to replace it.',
+      );
+      expect(services.projects.list()).toHaveLength(1);
+      await shot(page, 'projects-import-question.png');
+      await page.click('#import-as-copy');
       await expect.poll(() => notice(page).textContent()).toContain(
         `Imported "Tallow Quay cold store, phase 2" from ${download.suggestedFilename()} with 1 case. Its materials: 2 already in your library (reused), 0 added to the library.`,
       );
@@ -255,8 +262,9 @@ describe('projects in the browser', () => {
       await expect.poll(() => page.textContent('[data-testid="project-count"]')).toContain('0 of 2 projects shown');
       expect(await page.locator('[data-testid="projects-empty"]').textContent()).toBe('No project matches this search.');
 
-      // The only console line is Chromium logging the refused import's HTTP 400, which the page showed above.
-      expect(problems).toEqual(['error: Failed to load resource: the server responded with a status of 400 (Bad Request)']);
+      // The only console lines are Chromium logging the two HTTP 400s the page turned into words above:
+      // the import that asked copy-or-replace, and the file that is not a project file.
+      expect(problems).toEqual(Array(2).fill('error: Failed to load resource: the server responded with a status of 400 (Bad Request)'));
       await page.close();
     } finally {
       await server.close();

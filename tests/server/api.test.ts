@@ -217,7 +217,7 @@ describe('backups channels', () => {
   it('creates a backup and restores it, reopening the library', async () => {
     const folder = tempFolder();
     const { url } = await serve(folder);
-    expect(await ok(url, 'database:status', {})).toEqual({ state: 'open', databasePath: path.join(folder, 'data', 'lamina.sqlite') });
+    expect(await ok(url, 'database:status', {})).toEqual({ state: 'open', databasePath: path.join(folder, 'data', 'lamina.sqlite'), createdAtThisStart: true });
     const before = await ok(url, 'materials:create', { material: userMaterial });
     const backup = await ok(url, 'backups:create', {});
     expect(backup.reason).toBe('manual');

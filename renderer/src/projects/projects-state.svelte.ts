@@ -4,7 +4,7 @@
  * from the Node side). Every call goes through the typed API (bridge/lamina-api.ts).
  */
 import type { Project, ProjectSummary } from '../../../app/api/contract.js';
-import { laminaApi, messageOf } from '../bridge/lamina-api.js';
+import { fieldOf, laminaApi, messageOf } from '../bridge/lamina-api.js';
 import { ProjectEditor } from './project-editor.svelte.js';
 import { ProjectWorkspace } from '../workspace/project-workspace.svelte.js';
 
@@ -30,6 +30,8 @@ export class ProjectsState {
   detailsOpen = $state(false);
   recycleBin = $state<readonly ProjectSummary[]>([]);
   showingRecycleBin = $state(false);
+  /** A project file whose project is already in the library, waiting for the user to choose copy or replace. */
+  importQuestion = $state<{ readonly fileName: string; readonly text: string; readonly question: string } | undefined>(undefined);
   confirmingEmpty = $state(false);
 
   readonly shown = $derived.by(() => {
@@ -152,18 +154,39 @@ export class ProjectsState {
     }
   }
 
-  async importFile(fileName: string, text: string): Promise<void> {
+  /** Imports a project file; when its project is already there, asks first (importQuestion) unless `onExisting` says. */
+  async importFile(fileName: string, text: string, onExisting?: 'copy' | 'replace'): Promise<void> {
+    this.importQuestion = undefined;
     try {
-      const result = await laminaApi().projects.importProject({ text });
+      const result = await laminaApi().projects.importProject(onExisting ? { text, onExisting } : { text });
       await this.editor?.flush();
       this.show(result.project);
+      const replaced = result.replaced === null ? '' : ' The project it replaces is in the recycle bin, where it can be restored.';
       this.done(
         `Imported "${result.project.name}" from ${fileName} with ${describeCount(result.project.cases.length, 'case')}. ` +
-          `Its materials: ${result.materialsReused} already in your library (reused), ${result.materialsCreated} added to the library.`,
+          `Its materials: ${result.materialsReused} already in your library (reused), ${result.materialsCreated} added to the library.${replaced}`,
       );
       await this.reload();
     } catch (error) {
+      if (fieldOf(error) === 'onExisting') {
+        this.notice = undefined;
+        this.importQuestion = { fileName, text, question: messageOf(error).replace(/ \(onExisting: copy or replace\)\.$/, '.') };
+        return;
+      }
       this.notice = { kind: 'refused', text: `Nothing was imported from ${fileName}: ${messageOf(error)}` };
+    }
+  }
+
+  /** Adds the demo project of the invented creamery again, and opens it. */
+  async addDemo(): Promise<void> {
+    try {
+      const project = await laminaApi().projects.addDemo();
+      await this.editor?.flush();
+      this.show(project);
+      this.done(`Added the demo project "${project.name}": invented data, for trying Lamina out, not for design.`);
+      await this.reload();
+    } catch (error) {
+      this.refuse(error);
     }
   }
 
