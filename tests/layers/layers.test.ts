@@ -52,7 +52,7 @@ describe('the checker on a planted project', () => {
         "const json = await import('../../data/materials.json');",
       ].join('\n'),
     );
-    plant('renderer/src/ok.ts', "import { mount } from 'svelte';\nimport { solve } from '../../app/fe/index.js';\nimport type { X } from '../../app/api/contract.js';\n");
+    plant('renderer/src/ok.ts', "import { mount } from 'svelte';\nimport { solve } from '../../app/fe/index.js';\nimport type { X } from '../../app/api/contract.js';\nimport series from '../../data/series.csv?raw';\n");
     plant('main/server/ok.ts', "import { readFileSync } from 'node:fs';\nimport type { X } from '../../app/api/contract.js';\n");
     // Violations, one kind per file.
     plant('app/bad-node.ts', "import { readFileSync } from 'node:fs';\n");
@@ -103,7 +103,7 @@ describe('the checker on a planted project', () => {
   });
 
   it('catches renderer/ importing main/ or Node, and main/ importing renderer/', () => {
-    expect(messagesFor('renderer/bad-main.ts')).toEqual(['renderer/ may import only renderer/ and app/, but this file imports "../main/server/browser-server.js".']);
+    expect(messagesFor('renderer/bad-main.ts')).toEqual(['renderer/ may import only renderer/, app/ and data files, but this file imports "../main/server/browser-server.js".']);
     expect(messagesFor('renderer/bad-node.svelte')).toEqual(['renderer/ may not import Node-side modules, but this file imports "node:fs".']);
     expect(messagesFor('renderer/bad-builtin.ts')).toEqual(['renderer/ may not import Node-side modules, but this file imports "path".']);
     expect(messagesFor('main/bad-renderer.ts')).toEqual(['main/ may not import renderer/, but this file imports "../renderer/src/App.svelte".']);
