@@ -4,6 +4,8 @@
  * checks read the solved result, and how the result reads as a report. `solveCase` runs the four
  * in that order; nothing outside app/ decides what a case means.
  */
+import type { QuantityText } from '../base/quantity-text.js';
+import type { UnitSystem } from '../base/unit-systems.js';
 import type { CheckResult } from '../checks/check-result.js';
 import type { CaseReport } from '../report/report-model.js';
 import type { MaterialResolver } from './case-material.js';
@@ -14,6 +16,11 @@ export interface CaseContext {
   readonly resolveMaterial: MaterialResolver;
   /** The pipe and tube size tables (data/pipe-sizes), for pipe cases that name a size. */
   readonly pipeSizes?: readonly PipeSize[];
+  /**
+   * The project's units, in which every sentence of the report reads (reasons, margins, subject,
+   * notes, assumptions, warnings); default 'SI'. Inputs and result figures stay SI either way.
+   */
+  readonly unitSystem?: UnitSystem;
 }
 
 /** A case file after parsing: its validated input, its title, and the defaults the parser chose. */
@@ -38,7 +45,7 @@ export interface CaseKind<Input = unknown, Result = unknown> {
   // Method syntax: the registry holds kinds of different Input and Result in one list.
   /** Validates everything the solve will need; throws InputError naming the field. */
   parse(json: unknown, context: CaseContext): ParsedCase<Input>;
-  /** Solves, then runs the checks on the solved result. */
-  solve(parsed: ParsedCase<Input>): SolvedParts<Result>;
-  report(parsed: ParsedCase<Input>, solved: SolvedParts<Result>): CaseReport;
+  /** Solves, then runs the checks on the solved result; `text` writes the figures in its sentences. */
+  solve(parsed: ParsedCase<Input>, text: QuantityText): SolvedParts<Result>;
+  report(parsed: ParsedCase<Input>, solved: SolvedParts<Result>, text: QuantityText): CaseReport;
 }

@@ -7,6 +7,7 @@ import { requireBoundedNesting } from '../base/json-depth.js';
 import { InputError } from '../base/input-error.js';
 import { shownValue } from '../base/shown-value.js';
 import { isObject } from '../base/field-checks.js';
+import { quantityText } from '../base/quantity-text.js';
 import type { CheckResult } from '../checks/check-result.js';
 import type { CaseReport } from '../report/report-model.js';
 import type { CaseContext, CaseKind, ParsedCase } from './case-kind.js';
@@ -43,7 +44,8 @@ export function parseCase(json: unknown, context: CaseContext): { kind: CaseKind
 
 export function solveCase(json: unknown, context: CaseContext): SolvedCase {
   const { kind, parsed } = parseCase(json, context);
-  const solved = kind.solve(parsed);
+  const text = quantityText(context.unitSystem);
+  const solved = kind.solve(parsed, text);
   return {
     kind: kind.kind,
     title: parsed.title,
@@ -52,6 +54,6 @@ export function solveCase(json: unknown, context: CaseContext): SolvedCase {
     checks: solved.checks,
     warnings: solved.warnings,
     assumptions: solved.assumptions,
-    report: kind.report(parsed, solved),
+    report: kind.report(parsed, solved, text),
   };
 }

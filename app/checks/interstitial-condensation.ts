@@ -5,6 +5,7 @@
  * tightest vapour line under saturation and the condensation rate g_c = g_in − g_out where it
  * touches. A function of the solved state only: it never solves the wall itself.
  */
+import { SI_TEXT, type QuantityText } from '../base/quantity-text.js';
 import type { AirCondition } from '../physics/air-condition.js';
 import { saturationPressure } from '../physics/index.js';
 import type { CheckResult } from './check-result.js';
@@ -114,10 +115,12 @@ export function checkInterstitialAtDesignCondition(
   outside: AirCondition,
   humidity: InsideHumiditySource | undefined,
   options: InterstitialOptions = {},
+  text: QuantityText = SI_TEXT,
 ): InterstitialDesignResult {
   const state = interstitialStateAt(stack, inside, outside, humidity, options);
   const condensing = state.points.filter((p) => p.condensationRate > 0);
-  const perDay = (g: number) => `${(g * 86_400 * 1000).toFixed(2)} g/(m²·day)`;
+  const perDay = (g: number) => text.keepingSi(`${(g * 86_400 * 1000).toFixed(2)} g/(m²·day)`, g, 'condensationRate');
+  const pressure = (p: number) => text.figure(p, 'vapourPressure');
   const source = describeInsideHumidity(humidity);
   const check: CheckResult = {
     check: 'interstitial-condensation',
@@ -126,7 +129,7 @@ export function checkInterstitialAtDesignCondition(
     ...(state.saturationReserve !== null ? { margin: { value: state.saturationReserve, unit: 'Pa' } } : {}),
     reason:
       condensing.length === 0
-        ? `No interstitial condensation at the design condition (p_i ${state.insideVapourPressure.toFixed(0)} Pa from ${source}, p_e ${state.outsideVapourPressure.toFixed(0)} Pa): the vapour pressure stays below saturation at every interface.`
+        ? `No interstitial condensation at the design condition (p_i ${pressure(state.insideVapourPressure)} from ${source}, p_e ${pressure(state.outsideVapourPressure)}): the vapour pressure stays below saturation at every interface.`
         : `Condensation at the design condition at the ${condensing.map((p) => `${p.name} (${perDay(p.condensationRate)})`).join(', ')}; run the monthly procedure to see whether it dries out within the year.`,
     caution: MOISTURE_CAUTION,
   };

@@ -10,6 +10,7 @@
  * 3. Report the largest accumulated amount and whether everything has evaporated at the end of the
  *    twelve months (dries out within the year).
  */
+import { SI_TEXT, type QuantityText } from '../base/quantity-text.js';
 import type { ClimateMonth, MonthlyClimate } from './monthly-climate.js';
 import { monthDuration } from './monthly-climate.js';
 import type { CheckResult } from './check-result.js';
@@ -59,6 +60,7 @@ export function checkInterstitialMonthly(
   stacks: readonly VapourStackAtCondition[],
   humidity: InsideHumiditySource | undefined,
   options: InterstitialOptions = {},
+  text: QuantityText = SI_TEXT,
 ): InterstitialMonthlyResult {
   const months: readonly ClimateMonth[] = c.months;
   const dry = months.map((m, i) => interstitialStateAt(stacks[i]!, m.inside, m.outside, humidity, options));
@@ -98,7 +100,7 @@ export function checkInterstitialMonthly(
   const driesOut = remainingAtEnd === 0;
   const reserves = dry.map((s) => s.saturationReserve).filter((r): r is number => r !== null);
   const reserve = reserves.length ? Math.min(...reserves) : null;
-  const kg = (x: number) => `${x.toFixed(3)} kg/m²`;
+  const kg = (x: number) => text.keepingSi(`${x.toFixed(3)} kg/m²`, x, 'massPerArea');
   const verdict: CheckResult['verdict'] = !anyCondensation ? 'pass' : driesOut ? 'warning' : 'fail';
   const reason = !anyCondensation
     ? `No interstitial condensation in any month of the ${c.name} climate.`

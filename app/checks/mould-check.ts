@@ -8,6 +8,7 @@
  * `surfaceHumidityConditions` and `mouldDesignIndices` need no solve; the wall case then solves
  * the design condition(s) and `assessMould` judges them.
  */
+import { SI_TEXT, type QuantityText } from '../base/quantity-text.js';
 import type { AirCondition } from '../physics/air-condition.js';
 import type { CheckResult } from './check-result.js';
 import { describeInsideHumidity, insideVapourPressure, type InsideHumiditySource } from './mould-humidity-classes.js';
@@ -76,6 +77,7 @@ function verdictFor(
   condition: SurfaceHumidityCondition | null,
   minimum: number | null,
   source: string,
+  text: QuantityText,
 ): CheckResult {
   const title = check === 'mould' ? 'Mould risk on the inside surface' : 'Condensation on the inside surface';
   const criterion = `a surface relative humidity of at most ${limit * 100} % (${check === 'mould' ? 'mould' : 'surface condensation'})`;
@@ -89,7 +91,8 @@ function verdictFor(
     };
   }
   const margin = factor - minimum;
-  const where = `${condition.label} (θ_i ${condition.inside.temperature} °C, θ_e ${condition.outside.temperature} °C, p_i ${condition.insideVapourPressure.toFixed(0)} Pa from ${source})`;
+  const climate = (t: number) => text.keepingSi(`${t} °C`, t, 'temperature');
+  const where = `${condition.label} (θ_i ${climate(condition.inside.temperature)}, θ_e ${climate(condition.outside.temperature)}, p_i ${text.figure(condition.insideVapourPressure, 'vapourPressure')} from ${source})`;
   const pass = factor > minimum;
   const impossible = minimum >= 1 ? ' The critical factor is 1 or more: no wall can avoid it at this inside humidity; reduce the humidity (ventilation).' : '';
   return {
@@ -127,6 +130,7 @@ export function assessMould(
   solvedSurface: { readonly mould: number | null; readonly condensation: number | null },
   insideSurfaceResistance: number,
   humidity: InsideHumiditySource | undefined,
+  text: QuantityText = SI_TEXT,
 ): MouldAssessment {
   const source = describeInsideHumidity(humidity);
   const factorAt = (index: number | null, surface: number | null) => {
@@ -136,7 +140,7 @@ export function assessMould(
   };
   const atMould = factorAt(design.mould, solvedSurface.mould);
   const criterion = (check: 'mould' | 'surface-condensation-inside', limit: number, index: number | null, at: typeof atMould, minimum: (c: SurfaceHumidityCondition) => number | null) =>
-    verdictFor(check, limit, at?.factor ?? null, index === null ? null : conditions[index]!, index === null ? null : minimum(conditions[index]!), source);
+    verdictFor(check, limit, at?.factor ?? null, index === null ? null : conditions[index]!, index === null ? null : minimum(conditions[index]!), source, text);
   return {
     temperatureFactor: atMould?.factor ?? null,
     insideSurfaceResistance,

@@ -3,7 +3,7 @@
  * compared with a touch limit; the margin is limit − θ_surface in K, positive on the safe side.
  * Only the hot side is checked here; very cold surfaces are also a contact hazard.
  */
-import { numberAsGiven, numberText } from '../base/number-text.js';
+import { SI_TEXT, type QuantityText } from '../base/quantity-text.js';
 import type { CheckResult } from './check-result.js';
 
 /**
@@ -31,12 +31,13 @@ export interface PersonnelProtectionResult extends CheckResult {
   readonly touchLimit: number;
 }
 
-export function personnelProtectionCheck(input: PersonnelProtectionInput): PersonnelProtectionResult {
+/** `text` writes the reason's figures in the project's units. */
+export function personnelProtectionCheck(input: PersonnelProtectionInput, text: QuantityText = SI_TEXT): PersonnelProtectionResult {
   const limit = input.touchLimit ?? DEFAULT_TOUCH_LIMIT;
   const margin = limit - input.surfaceTemperature;
-  const surface = `${numberText(input.surfaceTemperature, { decimals: 1 })} °C`;
-  const distance = `${numberText(Math.abs(margin), { decimals: 1 })} K`;
-  const limitText = `${numberAsGiven(limit)} °C`;
+  const surface = text.figure(input.surfaceTemperature, 'temperature');
+  const distance = text.figure(Math.abs(margin), 'temperatureDifference');
+  const limitText = text.given(limit, 'temperature');
   return {
     check: 'personnel-protection',
     title: 'Personnel protection',

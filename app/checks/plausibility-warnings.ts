@@ -4,6 +4,7 @@
  * temperature no insulated construction meets, or an extreme geometry. They never stop a result;
  * they travel with it (JSON, text, screen and report), so nothing is silently extrapolated.
  */
+import { SI_TEXT, type QuantityText } from '../base/quantity-text.js';
 import type { ConductivityModel } from '../fe/conductivity.js';
 
 /** Above this no insulation or refractory lining is in service; common practice, no source. */
@@ -22,10 +23,11 @@ export interface LayerTemperatureSpan {
   readonly maxServiceTemperature?: number | null;
 }
 
-const celsius = (t: number) => `${t.toFixed(1)} °C`;
-
-/** One warning per layer whose λ(θ) is read where neither its data nor its service range reaches. */
-export function conductivityUseWarnings(spans: readonly LayerTemperatureSpan[]): string[] {
+/** One warning per layer whose λ(θ) is read where neither its data nor its service range reaches; `text` writes its figures. */
+export function conductivityUseWarnings(spans: readonly LayerTemperatureSpan[], text: QuantityText = SI_TEXT): string[] {
+  const celsius = (t: number) => text.keepingSi(`${t.toFixed(1)} °C`, t, 'temperature');
+  const given = (t: number) => text.keepingSi(`${t} °C`, t, 'temperature');
+  const span = (a: number, b: number) => (text.system === 'SI' ? `${a} to ${b} °C` : `${text.number(a, 'temperature')} to ${text.figure(b, 'temperature')}`);
   const warnings: string[] = [];
   for (const s of spans) {
     const m = s.conductivity;
@@ -36,7 +38,7 @@ export function conductivityUseWarnings(spans: readonly LayerTemperatureSpan[]):
       if (s.lowest < first || s.highest > last) {
         const reached = s.lowest < first ? celsius(s.lowest) : celsius(s.highest);
         warnings.push(
-          `${s.name}: its conductivity table covers ${first} to ${last} °C but the layer reaches ${reached}; beyond the table the end value is used unchanged.`,
+          `${s.name}: its conductivity table covers ${span(first, last)} but the layer reaches ${reached}; beyond the table the end value is used unchanged.`,
         );
         continue;
       }
@@ -44,7 +46,7 @@ export function conductivityUseWarnings(spans: readonly LayerTemperatureSpan[]):
     const low = s.minServiceTemperature ?? null;
     const high = s.maxServiceTemperature ?? null;
     if ((low !== null && s.lowest < low) || (high !== null && s.highest > high)) {
-      const range = `${low === null ? 'no lower limit' : `${low} °C`} to ${high === null ? 'no upper limit' : `${high} °C`}`;
+      const range = `${low === null ? 'no lower limit' : given(low)} to ${high === null ? 'no upper limit' : given(high)}`;
       const reached = low !== null && s.lowest < low ? celsius(s.lowest) : celsius(s.highest);
       warnings.push(`${s.name}: its conductivity curve is used at ${reached}, outside the material's service range (${range}), where the curve is not backed by data.`);
     }
@@ -53,19 +55,24 @@ export function conductivityUseWarnings(spans: readonly LayerTemperatureSpan[]):
 }
 
 /** A warning when any temperature of the result is above IMPLAUSIBLE_TEMPERATURE. */
-export function temperaturePlausibilityWarnings(highest: number): string[] {
+export function temperaturePlausibilityWarnings(highest: number, text: QuantityText = SI_TEXT): string[] {
   if (!(highest > IMPLAUSIBLE_TEMPERATURE)) return [];
-  return [`Temperatures reach ${highest.toPrecision(4)} °C, above the ${IMPLAUSIBLE_TEMPERATURE} °C of any insulated or lined construction in service; check the inputs' units.`];
+  const reached = text.keepingSi(`${highest.toPrecision(4)} °C`, highest, 'temperature');
+  return [`Temperatures reach ${reached}, above the ${text.given(IMPLAUSIBLE_TEMPERATURE, 'temperature')} of any insulated or lined construction in service; check the inputs' units.`];
 }
 
 /** A warning for an inner radius outside PLAUSIBLE_INNER_RADIUS. */
-export function geometryPlausibilityWarnings(innerRadius: number | null): string[] {
+export function geometryPlausibilityWarnings(innerRadius: number | null, text: QuantityText = SI_TEXT): string[] {
   if (innerRadius === null) return [];
   if (innerRadius < PLAUSIBLE_INNER_RADIUS.min) {
-    return [`The inner radius of ${(innerRadius * 1000).toPrecision(3)} mm is below 0.1 mm, smaller than any tube; check the inputs' units (metres).`];
+    const radius = text.keepingSi(`${(innerRadius * 1000).toPrecision(3)} mm`, innerRadius, 'position');
+    const smallest = text.keepingSi('0.1 mm', PLAUSIBLE_INNER_RADIUS.min, 'position');
+    return [`The inner radius of ${radius} is below ${smallest}, smaller than any tube; check the inputs' units (metres).`];
   }
   if (innerRadius > PLAUSIBLE_INNER_RADIUS.max) {
-    return [`The inner radius of ${innerRadius.toPrecision(3)} m is above 10 m; a vessel that large is better treated as a flat surface.`];
+    const radius = text.keepingSi(`${innerRadius.toPrecision(3)} m`, innerRadius, 'length');
+    const largest = text.keepingSi('10 m', PLAUSIBLE_INNER_RADIUS.max, 'length');
+    return [`The inner radius of ${radius} is above ${largest}; a vessel that large is better treated as a flat surface.`];
   }
   return [];
 }

@@ -14,7 +14,7 @@
  * one limit against that one. The check's margin is the smallest over the layers, in K, positive
  * on the safe side.
  */
-import { numberAsGiven, numberText } from '../base/number-text.js';
+import { SI_TEXT, type QuantityText } from '../base/quantity-text.js';
 import type { CheckResult } from './check-result.js';
 
 export interface LayerTemperatureSpan {
@@ -61,11 +61,8 @@ export const SERVICE_TEMPERATURE_CAUTION =
   'Service limits come from the material data; a product used outside its range can shrink, char, melt or lose its ' +
   'properties. Confirm the limits with the manufacturer and the design with local codes and licensed professional practice.';
 
-const celsius = (t: number) => `${numberText(t, { decimals: 1 })} °C`;
-const kelvin = (dt: number) => `${numberText(dt, { decimals: 1 })} K`;
-const limitText = (t: number) => `${numberAsGiven(t)} °C`;
-
-export function serviceTemperatureCheck(layers: readonly LayerTemperatureSpan[]): ServiceTemperatureResult {
+/** `text` writes the reason's figures in the project's units. */
+export function serviceTemperatureCheck(layers: readonly LayerTemperatureSpan[], text: QuantityText = SI_TEXT): ServiceTemperatureResult {
   const base = { check: 'service-temperature' as const, title: 'Service temperature', caution: SERVICE_TEMPERATURE_CAUTION };
   const limited = layers.filter((l) => l.minServiceTemperature !== null || l.maxServiceTemperature !== null);
   if (limited.length === 0) {
@@ -88,8 +85,8 @@ export function serviceTemperatureCheck(layers: readonly LayerTemperatureSpan[])
       : ` ${unlimited.length === 1 ? 'One layer gives' : `${unlimited.length} layers give`} no service range and ${unlimited.length === 1 ? 'was' : 'were'} not checked: ${unlimited.join(', ')}.`;
   const reason =
     outside.length > 0
-      ? `Outside the service range: ${failing.map((f) => describeOutside(f.judged, f.layer)).join('; ')}.${unlimitedNote}`
-      : `Every layer with a service range stays within it. Nearest to its limit: ${describeWithin(governing, limited[judged.indexOf(governing)]!)}.${unlimitedNote}`;
+      ? `Outside the service range: ${failing.map((f) => describeOutside(f.judged, f.layer, text)).join('; ')}.${unlimitedNote}`
+      : `Every layer with a service range stays within it. Nearest to its limit: ${describeWithin(governing, limited[judged.indexOf(governing)]!, text)}.${unlimitedNote}`;
   return {
     ...base,
     verdict: outside.length > 0 ? 'fail' : 'pass',
@@ -122,20 +119,32 @@ function judgeLayer(layer: LayerTemperatureSpan): ServiceLimitJudged {
 }
 
 /** "from 0 °C; no upper limit given", "up to 300 °C; no lower limit given", "−50 to 105 °C". */
-function rangeText(layer: LayerTemperatureSpan): string {
+function rangeText(layer: LayerTemperatureSpan, text: QuantityText): string {
   const min = layer.minServiceTemperature;
   const max = layer.maxServiceTemperature;
-  if (min !== null && max !== null) return `${numberAsGiven(min)} to ${limitText(max)}`;
+  const { limitText } = phrases(text);
+  if (min !== null && max !== null) return `${text.givenNumber(min, 'temperature')} to ${limitText(max)}`;
   return min !== null ? `from ${limitText(min)}; no upper limit given` : `up to ${limitText(max!)}; no lower limit given`;
 }
 
-function describeOutside(j: ServiceLimitJudged, layer: LayerTemperatureSpan): string {
+function describeOutside(j: ServiceLimitJudged, layer: LayerTemperatureSpan, text: QuantityText): string {
+  const { celsius, kelvin, limitText } = phrases(text);
   const reaches = j.side === 'upper' ? `reaches ${celsius(j.temperature)}, ${kelvin(-j.margin)} above` : `falls to ${celsius(j.temperature)}, ${kelvin(-j.margin)} below`;
-  return `${j.layer} ${reaches} its ${j.side} limit of ${limitText(j.limit)} (service range ${rangeText(layer)})`;
+  return `${j.layer} ${reaches} its ${j.side} limit of ${limitText(j.limit)} (service range ${rangeText(layer, text)})`;
 }
 
-function describeWithin(j: ServiceLimitJudged, layer: LayerTemperatureSpan): string {
+function describeWithin(j: ServiceLimitJudged, layer: LayerTemperatureSpan, text: QuantityText): string {
+  const { celsius, kelvin, limitText } = phrases(text);
   const face = j.side === 'upper' ? 'hottest' : 'coldest';
   const side = j.side === 'upper' ? 'below' : 'above';
-  return `${j.layer}, whose ${face} face at ${celsius(j.temperature)} is ${kelvin(j.margin)} ${side} its ${j.side} limit of ${limitText(j.limit)} (service range ${rangeText(layer)})`;
+  return `${j.layer}, whose ${face} face at ${celsius(j.temperature)} is ${kelvin(j.margin)} ${side} its ${j.side} limit of ${limitText(j.limit)} (service range ${rangeText(layer, text)})`;
+}
+
+/** A face temperature, a distance to a limit (a temperature difference) and a limit as given. */
+function phrases(text: QuantityText) {
+  return {
+    celsius: (t: number) => text.figure(t, 'temperature'),
+    kelvin: (dt: number) => text.figure(dt, 'temperatureDifference'),
+    limitText: (t: number) => text.given(t, 'temperature'),
+  };
 }

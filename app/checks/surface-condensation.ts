@@ -4,7 +4,7 @@
  * app/physics dewPoint with the ISO 13788 saturation formulas). The margin is θ_surface − θ_dew
  * in K, positive on the safe side.
  */
-import { numberText } from '../base/number-text.js';
+import { SI_TEXT, type QuantityText } from '../base/quantity-text.js';
 import { dewPoint } from '../physics/humidity.js';
 import type { CheckResult } from './check-result.js';
 
@@ -35,19 +35,20 @@ export interface SurfaceCondensationResult extends CheckResult {
   readonly dewPoint: number;
 }
 
-export function surfaceCondensationCheck(input: SurfaceCondensationInput): SurfaceCondensationResult {
+/** `text` writes the reason's figures in the project's units. */
+export function surfaceCondensationCheck(input: SurfaceCondensationInput, text: QuantityText = SI_TEXT): SurfaceCondensationResult {
   const dew = dewPoint(input.airTemperature, input.relativeHumidity);
   const margin = input.surfaceTemperature - dew;
-  const celsius = (t: number) => `${numberText(t, { decimals: 1 })} °C`;
+  const celsius = (t: number) => text.figure(t, 'temperature');
   const surface = `the surface, at ${celsius(input.surfaceTemperature)},`;
-  const dewText = `the dew point of the air, ${celsius(dew)} (air ${celsius(input.airTemperature)} at ${numberText(input.relativeHumidity * 100, { decimals: 0 })} % relative humidity)`;
-  const distance = `${numberText(Math.abs(margin), { decimals: 1 })} K`;
+  const dewText = `the dew point of the air, ${celsius(dew)} (air ${celsius(input.airTemperature)} at ${text.figure(input.relativeHumidity, 'relativeHumidity')} relative humidity)`;
+  const distance = text.figure(Math.abs(margin), 'temperatureDifference');
   const verdict = margin <= 0 ? 'fail' : margin < CONDENSATION_WARNING_MARGIN ? 'warning' : 'pass';
   const reason =
     verdict === 'fail'
       ? `Water condenses: ${surface} is ${margin === 0 ? 'at' : `${distance} below`} ${dewText}.`
       : verdict === 'warning'
-        ? `No condensation at the design conditions, but ${surface} is only ${distance} above ${dewText}; humidity and temperatures vary in service, so keep at least ${CONDENSATION_WARNING_MARGIN} K.`
+        ? `No condensation at the design conditions, but ${surface} is only ${distance} above ${dewText}; humidity and temperatures vary in service, so keep at least ${text.given(CONDENSATION_WARNING_MARGIN, 'temperatureDifference')}.`
         : `No condensation: ${surface} is ${distance} above ${dewText}.`;
   return {
     check: 'surface-condensation',

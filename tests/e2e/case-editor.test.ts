@@ -57,7 +57,8 @@ async function shownFigures(page: Page): Promise<Record<string, string>> {
 /** The engine's figures for the case as stored, written as the screen writes them. */
 function engineFigures(caseId: number, system: UnitSystem): { figures: Record<string, string>; report: CaseReport } {
   const stored = services().projects.getCase(caseId);
-  const report = solveCase(stored.inputs, caseContext(services().materials)).report;
+  // Solved in the project's units, as the page solves it: the labels read in them ("per foot").
+  const report = solveCase(stored.inputs, { ...caseContext(services().materials), unitSystem: system }).report;
   return { report, figures: Object.fromEntries(report.keyFigures.map((f) => [f.label, formatQuantity(f.value, f.quantity, system)])) };
 }
 
@@ -174,7 +175,10 @@ describe('the case editor', () => {
     await page.selectOption('#project-unitSystem', 'IP');
     const ip = engineFigures(added.id, 'IP').figures;
     await expect.poll(() => shownFigures(page)).toEqual(ip);
-    expect(ip['Heat loss per metre']).toMatch(/Btu\/\(h·ft\)$/);
+    expect(ip['Heat loss per foot']).toMatch(/Btu\/\(h·ft\)$/);
+    // The sentences are solved again in the project's units: the condensation margin is a difference in °F, not in K.
+    await expect.poll(async () => (await page.textContent('.case-report')) ?? '').toMatch(/°F above the dew point/);
+    expect(await page.textContent('.case-report')).not.toMatch(/\d K (above|below) the dew point/);
     expect(ip['Outer surface temperature']).toMatch(/°F$/);
     expect(await page.textContent('label[for="case-inner-temperature"]')).toContain('°F');
     expect(await page.inputValue('#case-inner-temperature')).toBe('302');

@@ -18,15 +18,15 @@ export const conductionKind: CaseKind<ConductionCase, SteadyResult | TransientRe
     const parsed = parseConductionCaseFile(json);
     return { title: parsed.title, input: parsed, assumptions: [] };
   },
-  solve({ input }) {
+  solve({ input }, text) {
     if (input.analysis === 'steady') {
       const result = solveSteady(input.problem);
-      return { result, checks: [], warnings: conductionWarnings(input.problem, result.positions, [result.temperatures]), assumptions: [] };
+      return { result, checks: [], warnings: conductionWarnings(input.problem, result.positions, [result.temperatures], text), assumptions: [] };
     }
     const result = solveTransient(input.problem);
-    return { result, checks: [], warnings: conductionWarnings(input.problem, result.positions, result.temperatures), assumptions: [] };
+    return { result, checks: [], warnings: conductionWarnings(input.problem, result.positions, result.temperatures, text), assumptions: [] };
   },
-  report({ title, input }, { result, warnings }) {
-    return conductionReport(title, input.problem, input.analysis, result, warnings);
+  report({ title, input }, { result, warnings }, text) {
+    return conductionReport(title, input.problem, input.analysis, result, warnings, text);
   },
 };

@@ -10,9 +10,10 @@ import { numberAsGiven } from '../../base/number-text.js';
 import type { QuantityName } from '../../base/quantities.js';
 import type { FaceCondition, SteadyProblem, TransientProblem } from '../../fe/problem.js';
 import type { SteadyResult, TransientResult } from '../../fe/result.js';
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { asSentence } from '../../report/as-sentence.js';
-import { formatQuantity } from '../../report/format-quantity.js';
 import { GENERAL_CAUTION } from '../../report/general-caution.js';
+import { areaUnitSymbol, lengthUnitWord } from '../../report/unit-words.js';
 import type { CaseReport, ReportCell, ReportFigure, ReportSection, ReportTable } from '../../report/report-model.js';
 
 interface Naming {
@@ -50,40 +51,41 @@ export function conductionReport(
   analysis: 'steady' | 'transient',
   result: SteadyResult | TransientResult,
   warnings: readonly string[],
+  text: QuantityText = SI_TEXT,
 ): CaseReport {
   const naming = namingOf(problem);
   return analysis === 'steady'
-    ? steadyReport(title, problem, result as SteadyResult, warnings, naming)
-    : transientReport(title, problem as TransientProblem, result as TransientResult, warnings, naming);
+    ? steadyReport(title, problem, result as SteadyResult, warnings, naming, text)
+    : transientReport(title, problem as TransientProblem, result as TransientResult, warnings, naming, text);
 }
 
-function subjectOf(problem: SteadyProblem, naming: Naming, analysis: string): string {
+function subjectOf(problem: SteadyProblem, naming: Naming, analysis: string, text: QuantityText): string {
   const count = problem.layers.length === 1 ? 'one layer' : `${problem.layers.length} layers`;
   const geometry =
     problem.geometry.kind === 'axisymmetric'
-      ? `cylindrical (a pipe or tube), per metre, inner radius ${formatQuantity(problem.geometry.innerRadius, 'position')}`
-      : 'plane, per m²';
+      ? `cylindrical (a pipe or tube), per ${lengthUnitWord(text)}, inner radius ${text.figure(problem.geometry.innerRadius, 'position')}`
+      : `plane, per ${areaUnitSymbol(text)}`;
   return `${analysis} conduction through ${count} (${naming.layers.join(', ')}); ${geometry}.`;
 }
 
-function describeFace(face: string, condition: FaceCondition): string {
+function describeFace(face: string, condition: FaceCondition, text: QuantityText): string {
   switch (condition.kind) {
     case 'temperature':
-      return `The ${face} is held at ${formatQuantity(condition.temperature, 'temperature')}.`;
+      return `The ${face} is held at ${text.figure(condition.temperature, 'temperature')}.`;
     case 'flux':
-      return `A heat flux of ${formatQuantity(condition.flux, 'heatFlux')} enters through the ${face}.`;
+      return `A heat flux of ${text.figure(condition.flux, 'heatFlux')} enters through the ${face}.`;
     case 'film':
       return typeof condition.coefficient === 'number'
-        ? `The ${face} exchanges heat through a film of ${formatQuantity(condition.coefficient, 'filmCoefficient')} with surroundings at ${formatQuantity(condition.ambient, 'temperature')}.`
-        : `The ${face} exchanges heat with surroundings at ${formatQuantity(condition.ambient, 'temperature')} through a film whose coefficient depends on the surface temperature.`;
+        ? `The ${face} exchanges heat through a film of ${text.figure(condition.coefficient, 'filmCoefficient')} with surroundings at ${text.figure(condition.ambient, 'temperature')}.`
+        : `The ${face} exchanges heat with surroundings at ${text.figure(condition.ambient, 'temperature')} through a film whose coefficient depends on the surface temperature.`;
   }
 }
 
-function conditionsSection(problem: SteadyProblem, naming: Naming): ReportSection {
+function conditionsSection(problem: SteadyProblem, naming: Naming, text: QuantityText): ReportSection {
   return {
     id: 'conditions',
     heading: 'Face conditions',
-    blocks: [{ kind: 'paragraphs', paragraphs: [describeFace(naming.inner, problem.inner), describeFace(naming.outer, problem.outer)] }],
+    blocks: [{ kind: 'paragraphs', paragraphs: [describeFace(naming.inner, problem.inner, text), describeFace(naming.outer, problem.outer, text)] }],
   };
 }
 
@@ -110,7 +112,7 @@ function steadyProfile(problem: SteadyProblem, r: SteadyResult): (readonly [numb
   });
 }
 
-function steadyReport(title: string, problem: SteadyProblem, r: SteadyResult, warnings: readonly string[], naming: Naming): CaseReport {
+function steadyReport(title: string, problem: SteadyProblem, r: SteadyResult, warnings: readonly string[], naming: Naming, text: QuantityText): CaseReport {
   const q = r.faces.inner.heatIn;
   const generated = r.balance.generated !== 0;
   const [from, to] = q >= 0 ? [naming.inner, naming.outer] : [naming.outer, naming.inner];
@@ -146,11 +148,11 @@ function steadyReport(title: string, problem: SteadyProblem, r: SteadyResult, wa
   return {
     kind: 'conduction',
     title,
-    subject: asSentence(subjectOf(problem, naming, 'steady')),
+    subject: asSentence(subjectOf(problem, naming, 'steady', text)),
     keyFigures,
     verdicts: [],
     sections: [
-      conditionsSection(problem, naming),
+      conditionsSection(problem, naming, text),
       { id: 'layers', heading: 'Layers', blocks: [{ kind: 'table', table: layers }] },
       {
         id: 'temperatures',
@@ -219,12 +221,12 @@ function timeQuantity(duration: number): QuantityName {
   return duration >= 7200 ? 'timeHours' : duration >= 120 ? 'timeMinutes' : 'time';
 }
 
-function transientReport(title: string, problem: TransientProblem, r: TransientResult, warnings: readonly string[], naming: Naming): CaseReport {
+function transientReport(title: string, problem: TransientProblem, r: TransientResult, warnings: readonly string[], naming: Naming, text: QuantityText): CaseReport {
   const last = r.times.length - 1;
   const sampled = [...new Set([0, Math.round(last / 4), Math.round(last / 2), Math.round((3 * last) / 4), last])];
   const duration = r.times[last]!;
   const time = timeQuantity(duration);
-  const at = (s: number) => `at ${formatQuantity(r.times[s]!, time)}`;
+  const at = (s: number) => `at ${text.figure(r.times[s]!, time)}`;
   const places = placesOf(problem, r, naming);
   const temperatures: ReportTable = {
     title: 'Temperatures at the sampled times',
@@ -251,12 +253,12 @@ function transientReport(title: string, problem: TransientProblem, r: TransientR
     kind: 'conduction',
     title,
     subject: asSentence(
-      `${subjectOf(problem, naming, 'transient').replace(/\.$/, '')}; from a uniform ${formatQuantity(problem.initialTemperature as number, 'temperature')} over ${formatQuantity(duration, time)} in steps of ${numberAsGiven(problem.timeStep)} s`,
+      `${subjectOf(problem, naming, 'transient', text).replace(/\.$/, '')}; from a uniform ${text.figure(problem.initialTemperature as number, 'temperature')} over ${text.figure(duration, time)} in steps of ${numberAsGiven(problem.timeStep)} s`,
     ),
     keyFigures,
     verdicts: [],
     sections: [
-      conditionsSection(problem, naming),
+      conditionsSection(problem, naming, text),
       {
         id: 'temperatures',
         heading: 'Temperatures over time',
@@ -292,7 +294,7 @@ function transientReport(title: string, problem: TransientProblem, r: TransientR
       },
     ],
     energyBalance: { residual: r.balance.residual, relativeResidual: r.balance.relativeResidual, quantity: naming.energy },
-    assumptions: [...ASSUMPTIONS, `The whole build-up starts at a uniform ${formatQuantity(problem.initialTemperature as number, 'temperature')}.`],
+    assumptions: [...ASSUMPTIONS, `The whole build-up starts at a uniform ${text.figure(problem.initialTemperature as number, 'temperature')}.`],
     warnings: warnings.map(asSentence),
     sources: sourcesOf(
       problem,

@@ -3,6 +3,7 @@
  * layer's conductivity table read outside its points, temperatures above what any construction
  * meets, an extreme inner radius.
  */
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import type { SteadyProblem } from '../../fe/problem.js';
 import {
   conductivityUseWarnings,
@@ -21,12 +22,13 @@ function layerBounds(problem: SteadyProblem): { innerPosition: number; outerPosi
   });
 }
 
-export function conductionWarnings(problem: SteadyProblem, positions: readonly number[], snapshots: readonly (readonly number[])[]): string[] {
+/** `text` writes the warnings' figures in the project's units. */
+export function conductionWarnings(problem: SteadyProblem, positions: readonly number[], snapshots: readonly (readonly number[])[], text: QuantityText = SI_TEXT): string[] {
   const spans = layerSpansOfProfile(positions, snapshots, layerBounds(problem));
   const highest = Math.max(...spans.map((s) => s.highest));
   return [
-    ...geometryPlausibilityWarnings(problem.geometry.kind === 'axisymmetric' ? problem.geometry.innerRadius : null),
-    ...temperaturePlausibilityWarnings(highest),
-    ...conductivityUseWarnings(problem.layers.map((l, i) => ({ name: l.name ?? `Layer ${i + 1}`, conductivity: l.conductivity, ...spans[i]! }))),
+    ...geometryPlausibilityWarnings(problem.geometry.kind === 'axisymmetric' ? problem.geometry.innerRadius : null, text),
+    ...temperaturePlausibilityWarnings(highest, text),
+    ...conductivityUseWarnings(problem.layers.map((l, i) => ({ name: l.name ?? `Layer ${i + 1}`, conductivity: l.conductivity, ...spans[i]! })), text),
   ];
 }

@@ -3,6 +3,7 @@
  * and for the area, with the same surface checks as a pipe.
  */
 import type { JsonObject } from '../../base/field-checks.js';
+import { quantityText } from '../../base/quantity-text.js';
 import type { CaseKind } from '../case-kind.js';
 import { requireInsulatedConductivities } from '../insulated/insulated-conductivity-span.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
@@ -17,16 +18,16 @@ export const flatKind: CaseKind<FlatSurfaceInput, FlatSurfaceResult> = {
   kind: 'flat',
   summary: 'an insulated flat surface (duct, tank or equipment wall)',
   parse(json, context) {
-    const { json: complete, assumptions } = withOperationDefaults(json, { length: false });
+    const { json: complete, assumptions } = withOperationDefaults(json, { length: false }, quantityText(context.unitSystem));
     const input = parseFlatCaseFile(complete, context.resolveMaterial);
     requireInsulatedConductivities(complete as JsonObject, input, input.wall ? { entry: 'wall', material: input.wall.material } : null);
     if (methodNeedsEmissivity(input.surfaceMethod ?? { kind: 'correlations' })) outerSurfaceEmissivity(input.layers, input.jacket);
     return { title: input.title ?? 'Flat surface', input, assumptions };
   },
-  solve({ input, assumptions }) {
-    return insulatedSolvedParts(calculateFlatSurface(input), assumptions);
+  solve({ input, assumptions }, text) {
+    return insulatedSolvedParts(calculateFlatSurface(input, text), assumptions);
   },
-  report(parsed, solved) {
-    return flatReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions });
+  report(parsed, solved, text) {
+    return flatReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions, text });
   },
 };

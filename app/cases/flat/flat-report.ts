@@ -4,8 +4,9 @@
  * from the flat-surface input and its solved result. Pure: the same input and result give the
  * same report.
  */
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { asSentence } from '../../report/as-sentence.js';
-import { formatQuantity } from '../../report/format-quantity.js';
+import { areaUnitSymbol } from '../../report/unit-words.js';
 import type { CaseReport, ReportFigure } from '../../report/report-model.js';
 import { distinctCautions } from '../../report/report-verdicts.js';
 import {
@@ -25,21 +26,24 @@ export interface FlatReportExtras {
   readonly title?: string;
   /** Every assumption of the case (defaults the parser chose, then the calculation's); default the result's. */
   readonly assumptions?: readonly string[];
+  /** Writes the figures in sentences and labels in the project's units; default SI. */
+  readonly text?: QuantityText;
 }
 
 export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, extras: FlatReportExtras = {}): CaseReport {
+  const text = extras.text ?? SI_TEXT;
   const lost = result.heatFlowDensity >= 0;
   const word = lost ? 'loss' : 'gain';
-  const verdicts = insulatedVerdicts(result);
+  const verdicts = insulatedVerdicts(result, text);
   const keyFigures: ReportFigure[] = [
-    { label: `Heat ${word} per m² of surface`, value: Math.abs(result.heatFlowDensity), quantity: 'heatFlux' },
+    { label: `Heat ${word} per ${areaUnitSymbol(text)} of surface`, value: Math.abs(result.heatFlowDensity), quantity: 'heatFlux' },
     { label: `Heat ${word} over the whole area`, value: Math.abs(result.heatLoss), quantity: 'heatFlow' },
     { label: 'Outer surface temperature', value: result.surfaceTemperature, quantity: 'temperature' },
     {
       label: `Energy ${lost ? 'lost' : 'gained'} per year`,
       value: Math.abs(result.annualEnergy),
       quantity: 'energyPerYear',
-      note: `over ${formatQuantity(input.operatingHours, 'hours')} of operation`,
+      note: `over ${text.figure(input.operatingHours, 'hours')} of operation`,
     },
     { label: 'Thermal resistance of the layers', value: result.layerResistance, quantity: 'thermalResistance', note: 'without the surface films' },
   ];
@@ -53,7 +57,7 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
   return {
     kind: 'flat',
     title: extras.title ?? input.title ?? 'Insulated flat surface',
-    subject: subjectOf(input),
+    subject: subjectOf(input, text),
     keyFigures,
     verdicts,
     sections: [
@@ -65,20 +69,20 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
     energyBalance: { ...result.energyBalance, quantity: 'heatFlux' },
     assumptions: insulatedAssumptions(extras.assumptions ?? result.assumptions),
     warnings: result.warnings.map(asSentence),
-    sources: insulatedSources(input, materials, convectionOf(input)),
+    sources: insulatedSources(input, materials, convectionOf(input), text),
     cautions: distinctCautions(verdicts),
   };
 }
 
 /** "Vertical surface 6 m high, 150 m²; wall 8.0 mm Carbon steel; insulation 100.0 mm Rock wool; …". */
-function subjectOf(input: FlatSurfaceInput): string {
+function subjectOf(input: FlatSurfaceInput, text: QuantityText): string {
   const s = input.surface;
-  const shape = s.kind === 'vertical' ? `Vertical surface ${formatQuantity(s.height, 'length')} high` : `Horizontal surface facing ${s.facing}`;
-  const wall = input.wall ? `; wall ${formatQuantity(input.wall.thickness, 'thickness')} ${input.wall.material.name}` : '';
-  const insulation = input.layers.map((l) => `${formatQuantity(l.thickness, 'thickness')} ${l.material.name}`).join(' + ');
-  const jacket = input.jacket ? `; jacket ${formatQuantity(input.jacket.thickness, 'thickness')} ${input.jacket.material.name}` : '; no jacket';
-  const exposure = input.ambient.exposure.kind === 'outdoor' ? `outdoors in ${formatQuantity(input.ambient.exposure.windSpeed, 'windSpeed')} wind` : 'indoors in still air';
-  return `${shape}, ${formatQuantity(input.area, 'area')}${wall}; insulation ${insulation}${jacket}; ${exposure}.`;
+  const shape = s.kind === 'vertical' ? `Vertical surface ${text.figure(s.height, 'length')} high` : `Horizontal surface facing ${s.facing}`;
+  const wall = input.wall ? `; wall ${text.figure(input.wall.thickness, 'thickness')} ${input.wall.material.name}` : '';
+  const insulation = input.layers.map((l) => `${text.figure(l.thickness, 'thickness')} ${l.material.name}`).join(' + ');
+  const jacket = input.jacket ? `; jacket ${text.figure(input.jacket.thickness, 'thickness')} ${input.jacket.material.name}` : '; no jacket';
+  const exposure = input.ambient.exposure.kind === 'outdoor' ? `outdoors in ${text.figure(input.ambient.exposure.windSpeed, 'windSpeed')} wind` : 'indoors in still air';
+  return `${shape}, ${text.figure(input.area, 'area')}${wall}; insulation ${insulation}${jacket}; ${exposure}.`;
 }
 
 /** The correlations the outer film uses for this surface, for the sources. */

@@ -4,6 +4,7 @@
  * outwards; the outer film from app/physics outerSurfaceExchange is iterated by the engine.
  * Heat flows are positive outwards (heat lost); a cold surface gives negative values.
  */
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import type { OuterSurfaceShape } from '../../physics/outer-surface-exchange.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity } from '../insulated/insulated-inputs.js';
 import { reportedStackSolution, solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
@@ -23,7 +24,8 @@ export interface FlatSurfaceResult extends Omit<StackSolution, 'engine' | 'heatO
   readonly assumptions: readonly string[];
 }
 
-export function calculateFlatSurface(input: FlatSurfaceInput): FlatSurfaceResult {
+/** `text` writes the figures of the checks' reasons and warnings (default SI). */
+export function calculateFlatSurface(input: FlatSurfaceInput, text: QuantityText = SI_TEXT): FlatSurfaceResult {
   validateFlatSurfaceInput(input);
   const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
   const assumptions: string[] = [];
@@ -53,7 +55,7 @@ export function calculateFlatSurface(input: FlatSurfaceInput): FlatSurfaceResult
     exchange,
     ambient: input.ambient,
     ...(input.touchLimit !== undefined ? { touchLimit: input.touchLimit } : {}),
-  });
+  }, text);
   const heatOut = solved.heatOut;
   const solution = reportedStackSolution(solved);
   const heatLoss = heatOut * input.area;

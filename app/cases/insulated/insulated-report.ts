@@ -8,12 +8,11 @@
 import type { ConductivityModel } from '../../fe/conductivity.js';
 import { exactLayerProfile } from '../../fe/exact-layer-profile.js';
 import saturationFormulas from '../../../data/physics/saturation-formulas.json' with { type: 'json' };
-import { numberAsGiven } from '../../base/number-text.js';
+import type { QuantityText } from '../../base/quantity-text.js';
 import { DEFAULT_TOUCH_LIMIT } from '../../checks/personnel-protection.js';
 import { AIR_TABLE_SOURCE, SIMPLIFIED_CONVECTION_SOURCE } from '../../physics/index.js';
 import type { MaterialProperties } from '../../materials/material-properties.js';
 import { asSentence } from '../../report/as-sentence.js';
-import { formatQuantity } from '../../report/format-quantity.js';
 import { temperatureMarginPhrase } from '../../report/margin-phrase.js';
 import type { ReportCrossSection, ReportFigure, ReportSection, ReportTable, ReportVerdict } from '../../report/report-model.js';
 import { reportVerdict } from '../../report/report-verdicts.js';
@@ -184,15 +183,15 @@ export function conditionsSection(input: InsulatedSurfaceInput, extra: readonly 
 }
 
 /** The three surface checks, with the service-temperature margin measured to the material that governs. */
-export function insulatedVerdicts(result: InsulatedResult): ReportVerdict[] {
+export function insulatedVerdicts(result: InsulatedResult, text: QuantityText): ReportVerdict[] {
   const { surfaceCondensation, personnelProtection, serviceTemperature } = result.checks;
   const governing = serviceTemperature.governingLimit;
   const layer = governing ? result.layers.find((l) => l.name === governing.layer) : undefined;
   const serviceReference = governing && layer ? `the ${governing.side} service limit of ${materialOrLayer(layer, result.layers)}` : undefined;
   return [
-    reportVerdict(surfaceCondensation, temperatureMarginPhrase(surfaceCondensation.margin, 'the dew point')),
-    reportVerdict(personnelProtection, temperatureMarginPhrase(personnelProtection.margin)),
-    reportVerdict(serviceTemperature, temperatureMarginPhrase(serviceTemperature.margin, serviceReference)),
+    reportVerdict(surfaceCondensation, temperatureMarginPhrase(surfaceCondensation.margin, 'the dew point', text)),
+    reportVerdict(personnelProtection, temperatureMarginPhrase(personnelProtection.margin, undefined, text)),
+    reportVerdict(serviceTemperature, temperatureMarginPhrase(serviceTemperature.margin, serviceReference, text)),
   ];
 }
 
@@ -210,6 +209,7 @@ export function insulatedSources(
   input: InsulatedSurfaceInput,
   materials: readonly MaterialProperties[],
   convection: string,
+  text: QuantityText,
 ): string[] {
   const method = input.surfaceMethod ?? { kind: 'correlations' as const };
   const radiation =
@@ -222,15 +222,16 @@ export function insulatedSources(
       : method.kind === 'simplified'
         ? [`Convection at the outer surface: simplified trade formulas (${SIMPLIFIED_CONVECTION_SOURCE}).`]
         : method.kind === 'fixed-convection'
-          ? [`Convection coefficient fixed in the case at ${formatQuantity(method.coefficient, 'filmCoefficient')}.`]
+          ? [`Convection coefficient fixed in the case at ${text.figure(method.coefficient, 'filmCoefficient')}.`]
           : method.kind === 'fixed-coefficient'
-            ? [`Surface coefficient fixed in the case at ${formatQuantity(method.coefficient, 'filmCoefficient')}.`]
-            : [`Surface resistance fixed in the case at ${formatQuantity(method.resistance, 'thermalResistance')}.`];
+            ? [`Surface coefficient fixed in the case at ${text.figure(method.coefficient, 'filmCoefficient')}.`]
+            : [`Surface resistance fixed in the case at ${text.figure(method.resistance, 'thermalResistance')}.`];
   const iso = saturationFormulas.formulas.find((f) => f.id === 'iso13788')!;
+  const limit = (t: number) => text.given(t, 'temperature');
   const touch =
     input.touchLimit === undefined
-      ? `Touch limit ${numberAsGiven(DEFAULT_TOUCH_LIMIT)} °C: about the limit for brief contact with a metal surface in industrial practice that cites ASTM C1055 (common practice, no source); many specifications use 50 to 55 °C, or 43 °C where vulnerable people may touch the surface.`
-      : `Touch limit ${numberAsGiven(input.touchLimit)} °C as given in the case.`;
+      ? `Touch limit ${limit(DEFAULT_TOUCH_LIMIT)}: about the limit for brief contact with a metal surface in industrial practice that cites ASTM C1055 (common practice, no source); many specifications use ${text.givenNumber(50, 'temperature')} to ${limit(55)}, or ${limit(43)} where vulnerable people may touch the surface.`
+      : `Touch limit ${limit(input.touchLimit)} as given in the case.`;
   const seen = new Set<string>();
   const materialLines = materials.flatMap((m) => {
     const line = asSentence(`${m.name}: ${m.source && m.source.trim() !== '' ? m.source : 'no source given with the material'}`);

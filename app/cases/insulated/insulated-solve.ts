@@ -6,6 +6,7 @@
  * into convection and radiation at the converged surface temperature; then, as a separate step on
  * the solved result, the surface checks.
  */
+import type { QuantityText } from '../../base/quantity-text.js';
 import type { FaceCondition, Geometry } from '../../fe/problem.js';
 import type { SteadyResult } from '../../fe/result.js';
 import { solveSteady } from '../../fe/steady-solve.js';
@@ -129,13 +130,14 @@ function innerFace(inner: InnerCondition): FaceCondition {
     : { kind: 'temperature', temperature: inner.temperature };
 }
 
-export function solveStack(problem: StackProblem): StackSolution {
-  const solution = solveStackOnly(problem);
-  return { ...solution, ...surfaceChecks(problem, solution) };
+/** `text` writes the figures of the checks' reasons and of the warnings in the project's units. */
+export function solveStack(problem: StackProblem, text: QuantityText): StackSolution {
+  const solution = solveStackOnly(problem, text);
+  return { ...solution, ...surfaceChecks(problem, solution, text) };
 }
 
 /** The engine solve of the stack and what is read back from it, before any check. */
-function solveStackOnly(problem: StackProblem): Omit<StackSolution, 'dewPoint' | 'checks'> {
+function solveStackOnly(problem: StackProblem, text: QuantityText): Omit<StackSolution, 'dewPoint' | 'checks'> {
   const { stack, exchange, ambient } = problem;
   const engine = solveSteady({
     geometry: problem.geometry,
@@ -194,6 +196,7 @@ function solveStackOnly(problem: StackProblem): Omit<StackSolution, 'dewPoint' |
           minServiceTemperature: stack[i]!.material.minServiceTemperature ?? null,
           maxServiceTemperature: stack[i]!.material.maxServiceTemperature ?? null,
         })),
+        text,
       ),
     ],
     energyBalance: { residual: engine.balance.residual, relativeResidual: engine.balance.relativeResidual },
@@ -205,20 +208,20 @@ function solveStackOnly(problem: StackProblem): Omit<StackSolution, 'dewPoint' |
  * The surface checks, as functions of the solved stack: condensation on the outer surface in its
  * ambient air, personnel protection at the touch limit, and each layer against its service range.
  */
-export function surfaceChecks(problem: StackProblem, solution: Omit<StackSolution, 'dewPoint' | 'checks'>): { dewPoint: number; checks: SolveChecks } {
+export function surfaceChecks(problem: StackProblem, solution: Omit<StackSolution, 'dewPoint' | 'checks'>, text: QuantityText): { dewPoint: number; checks: SolveChecks } {
   const { stack, ambient } = problem;
   const { surfaceTemperature, layers } = solution;
   const surfaceCondensation = surfaceCondensationCheck({
     surfaceTemperature,
     airTemperature: ambient.airTemperature,
     relativeHumidity: ambient.relativeHumidity,
-  });
+  }, text);
   const checks: SolveChecks = {
     surfaceCondensation,
     personnelProtection: personnelProtectionCheck({
       surfaceTemperature,
       ...(problem.touchLimit !== undefined ? { touchLimit: problem.touchLimit } : {}),
-    }),
+    }, text),
     serviceTemperature: serviceTemperatureCheck(
       layers.map((l, i) => ({
         name: l.name,
@@ -227,6 +230,7 @@ export function surfaceChecks(problem: StackProblem, solution: Omit<StackSolutio
         minServiceTemperature: stack[i]!.material.minServiceTemperature ?? null,
         maxServiceTemperature: stack[i]!.material.maxServiceTemperature ?? null,
       })),
+      text,
     ),
   };
 

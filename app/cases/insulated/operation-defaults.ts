@@ -2,18 +2,20 @@
  * Defaults of the run a quick per-metre (or per-m²) check need not state: a run of 1 m and
  * continuous operation (8760 h a year). Each default applied is reported as an assumption.
  */
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { isObject, type JsonObject } from '../case-fields.js';
 
 export const DEFAULT_RUN_LENGTH = 1;
 export const DEFAULT_OPERATING_HOURS = 8760;
 
-export function withOperationDefaults(json: unknown, defaults: { readonly length: boolean }): { json: unknown; assumptions: string[] } {
+/** `text` writes the default run length of the assumption in the project's units. */
+export function withOperationDefaults(json: unknown, defaults: { readonly length: boolean }, text: QuantityText = SI_TEXT): { json: unknown; assumptions: string[] } {
   if (!isObject(json)) return { json, assumptions: [] };
   const file: JsonObject = { ...json };
   const assumptions: string[] = [];
   if (defaults.length && file['length'] === undefined) {
     file['length'] = DEFAULT_RUN_LENGTH;
-    assumptions.push(`run length not given: figures for the run are for ${DEFAULT_RUN_LENGTH} m`);
+    assumptions.push(`run length not given: figures for the run are for ${text.given(DEFAULT_RUN_LENGTH, 'length')}`);
   }
   if (file['operatingHours'] === undefined) {
     file['operatingHours'] = DEFAULT_OPERATING_HOURS;

@@ -8,6 +8,7 @@
  * any temperature-dependent conductivity. Results keep full precision; rounding is for display.
  * Heat flows are positive outwards (heat lost by the pipe); a chilled line gives negative values.
  */
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { geometryPlausibilityWarnings } from '../../checks/plausibility-warnings.js';
 import type { OuterSurfaceShape } from '../../physics/outer-surface-exchange.js';
 import {
@@ -39,7 +40,8 @@ export interface PipeResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
   readonly assumptions: readonly string[];
 }
 
-export function calculatePipe(input: PipeInput): PipeResult {
+/** `text` writes the figures of the checks' reasons, warnings and assumptions (default SI). */
+export function calculatePipe(input: PipeInput, text: QuantityText = SI_TEXT): PipeResult {
   validatePipeInput(input);
   const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
   const assumptions: string[] = [];
@@ -54,7 +56,7 @@ export function calculatePipe(input: PipeInput): PipeResult {
 
   let height: number | null = null;
   if (input.orientation === 'vertical') {
-    const chosen = verticalPipeHeight(input);
+    const chosen = verticalPipeHeight(input, text);
     height = chosen.height;
     assumptions.push(chosen.note);
   }
@@ -76,12 +78,12 @@ export function calculatePipe(input: PipeInput): PipeResult {
     exchange,
     ambient: input.ambient,
     ...(input.touchLimit !== undefined ? { touchLimit: input.touchLimit } : {}),
-  });
+  }, text);
   const heatOut = solved.heatOut;
   const solution = reportedStackSolution(solved);
 
   const surfaceAreaPerMetre = Math.PI * outerDiameter;
-  const warnings = [...geometryPlausibilityWarnings(innerRadius), ...solution.warnings];
+  const warnings = [...geometryPlausibilityWarnings(innerRadius, text), ...solution.warnings];
   const heatLoss = heatOut * input.length;
   return {
     ...solution,

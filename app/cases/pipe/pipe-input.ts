@@ -3,6 +3,7 @@
  * The field names match the pipe case file (app/cases/pipe-case-file.ts), so an error names the
  * same path in both. Radial layer order: pipe wall, insulation layers (inside first), jacket.
  */
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { requireNumberIn } from '../../base/field-checks.js';
 import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
@@ -53,13 +54,13 @@ export const VERTICAL_PIPE_DEFAULT_HEIGHT_CAP = 3;
 export const DEFAULT_SURFACE_METHOD: SurfaceMethod = { kind: 'correlations' };
 
 /** The height used for a vertical pipe, and how it was chosen. */
-export function verticalPipeHeight(input: Pick<PipeInput, 'height' | 'length'>): { height: number; note: string } {
-  if (input.height !== undefined) return { height: input.height, note: `height of the vertical pipe as given: ${input.height} m` };
+export function verticalPipeHeight(input: Pick<PipeInput, 'height' | 'length'>, text: QuantityText = SI_TEXT): { height: number; note: string } {
+  if (input.height !== undefined) return { height: input.height, note: `height of the vertical pipe as given: ${text.keepingSi(`${input.height} m`, input.height, 'length')}` };
   // A run shorter than the smallest height a correlation takes is still a pipe of that height to the air.
   const height = Math.max(QUANTITY_RANGES.pipeHeight.min, Math.min(input.length, VERTICAL_PIPE_DEFAULT_HEIGHT_CAP));
   return {
     height,
-    note: `height of the vertical pipe for convection taken as ${height} m: the run length capped at ${VERTICAL_PIPE_DEFAULT_HEIGHT_CAP} m (one storey; common practice, no source)`,
+    note: `height of the vertical pipe for convection taken as ${text.keepingSi(`${height} m`, height, 'length')}: the run length capped at ${text.given(VERTICAL_PIPE_DEFAULT_HEIGHT_CAP, 'length')} (one storey; common practice, no source)`,
   };
 }
 

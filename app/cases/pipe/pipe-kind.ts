@@ -4,6 +4,7 @@
  * result.
  */
 import type { JsonObject } from '../../base/field-checks.js';
+import { quantityText } from '../../base/quantity-text.js';
 import type { CaseKind } from '../case-kind.js';
 import { requireInsulatedConductivities } from '../insulated/insulated-conductivity-span.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
@@ -23,17 +24,17 @@ export const pipeKind: CaseKind<PipeCase, PipeResult> = {
   summary: 'an insulated pipe run: heat loss, surface temperature, condensation and touch checks',
   parse(json, context) {
     const sized = resolvePipeSizeInCase(json, context.pipeSizes);
-    const { json: complete, assumptions } = withOperationDefaults(sized.json, { length: true });
+    const { json: complete, assumptions } = withOperationDefaults(sized.json, { length: true }, quantityText(context.unitSystem));
     const input = parsePipeCaseFile(complete, context.resolveMaterial);
     requireInsulatedConductivities(complete as JsonObject, input, { entry: 'pipe', material: input.pipe.material });
     // Radiation needs the outer surface's emissivity: refuse a case without it now, not at the solve.
     if (methodNeedsEmissivity(input.surfaceMethod ?? DEFAULT_SURFACE_METHOD)) outerSurfaceEmissivity(input.layers, input.jacket);
     return { title: input.title ?? 'Pipe', input: { ...input, pipeSize: sized.size }, assumptions };
   },
-  solve({ input, assumptions }) {
-    return insulatedSolvedParts(calculatePipe(input), assumptions);
+  solve({ input, assumptions }, text) {
+    return insulatedSolvedParts(calculatePipe(input, text), assumptions);
   },
-  report(parsed, solved) {
-    return pipeReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions });
+  report(parsed, solved, text) {
+    return pipeReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions, text });
   },
 };

@@ -3,8 +3,9 @@
  * temperature and checks, the build-up and temperatures, from the pipe input and its solved
  * result. Pure: the same input and result give the same report.
  */
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { asSentence } from '../../report/as-sentence.js';
-import { formatQuantity, formatQuantityNumber } from '../../report/format-quantity.js';
+import { lengthUnitWord } from '../../report/unit-words.js';
 import type { CaseReport, ReportFigure } from '../../report/report-model.js';
 import { distinctCautions } from '../../report/report-verdicts.js';
 import {
@@ -25,15 +26,19 @@ export interface PipeReportExtras {
   readonly title?: string;
   /** Every assumption of the case (defaults the parser chose, then the calculation's); default the result's. */
   readonly assumptions?: readonly string[];
+  /** Writes the figures in sentences and labels in the project's units; default SI. */
+  readonly text?: QuantityText;
 }
 
 /** `input.pipeSize`, where given, is the named size the case file gave instead of a diameter. */
 export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | null }, result: PipeResult, extras: PipeReportExtras = {}): CaseReport {
+  const text = extras.text ?? SI_TEXT;
   const lost = result.heatLossPerMetre >= 0;
   const word = lost ? 'loss' : 'gain';
-  const verdicts = insulatedVerdicts(result);
+  const perLength = lengthUnitWord(text);
+  const verdicts = insulatedVerdicts(result, text);
   const keyFigures: ReportFigure[] = [
-    { label: `Heat ${word} per metre`, value: Math.abs(result.heatLossPerMetre), quantity: 'heatFlowPerLength' },
+    { label: `Heat ${word} per ${perLength}`, value: Math.abs(result.heatLossPerMetre), quantity: 'heatFlowPerLength' },
     { label: `Heat ${word} over the whole run`, value: Math.abs(result.heatLoss), quantity: 'heatFlow' },
     { label: 'Outer surface temperature', value: result.surfaceTemperature, quantity: 'temperature' },
     { label: `Heat flow density ${lost ? 'from' : 'into'} the outer surface`, value: Math.abs(result.heatFlowDensityAtSurface), quantity: 'heatFlux' },
@@ -41,7 +46,7 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
       label: `Energy ${lost ? 'lost' : 'gained'} per year`,
       value: Math.abs(result.annualEnergy),
       quantity: 'energyPerYear',
-      note: `over ${formatQuantity(input.operatingHours, 'hours')} of operation`,
+      note: `over ${text.figure(input.operatingHours, 'hours')} of operation`,
     },
   ];
   const size = input.pipeSize ?? null;
@@ -50,7 +55,7 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
   return {
     kind: 'pipe',
     title: extras.title ?? input.title ?? 'Insulated pipe',
-    subject: subjectOf(input, size),
+    subject: subjectOf(input, size, text),
     keyFigures,
     verdicts,
     sections: [
@@ -71,7 +76,7 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
               { label: 'Outside diameter of the pipe', value: input.pipe.outerDiameter, quantity: 'diameter' },
               { label: 'Pipe wall thickness', value: input.pipe.wallThickness, quantity: 'thickness' },
               { label: 'Outside diameter over the insulation', value: result.outerDiameter, quantity: 'diameter' },
-              { label: 'Outer surface area per metre of pipe', value: result.surfaceAreaPerMetre, quantity: 'area' },
+              { label: `Outer surface area per ${perLength} of pipe`, value: result.surfaceAreaPerMetre, quantity: 'area' },
             ],
           },
         ],
@@ -82,19 +87,19 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
     warnings: result.warnings.map(asSentence),
     sources: [
       ...(size ? [asSentence(`Pipe size ${sizeName(size)} from the ${size.series} table: ${size.source}`)] : []),
-      ...insulatedSources(input, materials, convectionOf(input)),
+      ...insulatedSources(input, materials, convectionOf(input), text),
     ],
     cautions: distinctCautions(verdicts),
   };
 }
 
 /** "Horizontal pipe, 168.3 × 7.1 mm Carbon steel; insulation 60.0 mm Rock wool; …; outdoors in 5.0 m/s wind". */
-function subjectOf(input: PipeInput, size: PipeSize | null): string {
-  const pipe = `${formatQuantityNumber(input.pipe.outerDiameter, 'diameter')} × ${formatQuantity(input.pipe.wallThickness, 'thickness')} ${input.pipe.material.name}`;
+function subjectOf(input: PipeInput, size: PipeSize | null, text: QuantityText): string {
+  const pipe = `${text.number(input.pipe.outerDiameter, 'diameter')} × ${text.figure(input.pipe.wallThickness, 'thickness')} ${input.pipe.material.name}`;
   const named = size ? ` (${sizeName(size)})` : '';
-  const insulation = input.layers.map((l) => `${formatQuantity(l.thickness, 'thickness')} ${l.material.name}`).join(' + ');
-  const jacket = input.jacket ? `; jacket ${formatQuantity(input.jacket.thickness, 'thickness')} ${input.jacket.material.name}` : '; no jacket';
-  const exposure = input.ambient.exposure.kind === 'outdoor' ? `outdoors in ${formatQuantity(input.ambient.exposure.windSpeed, 'windSpeed')} wind` : 'indoors in still air';
+  const insulation = input.layers.map((l) => `${text.figure(l.thickness, 'thickness')} ${l.material.name}`).join(' + ');
+  const jacket = input.jacket ? `; jacket ${text.figure(input.jacket.thickness, 'thickness')} ${input.jacket.material.name}` : '; no jacket';
+  const exposure = input.ambient.exposure.kind === 'outdoor' ? `outdoors in ${text.figure(input.ambient.exposure.windSpeed, 'windSpeed')} wind` : 'indoors in still air';
   return `${input.orientation === 'vertical' ? 'Vertical' : 'Horizontal'} pipe, ${pipe}${named}; insulation ${insulation}${jacket}; ${exposure}.`;
 }
 

@@ -5,6 +5,7 @@
  * inside-surface condensation, interstitial condensation at the design condition and, when the
  * case carries a monthly climate, over the year.
  */
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import type { CheckResult } from '../../checks/check-result.js';
 import {
   assessMould,
@@ -49,7 +50,8 @@ export function validateWallCase(input: WallInput): void {
   wallVapourLayers(input, buildThermalStack(input));
 }
 
-export function analyseWall(input: WallInput): WallAnalysis {
+/** `text` writes the figures of the checks' reasons and of the warnings in the project's units (default SI). */
+export function analyseWall(input: WallInput, text: QuantityText = SI_TEXT): WallAnalysis {
   validateWallInput(input);
   const stack = buildThermalStack(input);
   const vapour = wallVapourLayers(input, stack);
@@ -60,12 +62,14 @@ export function analyseWall(input: WallInput): WallAnalysis {
   const design = solveSteady(wallEngineProblem(stack, input.inside.temperature, input.outside.temperature));
   const states = wallStateSolver(stack, { inside: input.inside.temperature, outside: input.outside.temperature, steady: design });
   const stackAt = (inside: number, outside: number) => vapourStackAt(vapour.layers, vapour.pointNames, states.at(inside, outside));
-  const interstitialDesign = checkInterstitialAtDesignCondition(stackAt(input.inside.temperature, input.outside.temperature), input.inside, input.outside, humidity);
+  const interstitialDesign = checkInterstitialAtDesignCondition(stackAt(input.inside.temperature, input.outside.temperature), input.inside, input.outside, humidity, {}, text);
   const interstitialMonthly = climate
     ? checkInterstitialMonthly(
         climate,
         climate.months.map((m) => stackAt(m.inside.temperature, m.outside.temperature)),
         humidity,
+        {},
+        text,
       )
     : null;
 
@@ -87,15 +91,16 @@ export function analyseWall(input: WallInput): WallAnalysis {
     { mould: surfaceAt(designIndices.mould), condensation: surfaceAt(designIndices.condensation) },
     MOULD_CHECK_INSIDE_SURFACE_RESISTANCE,
     humidity,
+    text,
   );
 
   const checks = [mould.mould, mould.surfaceCondensation, interstitialDesign.check, ...(interstitialMonthly ? [interstitialMonthly.check] : [])];
   const wall = wallResultOf(input, stack, design);
-  return { wall, mould, interstitialDesign, interstitialMonthly, checks, solves: 1 + states.solves() + mouldStates.solves(), warnings: wallConductivityWarnings(input, wall) };
+  return { wall, mould, interstitialDesign, interstitialMonthly, checks, solves: 1 + states.solves() + mouldStates.solves(), warnings: wallConductivityWarnings(input, wall, text) };
 }
 
 /** Each material layer's λ(θ) against its table's points and its service range, at the design condition. */
-function wallConductivityWarnings(input: WallInput, wall: WallResult): string[] {
+function wallConductivityWarnings(input: WallInput, wall: WallResult, text: QuantityText): string[] {
   return conductivityUseWarnings(
     wall.layers.flatMap((l) => {
       const layer = input.layers[l.index]!;
@@ -111,5 +116,6 @@ function wallConductivityWarnings(input: WallInput, wall: WallResult): string[] 
         },
       ];
     }),
+    text,
   );
 }

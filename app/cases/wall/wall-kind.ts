@@ -21,12 +21,12 @@ export const wallKind: CaseKind<WallInput, WallAnalysis> = {
     validateWallCase(input);
     return { title: input.name ?? 'Wall or roof', input, assumptions: [] };
   },
-  solve({ input }) {
-    const result = analyseWall(input);
+  solve({ input }, text) {
+    const result = analyseWall(input, text);
     return { result, checks: result.checks, warnings: result.warnings, assumptions: [] };
   },
-  report(parsed, solved) {
-    return wallReport(parsed.input, solved.result);
+  report(parsed, solved, text) {
+    return wallReport(parsed.input, solved.result, text);
   },
 };
 

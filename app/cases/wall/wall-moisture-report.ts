@@ -5,9 +5,9 @@
  * in words. Read from the analysis only; nothing is solved here.
  */
 import humidityClasses from '../../../data/physics/humidity-classes.json' with { type: 'json' };
+import type { QuantityText } from '../../base/quantity-text.js';
 import type { CheckResult } from '../../checks/check-result.js';
 import type { InsideHumiditySource } from '../../checks/mould-humidity-classes.js';
-import { formatQuantity } from '../../report/format-quantity.js';
 import { marginPhrase } from '../../report/margin-phrase.js';
 import type { ReportSection, ReportTable, ReportVerdict } from '../../report/report-model.js';
 import { reportVerdict } from '../../report/report-verdicts.js';
@@ -36,26 +36,26 @@ export function insideHumidityWords(source: InsideHumiditySource | undefined): s
   return `internal humidity class ${source.humidityClass}${source.safetyFactor ? ' with the 1.1 safety factor on the vapour pressure excess' : ''}`;
 }
 
-export function wallVerdicts(a: WallAnalysis): ReportVerdict[] {
+export function wallVerdicts(a: WallAnalysis, text: QuantityText): ReportVerdict[] {
   const factorMargin = (check: CheckResult) =>
-    check.margin ? marginPhrase(check.margin.value, 'temperatureFactor', 'the required temperature factor', 'above') : undefined;
+    check.margin ? marginPhrase(check.margin.value, 'temperatureFactor', 'the required temperature factor', 'above', text) : undefined;
   const design = a.interstitialDesign.check;
   const monthly = a.interstitialMonthly;
   return [
     reportVerdict(a.mould.mould, factorMargin(a.mould.mould), plainReason(a.mould.mould)),
     reportVerdict(a.mould.surfaceCondensation, factorMargin(a.mould.surfaceCondensation), plainReason(a.mould.surfaceCondensation)),
-    reportVerdict(design, design.margin ? vapourMargin(design.margin.value, 'at the interface nearest to it', 'at the worst interface') : undefined, plainReason(design)),
+    reportVerdict(design, design.margin ? vapourMargin(design.margin.value, 'at the interface nearest to it', 'at the worst interface', text) : undefined, plainReason(design)),
     ...(monthly
       ? [
           reportVerdict(
             monthly.check,
             monthly.maxAccumulated === 0
               ? monthly.check.margin
-                ? vapourMargin(monthly.check.margin.value, 'in the closest month', 'in the worst month')
+                ? vapourMargin(monthly.check.margin.value, 'in the closest month', 'in the worst month', text)
                 : undefined
               : monthly.driesOut
-                ? `at most ${formatQuantity(monthly.maxAccumulated, 'massPerArea')} stored; dries out within the year`
-                : `${formatQuantity(monthly.remainingAtEnd, 'massPerArea')} still stored after twelve months`,
+                ? `at most ${text.figure(monthly.maxAccumulated, 'massPerArea')} stored; dries out within the year`
+                : `${text.figure(monthly.remainingAtEnd, 'massPerArea')} still stored after twelve months`,
             plainReason(monthly.check),
           ),
         ]
@@ -64,11 +64,11 @@ export function wallVerdicts(a: WallAnalysis): ReportVerdict[] {
 }
 
 /** "vapour pressure 120 Pa below saturation …", from the smallest reserve p_sat − p. */
-function vapourMargin(reserve: number, safeWhere: string, unsafeWhere: string): string {
-  return `vapour pressure ${marginPhrase(reserve, 'vapourPressure', `saturation ${reserve >= 0 ? safeWhere : unsafeWhere}`, 'below')}`;
+function vapourMargin(reserve: number, safeWhere: string, unsafeWhere: string, text: QuantityText): string {
+  return `vapour pressure ${marginPhrase(reserve, 'vapourPressure', `saturation ${reserve >= 0 ? safeWhere : unsafeWhere}`, 'below', text)}`;
 }
 
-export function mouldSection(a: WallAnalysis): ReportSection {
+export function mouldSection(a: WallAnalysis, text: QuantityText): ReportSection {
   const m = a.mould;
   const design = m.designIndexMould === null ? null : m.conditions[m.designIndexMould]!;
   const table: ReportTable = {
@@ -99,7 +99,7 @@ export function mouldSection(a: WallAnalysis): ReportSection {
         figures: [
           { label: 'Temperature factor of the element, f_Rsi', value: m.temperatureFactor, quantity: 'temperatureFactor' },
           { label: 'Critical factor for mould, f_Rsi,min', value: design?.minimumFactorMould ?? null, quantity: 'temperatureFactor', ...(design ? { note: `${conditionPhrase(design.label)}, the governing condition` } : {}) },
-          { label: 'Inside surface temperature then', value: m.insideSurfaceTemperature, quantity: 'temperature', note: `with R_si = ${formatQuantity(m.insideSurfaceResistance, 'thermalResistance')}` },
+          { label: 'Inside surface temperature then', value: m.insideSurfaceTemperature, quantity: 'temperature', note: `with R_si = ${text.figure(m.insideSurfaceResistance, 'thermalResistance')}` },
         ],
       },
       { kind: 'table', table },

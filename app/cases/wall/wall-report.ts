@@ -9,9 +9,8 @@ import moistureParameters from '../../../data/physics/iso13788-moisture-paramete
 import airLayers from '../../../data/physics/iso6946-air-layers.json' with { type: 'json' };
 import surfaceResistances from '../../../data/physics/iso6946-surface-resistances.json' with { type: 'json' };
 import saturationFormulas from '../../../data/physics/saturation-formulas.json' with { type: 'json' };
-import { numberAsGiven } from '../../base/number-text.js';
+import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { asSentence } from '../../report/as-sentence.js';
-import { formatQuantity } from '../../report/format-quantity.js';
 import type { CaseReport, ReportCell, ReportCrossSection, ReportSection, ReportTable } from '../../report/report-model.js';
 import { distinctCautions } from '../../report/report-verdicts.js';
 import type { WallAnalysis } from './wall-analysis.js';
@@ -20,35 +19,36 @@ import { conditionPhrase, insideHumidityWords, interstitialSection, monthlySecti
 
 const LAYER_TABLE = 'Layers, inside to outside, with the surface resistances';
 
-export function wallReport(input: WallInput, analysis: WallAnalysis): CaseReport {
+/** `text` writes the figures in sentences and notes in the project's units (default SI). */
+export function wallReport(input: WallInput, analysis: WallAnalysis, text: QuantityText = SI_TEXT): CaseReport {
   const w = analysis.wall;
-  const verdicts = wallVerdicts(analysis);
+  const verdicts = wallVerdicts(analysis, text);
   const monthly = monthlySection(input, analysis);
   return {
     kind: 'wall',
     title: input.name ?? 'Wall or roof',
-    subject: subjectOf(input),
+    subject: subjectOf(input, text),
     keyFigures: [
-      { label: 'U-value', value: w.uValue, quantity: 'uValue', note: `unrounded ${formatQuantity(w.uValue, 'uValueUnrounded')}` },
+      { label: 'U-value', value: w.uValue, quantity: 'uValue', note: `unrounded ${text.figure(w.uValue, 'uValueUnrounded')}` },
       { label: 'Total thermal resistance R_T', value: w.totalResistance, quantity: 'thermalResistance', note: 'surface to surface plus R_si and R_se' },
-      { label: 'Inside surface temperature', value: w.insideSurfaceTemperature, quantity: 'temperature', note: `at the design condition, with R_si = ${formatQuantity(w.insideSurfaceResistance, 'thermalResistance')}` },
+      { label: 'Inside surface temperature', value: w.insideSurfaceTemperature, quantity: 'temperature', note: `at the design condition, with R_si = ${text.figure(w.insideSurfaceResistance, 'thermalResistance')}` },
       { label: 'Heat flow density', value: w.heatFlowDensity, quantity: 'heatFlux', note: 'from the inside to the outside' },
       { label: 'Heat flow through the whole area', value: w.heatFlow, quantity: 'heatFlow' },
     ],
     verdicts,
-    sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis), mouldSection(analysis), interstitialSection(analysis), ...(monthly ? [monthly] : [])],
+    sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis, text), mouldSection(analysis, text), interstitialSection(analysis), ...(monthly ? [monthly] : [])],
     energyBalance: { ...w.energyBalance, quantity: 'heatFlux' },
     assumptions: assumptionsOf(input, analysis),
     warnings: analysis.warnings.map(asSentence),
-    sources: sourcesOf(input, analysis),
+    sources: sourcesOf(input, analysis, text),
     cautions: distinctCautions(verdicts),
   };
 }
 
-function subjectOf(input: WallInput): string {
+function subjectOf(input: WallInput, text: QuantityText): string {
   const direction = { upward: 'heat flowing upwards (a roof or ceiling)', downward: 'heat flowing downwards (a floor)', horizontal: 'heat flowing horizontally (a wall)' }[input.heatFlowDirection];
   const total = input.layers.reduce((s, l) => s + l.thickness, 0);
-  return `Building element of ${input.layers.length} layers, ${formatQuantity(total, 'thickness')} in all, ${direction}; design condition ${formatQuantity(input.inside.temperature, 'temperature')} inside, ${formatQuantity(input.outside.temperature, 'temperature')} outside.`;
+  return `Building element of ${input.layers.length} layers, ${text.figure(total, 'thickness')} in all, ${direction}; design condition ${text.figure(input.inside.temperature, 'temperature')} inside, ${text.figure(input.outside.temperature, 'temperature')} outside.`;
 }
 
 function conditionsSection(input: WallInput, a: WallAnalysis): ReportSection {
@@ -155,11 +155,11 @@ function crossSectionOf(input: WallInput, layers: WallAnalysis['wall']['layers']
   };
 }
 
-function surfaceResistanceSection(input: WallInput, a: WallAnalysis): ReportSection {
+function surfaceResistanceSection(input: WallInput, a: WallAnalysis, text: QuantityText): ReportSection {
   const given = input.surfaceResistances !== undefined && input.surfaceResistances !== 'standard';
   const uBasis = given
-    ? `R_si = ${formatQuantity(a.wall.insideSurfaceResistance, 'thermalResistance')} as given in the case`
-    : `the ISO 6946 inside surface resistance for ${input.heatFlowDirection} heat flow, R_si = ${formatQuantity(a.wall.insideSurfaceResistance, 'thermalResistance')}`;
+    ? `R_si = ${text.figure(a.wall.insideSurfaceResistance, 'thermalResistance')} as given in the case`
+    : `the ISO 6946 inside surface resistance for ${input.heatFlowDirection} heat flow, R_si = ${text.figure(a.wall.insideSurfaceResistance, 'thermalResistance')}`;
   const mouldSurface = a.mould.insideSurfaceTemperature;
   const design = a.mould.designIndexMould === null ? null : a.mould.conditions[a.mould.designIndexMould]!;
   return {
@@ -170,7 +170,7 @@ function surfaceResistanceSection(input: WallInput, a: WallAnalysis): ReportSect
         kind: 'paragraphs',
         paragraphs: [
           `The U-value, the layer temperatures and the interstitial condensation check use ${uBasis}.`,
-          `The mould and inside-surface condensation checks use R_si = ${formatQuantity(a.mould.insideSurfaceResistance, 'thermalResistance')}, the larger resistance ISO 13788 sets for opaque elements, which allows for furniture and corners and gives a colder inside surface${mouldSurface !== null && design ? `: ${formatQuantity(mouldSurface, 'temperature')} ${conditionPhrase(design.label)}` : ''}.`,
+          `The mould and inside-surface condensation checks use R_si = ${text.figure(a.mould.insideSurfaceResistance, 'thermalResistance')}, the larger resistance ISO 13788 sets for opaque elements, which allows for furniture and corners and gives a colder inside surface${mouldSurface !== null && design ? `: ${text.figure(mouldSurface, 'temperature')} ${conditionPhrase(design.label)}` : ''}.`,
         ],
       },
     ],
@@ -194,7 +194,7 @@ function assumptionsOf(input: WallInput, a: WallAnalysis): string[] {
   ].map(asSentence);
 }
 
-function sourcesOf(input: WallInput, a: WallAnalysis): string[] {
+function sourcesOf(input: WallInput, a: WallAnalysis, text: QuantityText): string[] {
   const iso = saturationFormulas.formulas.find((f) => f.id === 'iso13788')!;
   const humidity = input.moisture?.insideHumidity;
   const hasAirLayer = input.layers.some(isAirLayer);
@@ -207,7 +207,7 @@ function sourcesOf(input: WallInput, a: WallAnalysis): string[] {
     `U-value and temperatures: ISO 6946 method, solved as a one-dimensional finite-element problem (${a.solves === 1 ? 'one engine solve' : `${a.solves} engine solves`} for the whole analysis); the U-value rounded to ${moistureParameters.uValueSignificantFigures.value} significant figures as the standard presents it (${moistureParameters.uValueSignificantFigures.label}).`,
     `Surface resistances: ${surfaceResistances.source} (${surfaceResistances.resistances.label}).`,
     ...(hasAirLayer ? [`Air layers: ${airLayers.source} (${airLayers.label}), or its annex formula where a face has a low emissivity.`] : []),
-    `Mould and condensation criteria: ${moistureParameters.source}; surface humidity limits, R_si = ${numberAsGiven(moistureParameters.mouldCheckInsideSurfaceResistance.value)} m²·K/W and the vapour permeability of still air (${moistureParameters.label}).`,
+    `Mould and condensation criteria: ${moistureParameters.source}; surface humidity limits, R_si = ${text.given(moistureParameters.mouldCheckInsideSurfaceResistance.value, 'thermalResistance')} and the vapour permeability of still air (${moistureParameters.label}).`,
     `Saturation pressure: ${iso.source} formulas (${iso.label}).`,
     ...(humidity?.kind === 'class' ? [`Internal humidity classes: ${humidityClasses.source} (${humidityClasses.label}).`] : []),
     ...(input.moisture?.climate ? [`Climate ${input.moisture.climate.name}: ${input.moisture.climate.label}.`] : []),

@@ -52,6 +52,8 @@ export class CaseEditorState {
   /** Out of date: what is on screen is not the result of what the form holds. */
   readonly stale = $derived(Object.keys(this.typingErrors).length > 0 || this.refusal !== null);
 
+  /** The project's units: the report's sentences read in them, so a change solves again. */
+  private unitSystem: UnitSystem;
   private stored: Json;
   private goodDoc: Json | null = null;
   private readonly history = new EditHistory<Json>();
@@ -62,8 +64,9 @@ export class CaseEditorState {
   private ready = false;
   private lastEditAt = 0;
 
-  constructor(projectCase: ProjectCase, private readonly onSaved: (saved: ProjectCase) => void) {
+  constructor(projectCase: ProjectCase, unitSystem: UnitSystem, private readonly onSaved: (saved: ProjectCase) => void) {
     this.caseId = projectCase.id;
+    this.unitSystem = unitSystem;
     this.kind = projectCase.inputs.kind;
     this.doc = projectCase.inputs as unknown as Json;
     this.stored = this.doc;
@@ -157,6 +160,14 @@ export class CaseEditorState {
     this.typingErrors = {};
   }
 
+  /** The project switched units: the boxes show the document in them and the report is solved again in them. */
+  changeUnitSystem(system: UnitSystem): void {
+    if (system === this.unitSystem) return;
+    this.unitSystem = system;
+    this.forgetTyping();
+    this.requestSolve();
+  }
+
   private jumpTo(doc: Json): void {
     this.doc = doc;
     this.forgetTyping();
@@ -179,7 +190,7 @@ export class CaseEditorState {
       .map(([id, material]) => [id, $state.snapshot(material) as MaterialProperties] as const);
     this.sentDoc = this.doc;
     this.solving = true;
-    this.solver.solve(this.doc, materials);
+    this.solver.solve(this.doc, materials, this.unitSystem);
   }
 
   private answered({ answer, roundTripMs }: TimedAnswer): void {

@@ -4,6 +4,7 @@
  * request sent is passed on only if nothing newer is coming, so the figures never go backwards.
  */
 import type { PipeSize } from '../../../app/index.js';
+import type { UnitSystem } from '../../../app/base/unit-systems.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 import type { SolveAnswer, SolveRequest } from './solve-messages.js';
 
@@ -34,8 +35,8 @@ export class SolveClient {
     };
   }
 
-  solve(caseJson: unknown, materials: readonly (readonly [number, MaterialProperties])[]): void {
-    this.waiting = { caseJson, materials };
+  solve(caseJson: unknown, materials: readonly (readonly [number, MaterialProperties])[], unitSystem: UnitSystem): void {
+    this.waiting = { caseJson, materials, unitSystem };
     if (!this.inFlight) this.sendWaiting();
   }
 

@@ -1,5 +1,6 @@
 /** What the page and the solving worker say to each other (structured-clone data only). */
 import type { PipeSize } from '../../../app/index.js';
+import type { UnitSystem } from '../../../app/base/unit-systems.js';
 import type { CaseReport } from '../../../app/report/report-model.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 
@@ -8,6 +9,8 @@ export interface SolveRequest {
   readonly caseJson: unknown;
   /** The library materials the case refers to, by id. */
   readonly materials: readonly (readonly [number, MaterialProperties])[];
+  /** The project's units, in which the report's sentences read. */
+  readonly unitSystem: UnitSystem;
   /** Sent with the first request only; the worker keeps them. */
   readonly pipeSizes?: readonly PipeSize[];
 }

@@ -1,7 +1,7 @@
 /**
  * The case editor's solver, off the page's main thread so typing never waits for a solve: it runs
- * `solveCase` on each case the page sends, with the library materials the case refers to and the
- * pipe-size tables, and answers with the report model or the engine's one-sentence refusal.
+ * `solveCase` on each case the page sends, with the library materials the case refers to, the
+ * pipe-size tables and the project's units, and answers with the report model or the engine's one-sentence refusal.
  */
 import { InputError, solveCase, type PipeSize } from '../../../app/index.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
@@ -14,7 +14,7 @@ function answer(request: SolveRequest): SolveAnswer {
   const started = performance.now();
   const materials = new Map<number, MaterialProperties>(request.materials);
   try {
-    const solved = solveCase(request.caseJson, { resolveMaterial: (id) => materials.get(id), pipeSizes });
+    const solved = solveCase(request.caseJson, { resolveMaterial: (id) => materials.get(id), pipeSizes, unitSystem: request.unitSystem });
     return { id: request.id, ok: true, report: solved.report, layerMeans: layerMeansOf(solved.result), solveMs: performance.now() - started };
   } catch (error) {
     const solveMs = performance.now() - started;

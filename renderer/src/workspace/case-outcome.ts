@@ -1,10 +1,11 @@
 /**
  * One case as its row in the list reads it: the key figure (heat loss or U-value), the surface
  * temperature the report names first, and each check's verdict, from the report model of `solveCase`, or the sentence that says why it cannot be calculated. Solving is
- * cheap but not free, so each outcome is kept for the exact inputs it was solved from: a rename,
- * a move or a change of units reuses it, and only new inputs are solved again.
+ * cheap but not free, so each outcome is kept for the exact inputs and units it was solved from:
+ * a rename or a move reuses it; new inputs, or the project switched to other units (the labels
+ * read in them: "Heat loss per foot"), are solved again.
  */
-import type { ProjectCase } from '../../../app/api/contract.js';
+import type { ProjectCase, UnitSystem } from '../../../app/api/contract.js';
 import { solveCase, type CaseContext, type ReportFigure, type ReportVerdict } from '../../../app/index.js';
 import { messageOf } from '../bridge/lamina-api.js';
 
@@ -30,17 +31,17 @@ export function solveForList(inputs: unknown, context: CaseContext): CaseOutcome
 /** Kept outcomes at most: far more than a project holds, so only edits made long ago are dropped. */
 const KEPT = 500;
 
-/** Outcomes by the JSON text of the inputs they were solved from. */
+/** Outcomes by the unit system and the JSON text of the inputs they were solved from. */
 export class CaseOutcomes {
   private readonly solved = new Map<string, CaseOutcome>();
 
   constructor(private readonly context: CaseContext) {}
 
-  of(projectCase: ProjectCase): CaseOutcome {
-    const key = JSON.stringify(projectCase.inputs);
+  of(projectCase: ProjectCase, unitSystem: UnitSystem): CaseOutcome {
+    const key = `${unitSystem} ${JSON.stringify(projectCase.inputs)}`;
     let outcome = this.solved.get(key);
     if (!outcome) {
-      outcome = solveForList(projectCase.inputs, this.context);
+      outcome = solveForList(projectCase.inputs, { ...this.context, unitSystem });
       if (this.solved.size >= KEPT) this.solved.clear();
       this.solved.set(key, outcome);
     }

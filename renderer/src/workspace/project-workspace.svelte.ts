@@ -4,7 +4,7 @@
  * moving, removing with an undo, and the one case open in the editor. Every change goes through
  * the typed API first; the list shows what the Node side answered.
  */
-import type { CaseKind, Project, ProjectCase, ProjectSummary } from '../../../app/api/contract.js';
+import type { CaseKind, Project, ProjectCase, ProjectSummary, UnitSystem } from '../../../app/api/contract.js';
 import { PROJECT_LIMITS } from '../../../app/api/project-limits.js';
 import { laminaApi, messageOf } from '../bridge/lamina-api.js';
 import { BLANK_CASE_NAMES, blankCaseInputs } from './blank-cases.js';
@@ -57,9 +57,9 @@ export class ProjectWorkspace {
     }
   }
 
-  /** The row's figures; undefined until the library has arrived. */
-  outcomeOf(projectCase: ProjectCase): CaseOutcome | undefined {
-    return this.library && this.outcomes ? this.outcomes.of(projectCase) : undefined;
+  /** The row's figures, its labels in the project's units; undefined until the library has arrived. */
+  outcomeOf(projectCase: ProjectCase, unitSystem: UnitSystem): CaseOutcome | undefined {
+    return this.library && this.outcomes ? this.outcomes.of(projectCase, unitSystem) : undefined;
   }
 
   async addBlank(kind: CaseKind): Promise<ProjectCase | undefined> {
