@@ -7,7 +7,7 @@
 import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import type { OuterSurfaceShape } from '../../physics/outer-surface-exchange.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity } from '../insulated/insulated-inputs.js';
-import { reportedStackSolution, solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
+import { insulatedStack, reportedStackSolution, solveStack, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
 import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
 import { DEFAULT_SURFACE_METHOD } from '../pipe/pipe-input.js';
 
@@ -29,11 +29,7 @@ export function calculateFlatSurface(input: FlatSurfaceInput, text: QuantityText
   validateFlatSurfaceInput(input);
   const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
   const assumptions: string[] = [];
-  const stack: StackLayer[] = [
-    ...(input.wall ? [{ role: 'wall' as const, name: `wall (${input.wall.material.name})`, material: input.wall.material, thickness: input.wall.thickness }] : []),
-    ...input.layers.map((l, i): StackLayer => ({ role: 'insulation', name: `insulation layer ${i + 1} (${l.material.name})`, material: l.material, thickness: l.thickness })),
-    ...(input.jacket ? [{ role: 'jacket' as const, name: `jacket (${input.jacket.material.name})`, material: input.jacket.material, thickness: input.jacket.thickness }] : []),
-  ];
+  const stack = insulatedStack(input.wall ? { role: 'wall', label: 'wall', layer: input.wall } : null, input.layers, input.jacket);
   const shape: OuterSurfaceShape =
     input.surface.kind === 'vertical'
       ? { kind: 'vertical-wall', height: input.surface.height }

@@ -16,10 +16,27 @@ import { personnelProtectionCheck, type PersonnelProtectionResult } from '../../
 import { serviceTemperatureCheck, type ServiceTemperatureResult } from '../../checks/service-temperature.js';
 import { surfaceCondensationCheck, type SurfaceCondensationResult } from '../../checks/surface-condensation.js';
 import { conductivityUseWarnings } from '../../checks/plausibility-warnings.js';
-import { toEngineLayers } from './layer-build.js';
+import { toEngineLayers, type MaterialLayer } from './layer-build.js';
 import type { AmbientConditions, InnerCondition } from './insulated-inputs.js';
 
 export type LayerRole = 'pipe-wall' | 'wall' | 'insulation' | 'jacket';
+
+/**
+ * The stack of a pipe or flat surface, inside first: the carrier (pipe wall or plate, when there is
+ * one), the insulation layers and the jacket, each named as reports print it.
+ */
+export function insulatedStack(
+  carrier: { readonly role: 'pipe-wall' | 'wall'; readonly label: string; readonly layer: MaterialLayer } | null,
+  layers: readonly MaterialLayer[],
+  jacket: MaterialLayer | undefined,
+): StackLayer[] {
+  const named = (role: LayerRole, label: string, l: MaterialLayer): StackLayer => ({ role, name: `${label} (${l.material.name})`, material: l.material, thickness: l.thickness });
+  return [
+    ...(carrier ? [named(carrier.role, carrier.label, carrier.layer)] : []),
+    ...layers.map((l, i) => named('insulation', `insulation layer ${i + 1}`, l)),
+    ...(jacket ? [named('jacket', 'jacket', jacket)] : []),
+  ];
+}
 
 export interface StackLayer {
   readonly role: LayerRole;

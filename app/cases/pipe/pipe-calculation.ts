@@ -16,7 +16,7 @@ import {
   outerSurfaceEmissivity,
   type ResolvedEmissivity,
 } from '../insulated/insulated-inputs.js';
-import { reportedStackSolution, solveStack, type StackLayer, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
+import { insulatedStack, reportedStackSolution, solveStack, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
 import { DEFAULT_SURFACE_METHOD, validatePipeInput, verticalPipeHeight, type PipeInput } from './pipe-input.js';
 
 export interface PipeResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
@@ -47,11 +47,11 @@ export function calculatePipe(input: PipeInput, text: QuantityText = SI_TEXT): P
   const assumptions: string[] = [];
 
   const innerRadius = input.pipe.outerDiameter / 2 - input.pipe.wallThickness;
-  const stack: StackLayer[] = [
-    { role: 'pipe-wall', name: `pipe wall (${input.pipe.material.name})`, material: input.pipe.material, thickness: input.pipe.wallThickness },
-    ...input.layers.map((l, i): StackLayer => ({ role: 'insulation', name: `insulation layer ${i + 1} (${l.material.name})`, material: l.material, thickness: l.thickness })),
-    ...(input.jacket ? [{ role: 'jacket' as const, name: `jacket (${input.jacket.material.name})`, material: input.jacket.material, thickness: input.jacket.thickness }] : []),
-  ];
+  const stack = insulatedStack(
+    { role: 'pipe-wall', label: 'pipe wall', layer: { material: input.pipe.material, thickness: input.pipe.wallThickness } },
+    input.layers,
+    input.jacket,
+  );
   const outerDiameter = 2 * stack.reduce((r, l) => r + l.thickness, innerRadius);
 
   let height: number | null = null;
