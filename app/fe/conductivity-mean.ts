@@ -27,21 +27,26 @@ export function meanConductivityBetween(model: ConductivityModel, a: number, b: 
       return mean;
     }
     case 'table':
-      return tableMean(model.points, a, b);
+      return tableMean(model, a, b);
   }
 }
 
-function tableMean(points: readonly (readonly [number, number])[], a: number, b: number): number {
+/**
+ * Piece by piece. Takes the model as given (no object built per call) and loops by index: the
+ * chart's temperature profile evaluates this dozens of times per layer.
+ */
+function tableMean(model: Extract<ConductivityModel, { kind: 'table' }>, a: number, b: number): number {
+  const points = model.points;
   const lo = Math.min(a, b);
   const hi = Math.max(a, b);
-  const model = { kind: 'table', points } as const;
   // Breakpoints strictly inside (lo, hi): without any, λ is one straight piece there.
   let inside = false;
-  for (const [t] of points) if (t > lo && t < hi) inside = true;
+  for (let i = 0; i < points.length; i++) if (points[i]![0] > lo && points[i]![0] < hi) inside = true;
   if (!inside || hi === lo) return conductivityAt(model, (lo + hi) / 2);
   let integral = 0;
   let from = lo;
-  for (const [t] of points) {
+  for (let i = 0; i < points.length; i++) {
+    const t = points[i]![0];
     if (t <= lo || t >= hi) continue;
     integral += conductivityAt(model, (from + t) / 2) * (t - from);
     from = t;

@@ -5,7 +5,7 @@
  * the two face temperatures. For a constant λ this is the straight line of a plane layer and the
  * logarithmic profile of a cylindrical one; with λ(θ) it is curved as the physics says.
  */
-import type { ConductivityModel } from './conductivity.js';
+import { conductivityAt, type ConductivityModel } from './conductivity.js';
 import { meanConductivityBetween } from './conductivity-mean.js';
 import type { Geometry } from './problem.js';
 
@@ -29,17 +29,29 @@ export function exactLayerProfile(
   return points;
 }
 
-/** θ between t1 and t2 where ∫_{t1}^{θ} λ = s·total (λ > 0, so the integral is monotone in θ): bisection to round-off. */
+/**
+ * θ between t1 and t2 where F(θ) = ∫_{t1}^{θ} λ = s·total. λ > 0, so F rises with θ and its slope
+ * is λ(θ) itself: Newton's method from the straight-line guess, kept inside a bracket that
+ * shrinks with every step (a step that would leave it bisects instead), to round-off. For a
+ * constant λ the first step is exact; bisection alone took some 40 evaluations of the integral
+ * per point and was a fifth of a pipe case's solve time.
+ */
 function temperatureAtShare(model: ConductivityModel, t1: number, t2: number, total: number, s: number): number {
   let lo = Math.min(t1, t2);
   let hi = Math.max(t1, t2);
-  const rising = t2 > t1;
-  for (let k = 0; k < 60 && hi - lo > 1e-12 * (1 + Math.abs(hi)); k++) {
-    const mid = (lo + hi) / 2;
-    const reached = meanConductivityBetween(model, t1, mid) * (mid - t1);
-    // Short of the share: move away from t1.
-    if (Math.abs(reached) < Math.abs(s * total) === rising) lo = mid;
-    else hi = mid;
+  const target = s * total;
+  let theta = t1 + s * (t2 - t1);
+  for (let k = 0; k < 60; k++) {
+    const miss = meanConductivityBetween(model, t1, theta) * (theta - t1) - target;
+    if (miss === 0) return theta;
+    // F rises with θ: a positive miss means the root lies below θ.
+    if (miss > 0) hi = theta;
+    else lo = theta;
+    let next = theta - miss / conductivityAt(model, theta);
+    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
+    const settled = Math.abs(next - theta) <= 1e-13 * (1 + Math.abs(theta)) || hi - lo <= 1e-13 * (1 + Math.abs(hi));
+    theta = next;
+    if (settled) break;
   }
-  return (lo + hi) / 2;
+  return theta;
 }

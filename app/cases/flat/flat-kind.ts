@@ -9,7 +9,7 @@ import { requireInsulatedConductivities } from '../insulated/insulated-conductiv
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
 import { insulatedSolvedParts } from '../insulated/insulated-solved-parts.js';
 import { withOperationDefaults } from '../insulated/operation-defaults.js';
-import { calculateFlatSurface, type FlatSurfaceResult } from './flat-surface-calculation.js';
+import { calculateValidatedFlatSurface, type FlatSurfaceResult } from './flat-surface-calculation.js';
 import { parseFlatCaseFile } from './flat-case-file.js';
 import type { FlatSurfaceInput } from './flat-surface-input.js';
 import { flatReport } from './flat-report.js';
@@ -25,7 +25,7 @@ export const flatKind: CaseKind<FlatSurfaceInput, FlatSurfaceResult> = {
     return { title: input.title ?? 'Flat surface', input, assumptions };
   },
   solve({ input, assumptions }, text) {
-    return insulatedSolvedParts(calculateFlatSurface(input, text), assumptions);
+    return insulatedSolvedParts(calculateValidatedFlatSurface(input, text), assumptions);
   },
   report(parsed, solved, text) {
     return flatReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions, text });

@@ -24,9 +24,17 @@ export interface FlatSurfaceResult extends Omit<StackSolution, 'engine' | 'heatO
   readonly assumptions: readonly string[];
 }
 
-/** `text` writes the figures of the checks' reasons and warnings (default SI). */
+/** Validates `input`, then calculates; `text` writes the figures of the checks' reasons and warnings (default SI). */
 export function calculateFlatSurface(input: FlatSurfaceInput, text: QuantityText = SI_TEXT): FlatSurfaceResult {
   validateFlatSurfaceInput(input);
+  return calculateValidatedFlatSurface(input, text);
+}
+
+/**
+ * The calculation of an input that has passed validateFlatSurfaceInput already: the flat kind's
+ * parse validates the whole case, so its solve does not check every field a second time.
+ */
+export function calculateValidatedFlatSurface(input: FlatSurfaceInput, text: QuantityText): FlatSurfaceResult {
   const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
   const assumptions: string[] = [];
   const stack = insulatedStack(input.wall ? { role: 'wall', label: 'wall', layer: input.wall } : null, input.layers, input.jacket);

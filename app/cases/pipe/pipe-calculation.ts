@@ -40,9 +40,17 @@ export interface PipeResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
   readonly assumptions: readonly string[];
 }
 
-/** `text` writes the figures of the checks' reasons, warnings and assumptions (default SI). */
+/** Validates `input`, then calculates; `text` writes the figures of the checks' reasons, warnings and assumptions (default SI). */
 export function calculatePipe(input: PipeInput, text: QuantityText = SI_TEXT): PipeResult {
   validatePipeInput(input);
+  return calculateValidatedPipe(input, text);
+}
+
+/**
+ * The calculation of an input that has passed validatePipeInput already: the pipe kind's parse
+ * validates the whole case, so its solve does not check every field a second time.
+ */
+export function calculateValidatedPipe(input: PipeInput, text: QuantityText): PipeResult {
   const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
   const assumptions: string[] = [];
 

@@ -10,7 +10,7 @@ import { requireInsulatedConductivities } from '../insulated/insulated-conductiv
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
 import { insulatedSolvedParts } from '../insulated/insulated-solved-parts.js';
 import { withOperationDefaults } from '../insulated/operation-defaults.js';
-import { calculatePipe, type PipeResult } from './pipe-calculation.js';
+import { calculateValidatedPipe, type PipeResult } from './pipe-calculation.js';
 import { parsePipeCaseFile } from './pipe-case-file.js';
 import { DEFAULT_SURFACE_METHOD, type PipeInput } from './pipe-input.js';
 import { pipeReport } from './pipe-report.js';
@@ -32,7 +32,7 @@ export const pipeKind: CaseKind<PipeCase, PipeResult> = {
     return { title: input.title ?? 'Pipe', input: { ...input, pipeSize: sized.size }, assumptions };
   },
   solve({ input, assumptions }, text) {
-    return insulatedSolvedParts(calculatePipe(input, text), assumptions);
+    return insulatedSolvedParts(calculateValidatedPipe(input, text), assumptions);
   },
   report(parsed, solved, text) {
     return pipeReport(parsed.input, solved.result, { title: parsed.title, assumptions: solved.assumptions, text });
