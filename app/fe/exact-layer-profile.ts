@@ -47,11 +47,13 @@ function temperatureAtShare(model: ConductivityModel, t1: number, t2: number, to
     // F rises with θ: a positive miss means the root lies below θ.
     if (miss > 0) hi = theta;
     else lo = theta;
-    let next = theta - miss / conductivityAt(model, theta);
-    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
-    const settled = Math.abs(next - theta) <= 1e-13 * (1 + Math.abs(theta)) || hi - lo <= 1e-13 * (1 + Math.abs(hi));
-    theta = next;
-    if (settled) break;
+    const step = miss / conductivityAt(model, theta);
+    // A step at round-off size is the answer (testing it before the bracket: such a step may land
+    // on the bracket's end, and bisecting then would throw the converged value away).
+    if (Math.abs(step) <= 1e-13 * (1 + Math.abs(theta))) return theta - step;
+    const next = theta - step;
+    theta = next > lo && next < hi ? next : (lo + hi) / 2;
+    if (hi - lo <= 1e-13 * (1 + Math.abs(hi))) break;
   }
   return theta;
 }
