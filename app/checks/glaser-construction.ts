@@ -95,6 +95,19 @@ function fillTowardsClosedEnd(towardsEnd: readonly Peg[], out: (number | null)[]
   for (let i = lowest + 1; i < towardsEnd.length; i++) out[towardsEnd[i]!.k] = level;
 }
 
+/**
+ * The pressure point k is held at: the inside and outside air (at most saturation), a wet
+ * interface at saturation; undefined for a point free to follow the hull. A function of its own,
+ * not a closure: the monthly procedure builds the profile two dozen times per wall.
+ */
+function fixedValue(input: GlaserInput, k: number): number | undefined {
+  const sat = input.saturation;
+  const n = input.layerSd.length;
+  if (k === 0) return Math.min(input.insidePressure, sat[0]!);
+  if (k === n) return Math.min(input.outsidePressure, sat[n]!);
+  return input.wet?.[k] ? sat[k] : undefined;
+}
+
 export function constructVapourProfile(input: GlaserInput): GlaserProfile {
   const sd = input.layerSd;
   const n = sd.length;
@@ -102,11 +115,6 @@ export function constructVapourProfile(input: GlaserInput): GlaserProfile {
   const pressure: (number | null)[] = new Array(n + 1).fill(null);
   const vertex: boolean[] = new Array(n + 1).fill(false);
   const surfaceCondensation = { inside: input.insidePressure > sat[0]!, outside: input.outsidePressure > sat[n]! };
-  const fixedValue = (k: number): number | undefined => {
-    if (k === 0) return Math.min(input.insidePressure, sat[0]!);
-    if (k === n) return Math.min(input.outsidePressure, sat[n]!);
-    return input.wet?.[k] ? sat[k] : undefined;
-  };
 
   // Runs of points joined by vapour-open layers.
   let start = 0;
@@ -117,9 +125,9 @@ export function constructVapourProfile(input: GlaserInput): GlaserProfile {
     let x = 0;
     for (let k = start; k <= end; k++) {
       if (k > start) x += sd[k - 1]!;
-      run.push({ k, x, p: fixedValue(k) ?? sat[k]! });
+      run.push({ k, x, p: fixedValue(input, k) ?? sat[k]! });
     }
-    const anchors = run.map((q, i) => (fixedValue(q.k) !== undefined ? i : -1)).filter((i) => i >= 0);
+    const anchors = run.map((q, i) => (fixedValue(input, q.k) !== undefined ? i : -1)).filter((i) => i >= 0);
     if (anchors.length > 0) {
       const first = anchors[0]!;
       const last = anchors[anchors.length - 1]!;

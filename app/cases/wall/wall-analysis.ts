@@ -44,15 +44,25 @@ export interface WallAnalysis {
   readonly warnings: readonly string[];
 }
 
-/** Everything the analysis will need of the input, checked up front (a missing μ is found here, not halfway). */
-export function validateWallCase(input: WallInput): void {
-  validateWallInput(input);
+/**
+ * What the analysis needs of the input beyond the fields validateWallInput checks (which
+ * parseWallCaseFile runs): every layer's vapour data, found up front (a missing μ here, not halfway).
+ */
+export function requireWallVapourData(input: WallInput): void {
   wallVapourLayers(input, buildThermalStack(input));
 }
 
-/** `text` writes the figures of the checks' reasons and of the warnings in the project's units (default SI). */
+/** Validates `input`, then analyses it; `text` writes the figures of the checks' reasons and of the warnings in the project's units (default SI). */
 export function analyseWall(input: WallInput, text: QuantityText = SI_TEXT): WallAnalysis {
   validateWallInput(input);
+  return analyseValidatedWall(input, text);
+}
+
+/**
+ * The analysis of an input that has passed validateWallInput and requireWallVapourData already:
+ * the wall kind's parse validates the whole case, so its solve does not check every field again.
+ */
+export function analyseValidatedWall(input: WallInput, text: QuantityText): WallAnalysis {
   const stack = buildThermalStack(input);
   const vapour = wallVapourLayers(input, stack);
   const humidity = input.moisture?.insideHumidity;

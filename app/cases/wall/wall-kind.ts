@@ -7,7 +7,7 @@
 import { isObject } from '../../base/field-checks.js';
 import { requireConductivitiesOver, type CaseMaterialUse } from '../case-conductivity-span.js';
 import type { CaseKind } from '../case-kind.js';
-import { analyseWall, validateWallCase, type WallAnalysis } from './wall-analysis.js';
+import { analyseValidatedWall, requireWallVapourData, type WallAnalysis } from './wall-analysis.js';
 import { parseWallCaseFile } from './wall-case-file.js';
 import { isAirLayer, type WallInput } from './wall-input.js';
 import { wallReport } from './wall-report.js';
@@ -18,11 +18,12 @@ export const wallKind: CaseKind<WallInput, WallAnalysis> = {
   parse(json, context) {
     const input = parseWallCaseFile(json, context.resolveMaterial);
     requireWallConductivities(json, input);
-    validateWallCase(input);
+    // parseWallCaseFile validated every field; the vapour data the analysis needs is checked here.
+    requireWallVapourData(input);
     return { title: input.name ?? 'Wall or roof', input, assumptions: [] };
   },
   solve({ input }, text) {
-    const result = analyseWall(input, text);
+    const result = analyseValidatedWall(input, text);
     return { result, checks: result.checks, warnings: result.warnings, assumptions: [] };
   },
   report(parsed, solved, text) {
