@@ -9,16 +9,15 @@
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { solveCase, type CaseReport } from '../../app/index.js';
-import { formatQuantity } from '../../app/report/format-quantity.js';
 import type { UnitSystem } from '../../app/base/unit-systems.js';
-import { caseContext } from '../../main/cases/case-context.js';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import { resultsFolder, useBrowserSession } from './browser-session.js';
+import { engineFigures as storedCaseFigures, keystrokeToFigures, median, shownFigures } from './case-editor-page.js';
 
 const session = useBrowserSession('lamina-case-editor-e2e-');
 let server: BrowserServer;
 const services = () => server.library.library();
+const engineFigures = (caseId: number, system: UnitSystem) => storedCaseFigures(services(), caseId, system);
 const idOf = (name: string) => {
   const found = services().materials.list({ search: name }).find((m) => m.name === name);
   if (!found) throw new Error(`No seed material "${name}".`);
@@ -47,49 +46,11 @@ async function openCase(projectName: string, caseId: number, viewport = { width:
   return { page, problems };
 }
 
-/** The key figures on screen, label -> shown value. */
-async function shownFigures(page: Page): Promise<Record<string, string>> {
-  return page.locator('.case-editor .key-figures .figure').evaluateAll((rows) =>
-    Object.fromEntries(rows.map((r) => [r.querySelector('dt')!.textContent!.trim(), r.querySelector('.value')!.textContent!.trim()])),
-  );
-}
-
-/** The engine's figures for the case as stored, written as the screen writes them. */
-function engineFigures(caseId: number, system: UnitSystem): { figures: Record<string, string>; report: CaseReport } {
-  const stored = services().projects.getCase(caseId);
-  // Solved in the project's units, as the page solves it: the labels read in them ("per foot").
-  const report = solveCase(stored.inputs, { ...caseContext(services().materials), unitSystem: system }).report;
-  return { report, figures: Object.fromEntries(report.keyFigures.map((f) => [f.label, formatQuantity(f.value, f.quantity, system)])) };
-}
-
 const saved = (page: Page) => expect.poll(async () => (await page.locator('[data-testid="case-save-status"]').textContent())?.trim(), { timeout: 10_000 }).toBe('Saved');
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(resultsFolder, name), fullPage: false });
 
 async function typeInto(page: Page, selector: string, text: string): Promise<void> {
   await page.fill(selector, text);
-}
-
-/** Types into a box inside the page and waits for the key figures to change: ms from the keystroke to the new figures. */
-function keystrokeToFigures(page: Page, selector: string, text: string): Promise<number> {
-  return page.evaluate(
-    ([sel, value]) =>
-      new Promise<number>((resolve) => {
-        const box = document.querySelector<HTMLInputElement>(sel!)!;
-        const figures = document.querySelector('.case-editor .key-figures')!;
-        const before = figures.textContent;
-        const started = performance.now();
-        const observer = new MutationObserver(() => {
-          if (figures.textContent !== before) {
-            observer.disconnect();
-            resolve(performance.now() - started);
-          }
-        });
-        observer.observe(figures, { subtree: true, characterData: true, childList: true });
-        box.value = value!;
-        box.dispatchEvent(new Event('input', { bubbles: true }));
-      }),
-    [selector, text],
-  );
 }
 
 describe('the case editor', () => {
@@ -143,8 +104,7 @@ describe('the case editor', () => {
     await expect.poll(() => shownFigures(page)).toEqual(thicker);
     const times: number[] = [];
     for (const mm of ['60', '70', '80', '90', '100', '110', '120', '100', '80', '60', '50']) times.push(await keystrokeToFigures(page, '#case-layers-0-thickness', mm));
-    times.sort((a, b) => a - b);
-    console.log(`case editor, pipe: median keystroke-to-figures ${times[Math.floor(times.length / 2)]!.toFixed(1)} ms over ${times.length} edits`);
+    console.log(`case editor, pipe: median keystroke-to-figures ${median(times).toFixed(1)} ms over ${times.length} edits`);
     await saved(page);
     // Leaving the box ends its undo step (so does a pause of a second).
     await page.locator('#case-layers-0-thickness').blur();

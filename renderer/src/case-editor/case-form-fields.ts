@@ -12,12 +12,16 @@ import type { NumberRange } from '../../../app/base/number-range.js';
 import { QUANTITY_RANGES as R } from '../../../app/base/quantity-ranges.js';
 import { PIPE_SIZE_SERIES, type PipeSize } from '../../../app/index.js';
 import { DEMO_CLIMATES } from '../../../app/cases/wall/wall-demo-climates.js';
+import type { UnitSystem } from '../../../app/base/unit-systems.js';
 import { getAt, setAt, type Json } from './case-paths.js';
+import { hintValue } from './field-text.js';
 
 export type CaseKindName = 'pipe' | 'flat' | 'wall';
 
 export interface FormContext {
   readonly pipeSizes: readonly PipeSize[];
+  /** The project's units, for the values a field's text names (SI when not given). */
+  readonly unitSystem?: UnitSystem;
 }
 
 export interface NumberField {
@@ -138,7 +142,7 @@ const SURROUNDINGS: readonly FormField[] = [
 /** The touch limit's default: 60 °C (the engine's own, common practice, no source). */
 const TOUCH_LIMIT: NumberField = {
   type: 'number', path: 'touchLimit', label: 'Highest surface temperature safe to touch', quantity: 'temperature', range: temperatureRange(0, 100), initial: 60,
-  whenEmpty: () => '60 °C',
+  whenEmpty: (_doc, context) => hintValue(60, 'temperature', context.unitSystem ?? 'SI'),
 };
 
 // ---- pipe size ----
@@ -212,7 +216,7 @@ const PIPE_SIZE: readonly FormField[] = [
     read: (doc) => text(getAt(doc, 'orientation'), 'horizontal'),
     write: (doc, value) => setAt(value === 'horizontal' ? setAt(doc, 'height', undefined) : doc, 'orientation', value),
   },
-  { type: 'number', path: 'height', label: 'Height the air rises along', quantity: 'length', range: R.pipeHeight, initial: 3, shown: is('orientation', 'vertical'), whenEmpty: () => 'the run length, at most 3 m' },
+  { type: 'number', path: 'height', label: 'Height the air rises along', quantity: 'length', range: R.pipeHeight, initial: 3, shown: is('orientation', 'vertical'), whenEmpty: (_doc, context) => `the run length, at most ${hintValue(3, 'length', context.unitSystem ?? 'SI')}` },
 ];
 
 // ---- flat surface ----
@@ -238,7 +242,7 @@ const WALL_SIZE: readonly FormField[] = [
     read: (doc) => text(getAt(doc, 'heatFlowDirection'), 'horizontal'),
     write: (doc, value) => setAt(doc, 'heatFlowDirection', value),
   },
-  { type: 'number', path: 'area', label: 'Area of the element', quantity: 'area', range: R.area, initial: 1, whenEmpty: () => '1 m²' },
+  { type: 'number', path: 'area', label: 'Area of the element', quantity: 'area', range: R.area, initial: 1, whenEmpty: (_doc, context) => hintValue(1, 'area', context.unitSystem ?? 'SI') },
 ];
 
 const humidityKind = (doc: Json) => text(getAt(doc, 'moisture.insideHumidity.kind'), 'measured');

@@ -15,6 +15,15 @@ export function boxText(stored: number, quantity: QuantityName, system: UnitSyst
   return String(Object.is(shown, -0) ? 0 : shown);
 }
 
+/**
+ * A value in a hint or a list label, not in a box: six significant digits read well ("Default
+ * 32.8084 ft") and nothing is stored from them, so they need not round-trip.
+ */
+export function hintValue(stored: number, quantity: QuantityName, system: UnitSystem): string {
+  const unit = unitLabel(quantity, system);
+  return `${formatBound(Number(toDisplay(stored, quantity, system).toPrecision(6)))}${unit ? ` ${unit}` : ''}`;
+}
+
 export type TextReading = { readonly ok: true; readonly value: number } | { readonly ok: false; readonly message: string };
 
 /** Typed text to the stored SI value; a decimal comma is read as a point, a minus sign as "-". */
