@@ -5,6 +5,8 @@
  */
 import { InputError } from './input-error.js';
 import { describeRange, isInRange, type NumberRange } from './number-range.js';
+import type { QuantityName } from './quantities.js';
+import { enteredPart, rangePart, unitPart, type SentencePart } from './quantity-sentence.js';
 import { shownValue } from './shown-value.js';
 
 /** −273.15 °C: no temperature in °C may be at or below it. */
@@ -16,34 +18,56 @@ export function isObject(value: unknown): value is JsonObject {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
 }
 
-/** A finite number; returns it. `unit` names the unit the number is read in. */
-export function requireFinite(field: string, value: unknown, unit = ''): number {
+/**
+ * The value a refusal repeats: as the SI sentence always wrote it (a bare number), with its unit
+ * once converted, so "(got 5)" of an SI file reads "(got 196.85 in)" in a US project.
+ */
+function given(value: number, quantity: QuantityName | undefined): SentencePart {
+  return quantity === undefined ? String(value) : enteredPart(value, quantity, String(value));
+}
+
+/** "0 m/s" as the SI sentence writes it; the same bound converted ("0 mph") otherwise. */
+function zero(unit: string, quantity: QuantityName | undefined): SentencePart {
+  return quantity === undefined ? `0 ${unit}` : enteredPart(0, quantity, `0 ${unit}`);
+}
+
+/** The range's wording, kept as a part when its kind is known. */
+function allowed(range: NumberRange): SentencePart {
+  return range.quantity === undefined ? describeRange(range) : rangePart(range, range.quantity, describeRange(range));
+}
+
+/**
+ * A finite number; returns it. `unit` names the unit the number is read in; `quantity`, where
+ * given, is its kind, so a project in other units reads that unit instead.
+ */
+export function requireFinite(field: string, value: unknown, unit = '', quantity?: QuantityName): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new InputError(field, `${field} must be a finite number${unit ? ` in ${unit}` : ''} (got ${shownValue(value)}).`);
+    const inUnit: SentencePart[] = unit ? [' in ', quantity === undefined ? unit : unitPart(quantity, unit)] : [];
+    throw new InputError(field, [`${field} must be a finite number`, ...inUnit, ` (got ${shownValue(value)}).`]);
   }
   return value;
 }
 
 /** A finite number > 0. */
-export function requirePositive(field: string, value: unknown, unit: string): number {
-  const v = requireFinite(field, value, unit);
-  if (!(v > 0)) throw new InputError(field, `${field} must be greater than 0 ${unit} (got ${v}).`);
+export function requirePositive(field: string, value: unknown, unit: string, quantity?: QuantityName): number {
+  const v = requireFinite(field, value, unit, quantity);
+  if (!(v > 0)) throw new InputError(field, [`${field} must be greater than `, zero(unit, quantity), ' (got ', given(v, quantity), ').']);
   return v;
 }
 
 /** A finite number ≥ 0. */
-export function requireNonNegative(field: string, value: unknown, unit: string): number {
-  const v = requireFinite(field, value, unit);
-  if (!(v >= 0)) throw new InputError(field, `${field} must be 0 ${unit} or more (got ${v}).`);
+export function requireNonNegative(field: string, value: unknown, unit: string, quantity?: QuantityName): number {
+  const v = requireFinite(field, value, unit, quantity);
+  if (!(v >= 0)) throw new InputError(field, [`${field} must be `, zero(unit, quantity), ' or more (got ', given(v, quantity), ').']);
   return v;
 }
 
-/** A finite number within `range`. */
+/** A finite number within `range`; the refusal states the range in a project's units where the range names its kind. */
 export function requireNumberIn(field: string, value: unknown, range: NumberRange): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new InputError(field, `${field} must be a number, ${describeRange(range)} (got ${shownValue(value)}).`);
+    throw new InputError(field, [`${field} must be a number, `, allowed(range), ` (got ${shownValue(value)}).`]);
   }
-  if (!isInRange(value, range)) throw new InputError(field, `${field} must be ${describeRange(range)} (got ${value}).`);
+  if (!isInRange(value, range)) throw new InputError(field, [`${field} must be `, allowed(range), ' (got ', given(value, range.quantity), ').']);
   return value;
 }
 

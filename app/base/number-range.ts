@@ -2,7 +2,10 @@
  * A closed or half-open range of allowed values with its unit, and the one wording every range
  * message uses ("at least 0.001 and at most 1000 W/(m·K)"). Ranges are data: the same object
  * checks a case file, a stored material and a form field, and documents the JSON Schemas.
+ * `quantity` names the kind of number, so a refusal can state the range in a project's units.
  */
+import type { QuantityName } from './quantities.js';
+
 export interface NumberRange {
   readonly min: number;
   readonly max: number;
@@ -10,6 +13,8 @@ export interface NumberRange {
   readonly minExclusive?: boolean;
   readonly maxExclusive?: boolean;
   readonly unit: string;
+  /** The kind the bounds are of (app/base/quantities), where they have a unit a project may convert. */
+  readonly quantity?: QuantityName;
 }
 
 /** "at least 1 and at most 1000 W/(m·K)". */

@@ -61,6 +61,13 @@ export const QUANTITIES = {
   /** A material's density and specific heat capacity (library, transient layers). */
   density: { unit: 'kg/m³', precision: { significant: 3 } },
   specificHeat: { unit: 'J/(kg·K)', precision: { significant: 3 } },
+  /**
+   * The vent opening area A_v of a ventilated air layer (ISO 6946), stored as the standard states
+   * it: mm² per metre of length for a vertical layer, mm² per m² of area for a horizontal one.
+   * The two are different quantities (an area per length, a ratio of areas), so each has its kind.
+   */
+  ventOpeningPerLength: { unit: 'mm²/m', precision: { decimals: 0 } },
+  ventOpeningPerArea: { unit: 'mm²/m²', precision: { decimals: 0 } },
 } as const satisfies Record<string, QuantityKind>;
 
 export type QuantityName = keyof typeof QUANTITIES;

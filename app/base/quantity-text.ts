@@ -23,6 +23,14 @@ export interface QuantityText {
   given(value: number, quantity: QuantityName): string;
   /** The number alone, as `given` writes it ("−50" of "−50 to 105 °C"). */
   givenNumber(value: number, quantity: QuantityName): string;
+  /**
+   * A value as typed or a documented bound, converted, in its shortest form to 6 significant
+   * figures ("78.7402 in", "−459.67 °F"): the form of the field hints, so a refusal's bounds read
+   * as the hint beside the box shows them.
+   */
+  entered(value: number, quantity: QuantityName): string;
+  /** The number alone, as `entered` writes it. */
+  enteredNumber(value: number, quantity: QuantityName): string;
   /** `siText` (the sentence's own SI wording of `value`) in SI; `figure(value, quantity)` otherwise. */
   keepingSi(siText: string, value: number, quantity: QuantityName): string;
   /** The unit of a kind ("°F", "in"); empty for a dimensionless number. */
@@ -36,15 +44,27 @@ export function quantityText(system: UnitSystem = 'SI'): QuantityText {
   const figure = (value: number, quantity: QuantityName): string => withUnit(number(value, quantity), quantity);
   const givenNumber = (value: number, quantity: QuantityName): string =>
     system === 'SI' ? numberAsGiven(toDisplay(value, quantity, system)) : number(value, quantity);
+  const enteredNumber = (value: number, quantity: QuantityName): string => shortestForm(Number(toDisplay(value, quantity, system).toPrecision(ENTERED_DIGITS)));
   return {
     system,
     figure,
     number,
+    entered: (value, quantity) => withUnit(enteredNumber(value, quantity), quantity),
+    enteredNumber,
     given: (value, quantity) => withUnit(givenNumber(value, quantity), quantity),
     givenNumber,
     keepingSi: (siText, value, quantity) => (system === 'SI' ? siText : figure(value, quantity)),
     unit,
   };
+}
+
+/** Significant figures of an entered value or bound: enough for any typed number, few enough to hide conversion noise. */
+const ENTERED_DIGITS = 6;
+
+/** "78.7402", "1.8e7" from 100 000 up (as the field hints write large bounds), with the true minus sign. */
+function shortestForm(value: number): string {
+  const text = Math.abs(value) >= 1e5 ? value.toExponential().replace('e+', 'e') : String(Object.is(value, -0) ? 0 : value);
+  return text.replace(/^-/, '\u2212');
 }
 
 /** The formatter of an SI project, for callers that give no unit system. */

@@ -23,6 +23,8 @@
  *   perms would not be a conversion (it depends on the vapour permeability of air);
  * - condensate in lb/ft² and its rate in lb/(ft²·day), so a month's rate times its days gives the
  *   amount in the same unit; wind in mph;
+ * - the vent opening area of a ventilated air layer in in²/ft (vertical layer) or in²/ft²
+ *   (horizontal layer), the US way of stating net free vent area per length or area of a cavity;
  * - times, relative humidity and dimensionless numbers as in SI.
  * Every factor comes from app/base/us-customary-units, derived there from the exact definitions.
  */
@@ -91,6 +93,8 @@ const US_CUSTOMARY = {
   heatGeneration: { unit: 'Btu/(h·ft³)', precision: sig(3), storedPerShown: U.btuPerHourCubicFoot },
   density: { unit: 'lb/ft³', precision: sig(3), storedPerShown: U.poundPerCubicFoot },
   specificHeat: { unit: 'Btu/(lb·°F)', precision: sig(3), storedPerShown: U.btuPerPoundFahrenheit },
+  ventOpeningPerLength: { unit: 'in²/ft', precision: sig(3), storedPerShown: U.squareInchPerFootInSquareMillimetresPerMetre },
+  ventOpeningPerArea: { unit: 'in²/ft²', precision: sig(3), storedPerShown: U.squareInchPerSquareFootInSquareMillimetresPerSquareMetre },
 } as const satisfies Record<QuantityName, UsCustomaryUnit | typeof AS_IN_SI>;
 
 /** The US unit of a kind, or null where the kind shows as in SI. */

@@ -25,6 +25,7 @@ const STANDARD_GRAVITY = 9.806_65; // m/s²
 const SQUARE_FOOT = FOOT ** 2;
 const CUBIC_FOOT = FOOT ** 3;
 const BTU_PER_HOUR = BTU / HOUR; // W
+const MM2_PER_M2 = 1e6; // square millimetres in a square metre, exact
 
 /** °F reading at 0 °C: θ_F = 1.8·θ_C + 32 (reference notes §11). */
 export const FAHRENHEIT_AT_ZERO_CELSIUS = 32;
@@ -76,4 +77,8 @@ export const US_UNITS = {
   btuPerPoundFahrenheit: BTU / (POUND * FAHRENHEIT_DEGREE),
   /** m/s */
   milePerHour: MILE / HOUR,
+  /** mm²/m, the unit vent openings per length are stored in: a square inch per foot of length. */
+  squareInchPerFootInSquareMillimetresPerMetre: (INCH ** 2 * MM2_PER_M2) / FOOT,
+  /** mm²/m², the unit vent openings per area are stored in: a square inch per square foot of area (1/144). */
+  squareInchPerSquareFootInSquareMillimetresPerSquareMetre: (INCH ** 2 * MM2_PER_M2) / SQUARE_FOOT,
 } as const;

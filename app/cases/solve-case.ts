@@ -35,25 +35,37 @@ export function caseKindOf(json: unknown): CaseKind {
   return kind;
 }
 
-/** Parses and validates a case completely without solving it (for saving a case: refuse it now, not later). */
+/**
+ * Parses and validates a case completely without solving it (for saving a case: refuse it now, not
+ * later). A refusal reads in the context's units (SI unless told).
+ */
 export function parseCase(json: unknown, context: CaseContext): { kind: CaseKind; parsed: ParsedCase<unknown> } {
-  requireBoundedNesting(json, 'The case');
-  const kind = caseKindOf(json);
-  return { kind, parsed: kind.parse(json, context) };
+  try {
+    requireBoundedNesting(json, 'The case');
+    const kind = caseKindOf(json);
+    return { kind, parsed: kind.parse(json, context) };
+  } catch (error) {
+    throw error instanceof InputError && context.unitSystem !== undefined ? error.inUnits(quantityText(context.unitSystem)) : error;
+  }
 }
 
 export function solveCase(json: unknown, context: CaseContext): SolvedCase {
-  const { kind, parsed } = parseCase(json, context);
   const text = quantityText(context.unitSystem);
-  const solved = kind.solve(parsed, text);
-  return {
-    kind: kind.kind,
-    title: parsed.title,
-    input: parsed.input,
-    result: solved.result,
-    checks: solved.checks,
-    warnings: solved.warnings,
-    assumptions: solved.assumptions,
-    report: kind.report(parsed, solved, text),
-  };
+  try {
+    const { kind, parsed } = parseCase(json, context);
+    const solved = kind.solve(parsed, text);
+    return {
+      kind: kind.kind,
+      title: parsed.title,
+      input: parsed.input,
+      result: solved.result,
+      checks: solved.checks,
+      warnings: solved.warnings,
+      assumptions: solved.assumptions,
+      report: kind.report(parsed, solved, text),
+    };
+  } catch (error) {
+    // A refusal reads in the project's units, as the rest of the case does; the input stays as given.
+    throw error instanceof InputError ? error.inUnits(text) : error;
+  }
 }

@@ -10,6 +10,7 @@
  * cold side), so such temperatures are refused rather than answered badly.
  */
 import airTable from '../../data/physics/air-properties.json' with { type: 'json' };
+import { enteredPart, figurePart, type Sentence } from '../base/quantity-sentence.js';
 import { toKelvin } from './constants.js';
 import { requireInRange } from './input-checks.js';
 
@@ -26,7 +27,8 @@ export interface AirProperties {
   readonly prandtl: number;
   /** Volumetric expansion coefficient 1/T, 1/K (ideal gas). */
   readonly expansionCoefficient: number;
-  readonly warnings: readonly string[];
+  /** The extrapolation warning, its temperatures as SI values of their kind (app/base/quantity-sentence). */
+  readonly warnings: readonly Sentence[];
 }
 
 interface AirRow {
@@ -61,11 +63,18 @@ export function airPropertiesAt(celsius: number, field = 'filmTemperature'): Air
   const b = rows[i + 1]!;
   const t = (theta - a.temperature) / (b.temperature - a.temperature);
   const mix = (x: number, y: number): number => x + t * (y - x);
-  const warnings: string[] = [];
+  const warnings: Sentence[] = [];
   if (theta < AIR_TABLE_RANGE.minimum || theta > AIR_TABLE_RANGE.maximum) {
-    warnings.push(
-      `Air properties at ${theta.toFixed(1)} °C are extrapolated beyond the table range ${AIR_TABLE_RANGE.minimum} to ${AIR_TABLE_RANGE.maximum} °C.`,
-    );
+    const { minimum, maximum } = AIR_TABLE_RANGE;
+    warnings.push([
+      'Air properties at ',
+      figurePart(theta, 'temperature', `${theta.toFixed(1)} °C`),
+      ' are extrapolated beyond the table range ',
+      enteredPart(minimum, 'temperature', String(minimum), true),
+      ' to ',
+      enteredPart(maximum, 'temperature', `${maximum} °C`),
+      '.',
+    ]);
   }
   return {
     temperature: theta,

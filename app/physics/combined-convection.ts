@@ -7,6 +7,7 @@
  * and forced parts of a wall may be based on different lengths (height versus length along the
  * wind); on a common length the two forms are identical.
  */
+import { distinctSentences, type Sentence } from '../base/quantity-sentence.js';
 import type { ConvectionResult } from './convection-result.js';
 
 export type MixedFlowArrangement = 'assisting-or-transverse' | 'opposing';
@@ -16,7 +17,7 @@ export interface CombinedConvectionResult {
   readonly coefficient: number;
   readonly forced: ConvectionResult;
   readonly natural: ConvectionResult;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Sentence[];
 }
 
 export const MIXED_CONVECTION_EXPONENT = 3;
@@ -34,6 +35,6 @@ export function combinedConvection(
     coefficient: Math.max(0, sum) ** (1 / exponent),
     forced,
     natural,
-    warnings: [...new Set([...natural.warnings, ...forced.warnings])],
+    warnings: distinctSentences([...natural.warnings, ...forced.warnings]),
   };
 }

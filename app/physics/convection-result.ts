@@ -1,9 +1,15 @@
-/** What every convection correlation returns, so the callers can treat them alike. */
+/**
+ * What every convection correlation returns, so the callers can treat them alike. A warning is a
+ * sentence whose figures (a temperature, a length) stay SI values tagged with their kind
+ * (app/base/quantity-sentence), worded in the project's units by the case that reports it;
+ * dimensionless groups (Ra, Re, Pr) are plain text.
+ */
+import type { Sentence } from '../base/quantity-sentence.js';
 
 /** A Nusselt number from a correlation, with the sentences that flag use outside its validity range. */
 export interface NusseltEstimate {
   readonly nusselt: number;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Sentence[];
 }
 
 export interface ConvectionResult {
@@ -22,7 +28,7 @@ export interface ConvectionResult {
   /** Which correlation produced the result, for reports. */
   readonly correlation: string;
   /** One sentence per condition outside the correlation's validity range; empty inside it. */
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Sentence[];
 }
 
 /** Formats a dimensionless group for a warning sentence. */

@@ -13,6 +13,7 @@
  * accepts any finite surface temperature: the engine hands it every intermediate iterate of its
  * Newton solve, and those can lie far from where the surface can be (see evaluationTemperature).
  */
+import { enteredPart, figurePart, type Sentence } from '../base/quantity-sentence.js';
 import type { FilmExchange } from '../fe/problem.js';
 import { combinedConvection } from './combined-convection.js';
 import { forcedConvectionCylinder } from './cylinder-cross-flow.js';
@@ -92,12 +93,13 @@ export interface OuterSurfaceExchange extends FilmExchange {
   readonly convection: number;
   /** h_r, W/(m²·K) */
   readonly radiation: number;
-  readonly warnings: readonly string[];
+  /** Use outside a correlation's or the air properties' range; figures as SI values of their kind (app/base/quantity-sentence). */
+  readonly warnings: readonly Sentence[];
 }
 
 export type OuterSurfaceExchangeFunction = (surfaceTemperature: number) => OuterSurfaceExchange;
 
-type ConvectionModel = (surfaceTemperature: number) => { coefficient: number; warnings: readonly string[] };
+type ConvectionModel = (surfaceTemperature: number) => { coefficient: number; warnings: readonly Sentence[] };
 
 /**
  * °C: the coldest surface temperature the film is evaluated at, 0.15 K. Radiation's T⁴ law needs a
@@ -148,13 +150,24 @@ function evaluationTemperature(surfaceTemperature: number, range: EvaluationRang
  * The warning for a surface whose film temperature lies beyond the air properties' limits, when
  * those limits (not the case's bounding temperatures) are what it was evaluated at.
  */
-function airLimitWarning(surfaceTemperature: number, evaluated: number, range: EvaluationRange, airTemperature: number): string[] {
+function airLimitWarning(surfaceTemperature: number, evaluated: number, range: EvaluationRange, airTemperature: number): Sentence[] {
   const air = range.air;
   const heldAtLimit = air !== null && ((surfaceTemperature > air.highest && evaluated === air.highest) || (surfaceTemperature < air.lowest && evaluated === air.lowest));
   if (!heldAtLimit) return [];
   const film = (surfaceTemperature + airTemperature) / 2;
+  const { minimum, maximum } = AIR_EXTRAPOLATION_LIMITS;
   return [
-    `The film temperature ${film.toFixed(1)} °C is beyond the ${AIR_EXTRAPOLATION_LIMITS.minimum} to ${AIR_EXTRAPOLATION_LIMITS.maximum} °C the air properties are known for; convection was evaluated as at a surface of ${evaluated.toFixed(1)} °C.`,
+    [
+      'The film temperature ',
+      figurePart(film, 'temperature', `${film.toFixed(1)} °C`),
+      ' is beyond the ',
+      enteredPart(minimum, 'temperature', String(minimum), true),
+      ' to ',
+      enteredPart(maximum, 'temperature', `${maximum} °C`),
+      ' the air properties are known for; convection was evaluated as at a surface of ',
+      figurePart(evaluated, 'temperature', `${evaluated.toFixed(1)} °C`),
+      '.',
+    ],
   ];
 }
 

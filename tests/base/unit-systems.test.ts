@@ -130,6 +130,8 @@ describe('the unit systems', () => {
       heatGeneration: 'Btu/(h·ft³)',
       density: 'lb/ft³',
       specificHeat: 'Btu/(lb·°F)',
+      ventOpeningPerLength: 'in²/ft',
+      ventOpeningPerArea: 'in²/ft²',
     });
   });
 

@@ -65,6 +65,19 @@ describe('US customary factors against NIST SP 811 (2008), Appendix B', () => {
     expect(oneUnit('windSpeed')).toBeCloseTo(0.44704, 15);
   });
 
+  it('vent opening areas of an air layer: in²/ft and in²/ft², stored in mm²/m and mm²/m²', () => {
+    // NIST SP 811 B.8: square inch → m² 6.4516 E-04 and foot → m 3.048 E-01, both exact; SP 811
+    // has no entry per foot, so the factor is the quotient: 6.4516e-4 m² / 0.3048 m = 2.116 667
+    // E-03 m²/m = 2116.667 mm²/m (10⁶ mm² in a m², exact).
+    expect(printed(oneUnit('ventOpeningPerLength'), 7)).toBe(2116.667);
+    expect(Math.abs(oneUnit('ventOpeningPerLength') - (6.4516e-4 / 0.3048) * 1e6)).toBeLessThanOrEqual(4 * Number.EPSILON * 2116.667);
+    // NIST SP 811 B.8: square foot → m² 9.290 304 E-02, exact; 144 in² make 1 ft², so one in²/ft² is
+    // 1/144 of a m²/m², 6944.444 mm²/m².
+    expect(printed(oneUnit('ventOpeningPerArea'), 7)).toBe(6944.444);
+    expect(Math.abs(oneUnit('ventOpeningPerArea') - (6.4516e-4 / 9.290304e-2) * 1e6)).toBeLessThanOrEqual(4 * Number.EPSILON * 6944.444);
+    expect(Math.abs(oneUnit('ventOpeningPerArea') - 1e6 / 144)).toBeLessThanOrEqual(4 * Number.EPSILON * 6944.444);
+  });
+
   it('temperature: a Fahrenheit degree is 5/9 K, and 0 °C reads 32 °F', () => {
     // NIST SP 811 B.9: t/°C = (t/°F − 32)/1.8; the reference notes §11: ΔT of 1 °F = 5/9 K.
     expect(oneUnit('temperatureDifference')).toBe(5 / 9);

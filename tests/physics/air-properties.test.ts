@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import airTable from '../../data/physics/air-properties.json' with { type: 'json' };
 import { airPropertiesAt, InputError } from '../../app/physics/index.js';
+import { writeSentence } from '../../app/base/quantity-sentence.js';
+import { quantityText } from '../../app/base/quantity-text.js';
 
 describe('air properties at 1 atm', () => {
   it('reproduces the table at the table points', () => {
@@ -62,8 +64,14 @@ describe('air properties at 1 atm', () => {
   });
 
   it('warns outside the table range and refuses what it cannot extrapolate', () => {
-    expect(airPropertiesAt(150).warnings).toEqual([
+    // The warning keeps its temperatures as SI values of their kind: in SI it reads as it always has.
+    expect(airPropertiesAt(150).warnings.map((w) => writeSentence(w))).toEqual([
       'Air properties at 150.0 °C are extrapolated beyond the table range -20 to 100 °C.',
+    ]);
+    // In US units every temperature is in °F: θ_F = 1.8·θ_C + 32 (NIST SP 811, Appendix B), so
+    // 150 °C = 302 °F, −20 °C = −4 °F and 100 °C = 212 °F.
+    expect(airPropertiesAt(150).warnings.map((w) => writeSentence(w, quantityText('IP')))).toEqual([
+      'Air properties at 302.0 °F are extrapolated beyond the table range −4 to 212 °F.',
     ]);
     expect(airPropertiesAt(-30).warnings).toHaveLength(1);
     expect(airPropertiesAt(50).warnings).toEqual([]);

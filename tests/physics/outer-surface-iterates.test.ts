@@ -9,6 +9,8 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { AIR_EXTRAPOLATION_LIMITS, InputError, outerSurfaceExchange, type OuterSurfaceSpec } from '../../app/physics/index.js';
 import { thrownBy } from './thrown-error.js';
+import { writeSentence } from '../../app/base/quantity-sentence.js';
+import { quantityText } from '../../app/base/quantity-text.js';
 
 const steamMain: OuterSurfaceSpec = {
   shape: { kind: 'pipe', orientation: 'horizontal', outerDiameter: 0.3 },
@@ -53,10 +55,15 @@ describe('the outer-surface film takes any iterate of the solve', () => {
     const limit = 2 * AIR_EXTRAPOLATION_LIMITS.maximum - 20;
     const beyond = film(900);
     expect(beyond.coefficient).toBe(film(limit).coefficient);
-    expect(beyond.warnings).toContain(
+    expect(beyond.warnings.map((w) => writeSentence(w))).toContain(
       'The film temperature 460.0 °C is beyond the -100 to 400 °C the air properties are known for; convection was evaluated as at a surface of 780.0 °C.',
     );
-    expect(film(500).warnings.some((w) => w.startsWith('The film temperature'))).toBe(false);
+    // The same warning for a US project: θ_F = 1.8·θ_C + 32 (NIST SP 811, Appendix B), so 460 °C
+    // = 860 °F, −100 °C = −148 °F, 400 °C = 752 °F and 780 °C = 1436 °F.
+    expect(beyond.warnings.map((w) => writeSentence(w, quantityText('IP')))).toContain(
+      'The film temperature 860.0 °F is beyond the −148 to 752 °F the air properties are known for; convection was evaluated as at a surface of 1436.0 °F.',
+    );
+    expect(film(500).warnings.some((w) => writeSentence(w).startsWith('The film temperature'))).toBe(false);
   });
 
   it('a temperature that is not a number, or bounds the wrong way round, are still refused naming the field', () => {

@@ -60,6 +60,6 @@ export function validateFlatSurfaceInput(input: unknown): asserts input is FlatS
   }
   validateAmbient('ambient', f.ambient);
   if (f.surfaceMethod !== undefined) validateSurfaceMethod('surfaceMethod', f.surfaceMethod, kind === 'horizontal');
-  requireAboveAtMost('area', f.area, 0, MAX_FLAT_AREA, 'm²');
+  requireAboveAtMost('area', f.area, 0, MAX_FLAT_AREA, 'm²', 'area');
   validateOperation(f.operatingHours, f.touchLimit);
 }

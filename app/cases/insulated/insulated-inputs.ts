@@ -6,6 +6,8 @@
  */
 import { requireNumberIn } from '../../base/field-checks.js';
 import type { NumberRange } from '../../base/number-range.js';
+import type { QuantityName } from '../../base/quantities.js';
+import { enteredPart, type SentencePart } from '../../base/quantity-sentence.js';
 import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
 import { validateConductivity } from '../../fe/validate.js';
@@ -78,14 +80,15 @@ export const INPUT_LIMITS = {
 export const SURFACE_METHOD_KINDS = ['correlations', 'simplified', 'fixed-convection', 'fixed-coefficient', 'fixed-resistance'] as const;
 
 export function requireTemperatureIn(field: string, value: unknown, [min, max]: readonly [number, number]): number {
-  return requireInRange(field, requireCelsius(field, value), min, max, '°C');
+  return requireInRange(field, requireCelsius(field, value), min, max, '°C', 'temperature');
 }
 
-/** A number in (min, max]: greater than min, at most max. */
-export function requireAboveAtMost(field: string, value: unknown, min: number, max: number, unit: string): number {
-  const v = requireFinite(field, value, unit);
+/** A number in (min, max]: greater than min, at most max; `quantity` is the kind of `unit`, for a refusal in a project's units. */
+export function requireAboveAtMost(field: string, value: unknown, min: number, max: number, unit: string, quantity?: QuantityName): number {
+  const v = requireFinite(field, value, unit, quantity);
   if (!(v > min && v <= max)) {
-    throw new InputError(field, `${field} must be greater than ${min} ${unit} and at most ${max} ${unit} (got ${v}).`);
+    const figure = (x: number, si: string): SentencePart => (quantity === undefined ? si : enteredPart(x, quantity, si));
+    throw new InputError(field, [`${field} must be greater than `, figure(min, `${min} ${unit}`), ' and at most ', figure(max, `${max} ${unit}`), ' (got ', figure(v, String(v)), ').']);
   }
   return v;
 }
@@ -120,7 +123,7 @@ export function validateMaterial(field: string, material: unknown): void {
   if (typeof min === 'number' && typeof max === 'number' && !(min < max)) {
     throw new InputError(
       `${field}.maxServiceTemperature`,
-      `${field}.maxServiceTemperature must be above ${field}.minServiceTemperature (${min} °C) (got ${max}).`,
+      [`${field}.maxServiceTemperature must be above ${field}.minServiceTemperature (`, enteredPart(min, 'temperature', `${min} °C`), ') (got ', enteredPart(max, 'temperature', String(max)), ').'],
     );
   }
 }
@@ -132,7 +135,7 @@ export function validateInnerCondition(field: string, inner: unknown): void {
   requireTemperatureIn(`${field}.temperature`, c.temperature, INPUT_LIMITS.innerTemperature);
   if (kind === 'fluid') {
     const [min, max] = INPUT_LIMITS.innerCoefficient;
-    requireAboveAtMost(`${field}.coefficient`, (c as { coefficient: unknown }).coefficient, min, max, 'W/(m²·K)');
+    requireAboveAtMost(`${field}.coefficient`, (c as { coefficient: unknown }).coefficient, min, max, 'W/(m²·K)', 'filmCoefficient');
   }
 }
 
@@ -148,7 +151,7 @@ export function validateAmbient(field: string, ambient: unknown): void {
   const kind = requireOneOf(`${field}.exposure.kind`, a.exposure.kind, ['indoor', 'outdoor'] as const);
   if (kind === 'outdoor') {
     const [min, max] = INPUT_LIMITS.windSpeed;
-    requireInRange(`${field}.exposure.windSpeed`, (a.exposure as { windSpeed: unknown }).windSpeed, min, max, 'm/s');
+    requireInRange(`${field}.exposure.windSpeed`, (a.exposure as { windSpeed: unknown }).windSpeed, min, max, 'm/s', 'windSpeed');
   }
 }
 
@@ -180,9 +183,9 @@ export function validateSurfaceMethod(field: string, method: unknown, horizontal
   if (kind === 'simplified' && horizontalSurface) {
     throw new InputError(`${field}.kind`, `${field}.kind 'simplified' has no formula for a horizontal surface; choose 'correlations' or a fixed coefficient.`);
   }
-  if (kind === 'fixed-convection') requireInRange(`${field}.coefficient`, (m as { coefficient: unknown }).coefficient, 0, 1e4, 'W/(m²·K)');
-  if (kind === 'fixed-coefficient') requireAboveAtMost(`${field}.coefficient`, (m as { coefficient: unknown }).coefficient, 0, 1e4, 'W/(m²·K)');
-  if (kind === 'fixed-resistance') requireAboveAtMost(`${field}.resistance`, (m as { resistance: unknown }).resistance, 0, 100, 'm²·K/W');
+  if (kind === 'fixed-convection') requireInRange(`${field}.coefficient`, (m as { coefficient: unknown }).coefficient, 0, 1e4, 'W/(m²·K)', 'filmCoefficient');
+  if (kind === 'fixed-coefficient') requireAboveAtMost(`${field}.coefficient`, (m as { coefficient: unknown }).coefficient, 0, 1e4, 'W/(m²·K)', 'filmCoefficient');
+  if (kind === 'fixed-resistance') requireAboveAtMost(`${field}.resistance`, (m as { resistance: unknown }).resistance, 0, 100, 'm²·K/W', 'thermalResistance');
 }
 
 export function validateOperation(operatingHours: unknown, touchLimit: unknown): void {

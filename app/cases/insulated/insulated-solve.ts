@@ -6,6 +6,7 @@
  * into convection and radiation at the converged surface temperature; then, as a separate step on
  * the solved result, the surface checks.
  */
+import { writeSentence } from '../../base/quantity-sentence.js';
 import type { QuantityText } from '../../base/quantity-text.js';
 import type { FaceCondition, Geometry } from '../../fe/problem.js';
 import type { SteadyResult } from '../../fe/result.js';
@@ -203,7 +204,8 @@ function solveStackOnly(problem: StackProblem, text: QuantityText): Omit<StackSo
       sinkTemperature: converged.ambient,
     },
     warnings: [
-      ...converged.warnings,
+      // The surface physics states its figures as SI values of their kind; they read in the project's units here.
+      ...converged.warnings.map((w) => writeSentence(w, text)),
       ...conductivityUseWarnings(
         layers.map((l, i) => ({
           name: l.name,

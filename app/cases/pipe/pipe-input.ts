@@ -68,7 +68,7 @@ export function validatePipeInput(input: unknown): asserts input is PipeInput {
   requireObjectField('input', input, 'a pipe calculation input');
   const p = input as PipeInput;
   requireObjectField('pipe', p.pipe, 'the pipe: outerDiameter, wallThickness and material');
-  const d = requireAboveAtMost('pipe.outerDiameter', p.pipe.outerDiameter, 0, MAX_PIPE_DIAMETER, 'm');
+  const d = requireAboveAtMost('pipe.outerDiameter', p.pipe.outerDiameter, 0, MAX_PIPE_DIAMETER, 'm', 'diameter');
   const wall = requireNumberIn('pipe.wallThickness', p.pipe.wallThickness, QUANTITY_RANGES.pipeWallThickness);
   if (!(wall < d / 2)) {
     throw new InputError(
@@ -87,6 +87,6 @@ export function validatePipeInput(input: unknown): asserts input is PipeInput {
   }
   validateAmbient('ambient', p.ambient);
   if (p.surfaceMethod !== undefined) validateSurfaceMethod('surfaceMethod', p.surfaceMethod, false);
-  requireAboveAtMost('length', p.length, 0, MAX_RUN_LENGTH, 'm');
+  requireAboveAtMost('length', p.length, 0, MAX_RUN_LENGTH, 'm', 'length');
   validateOperation(p.operatingHours, p.touchLimit);
 }

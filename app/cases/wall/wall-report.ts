@@ -11,10 +11,11 @@ import surfaceResistances from '../../../data/physics/iso6946-surface-resistance
 import saturationFormulas from '../../../data/physics/saturation-formulas.json' with { type: 'json' };
 import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { asSentence } from '../../report/as-sentence.js';
-import type { CaseReport, ReportCell, ReportCrossSection, ReportSection, ReportTable } from '../../report/report-model.js';
+import type { CaseReport, ReportBlock, ReportCell, ReportCrossSection, ReportFigure, ReportSection, ReportTable } from '../../report/report-model.js';
 import { distinctCautions } from '../../report/report-verdicts.js';
 import type { WallAnalysis } from './wall-analysis.js';
 import { isAirLayer, type WallInput } from './wall-input.js';
+import { ventOpeningQuantity } from './vent-opening.js';
 import { conditionPhrase, insideHumidityWords, interstitialSection, monthlySection, mouldSection, wallVerdicts } from './wall-moisture-report.js';
 
 const LAYER_TABLE = 'Layers, inside to outside, with the surface resistances';
@@ -122,6 +123,7 @@ function layersSection(input: WallInput, a: WallAnalysis): ReportSection {
       ...(w.layers.some((l) => l.kind === 'air-layer')
         ? [{ kind: 'paragraphs' as const, paragraphs: ['An air layer shows no λ: its R is the ISO 6946 thermal resistance of the air layer.'] }]
         : []),
+      ...ventOpeningBlocks(input, w.layers),
       {
         kind: 'chart',
         chart: {
@@ -135,6 +137,16 @@ function layersSection(input: WallInput, a: WallAnalysis): ReportSection {
       },
     ],
   };
+}
+
+/** The vent opening area of each air layer that gives one, by its kind (per m of a vertical layer, per m² of a horizontal one). */
+function ventOpeningBlocks(input: WallInput, layers: WallAnalysis['wall']['layers']): ReportBlock[] {
+  const quantity = ventOpeningQuantity(input.heatFlowDirection);
+  const figures: ReportFigure[] = layers.flatMap((l) => {
+    const given = input.layers[l.index]!;
+    return isAirLayer(given) && given.openingArea !== undefined ? [{ label: `Vent opening area of ${l.name}`, value: given.openingArea, quantity }] : [];
+  });
+  return figures.length > 0 ? [{ kind: 'figures', figures }] : [];
 }
 
 /**

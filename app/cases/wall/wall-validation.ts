@@ -3,28 +3,23 @@
  * (e.g. `layers[2].thickness`) and the allowed range, so a bad value never reaches the engine as NaN.
  */
 import classTable from '../../../data/physics/humidity-classes.json' with { type: 'json' };
-import { requireNumberIn } from '../../base/field-checks.js';
+import { requireFinite, requireNumberIn, requirePositive } from '../../base/field-checks.js';
+import type { QuantityName } from '../../base/quantities.js';
+import { enteredPart } from '../../base/quantity-sentence.js';
 import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
 import { airLayerVentilation, HEAT_FLOW_DIRECTIONS } from '../../physics/index.js';
 import type { MonthlyClimate } from '../../checks/monthly-climate.js';
 import { isAirLayer, type AirCondition, type WallInput } from './wall-input.js';
+import { ventOpeningQuantity } from './vent-opening.js';
 
 const VENTILATIONS = ['unventilated', 'slightly-ventilated', 'well-ventilated'] as const;
 
 import { shownValue as shown } from '../../base/shown-value.js';
 
-function finite(field: string, value: unknown, unit: string): number {
-  if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new InputError(field, `${field} must be a finite number in ${unit} (got ${shown(value)}).`);
-  }
-  return value;
-}
-
-function positive(field: string, value: unknown, unit: string): number {
-  const v = finite(field, value, unit);
-  if (!(v > 0)) throw new InputError(field, `${field} must be greater than 0 ${unit} (got ${v}).`);
-  return v;
+/** A finite number; `quantity` is the kind of `unit`, so a refusal reads in a project's units. */
+function finite(field: string, value: unknown, unit: string, quantity?: QuantityName): number {
+  return requireFinite(field, value, unit, quantity);
 }
 
 /** Relative humidity as a fraction; the message states the range both ways (0 to 1 = 0 to 100 %). */
@@ -41,9 +36,10 @@ export function requireAirCondition(field: string, value: unknown): AirCondition
     throw new InputError(field, `${field} must be an object with a temperature in °C and a relativeHumidity from 0 to 1 (0 to 100 %).`);
   }
   const c = value as AirCondition;
-  const t = finite(`${field}.temperature`, c.temperature, '°C');
+  const t = finite(`${field}.temperature`, c.temperature, '°C', 'temperature');
   if (t < -100 || t > 100) {
-    throw new InputError(`${field}.temperature`, `${field}.temperature must be between -100 °C and 100 °C (got ${t}).`);
+    const celsius = (v: number, si: string) => enteredPart(v, 'temperature', si);
+    throw new InputError(`${field}.temperature`, [`${field}.temperature must be between `, celsius(-100, '-100 °C'), ' and ', celsius(100, '100 °C'), ' (got ', celsius(t, String(t)), ').']);
   }
   requireRelativeHumidity(`${field}.relativeHumidity`, c.relativeHumidity);
   return c;
@@ -83,17 +79,29 @@ export function validateWallInput(input: WallInput): void {
       if (!(VENTILATIONS as readonly unknown[]).includes(layer.ventilation)) {
         throw new InputError(`${f}.ventilation`, `${f}.ventilation must be one of ${VENTILATIONS.map((v) => `'${v}'`).join(', ')} (got ${shown(layer.ventilation)}).`);
       }
+      // Per m of a vertical layer or per m² of a horizontal one: the kind the figures convert as.
+      const opening = ventOpeningQuantity(input.heatFlowDirection);
+      const area = (v: number, si: string, bare = true) => enteredPart(v, opening, si, bare);
       if (layer.openingArea !== undefined) {
-        const a = requireNumberIn(`${f}.openingArea`, layer.openingArea, QUANTITY_RANGES.openingArea);
+        const a = requireNumberIn(`${f}.openingArea`, layer.openingArea, { ...QUANTITY_RANGES.openingArea, quantity: opening });
         const implied = airLayerVentilation(a);
         if (implied !== layer.ventilation) {
-          throw new InputError(
-            `${f}.ventilation`,
-            `${f}.ventilation is '${layer.ventilation}' but an opening area of ${a} mm² per m (or per m²) makes the layer '${implied}' (≤ 500 unventilated, 500 to 1500 slightly, above 1500 well ventilated).`,
-          );
+          throw new InputError(`${f}.ventilation`, [
+            `${f}.ventilation is '${layer.ventilation}' but an opening area of `,
+            area(a, `${a} mm² per m (or per m²)`, false),
+            ` makes the layer '${implied}' (≤ `,
+            area(500, '500'),
+            ' unventilated, ',
+            area(500, '500'),
+            ' to ',
+            area(1500, '1500'),
+            ' slightly, above ',
+            area(1500, '1500'),
+            ' well ventilated).',
+          ]);
         }
       } else if (layer.ventilation === 'slightly-ventilated') {
-        throw new InputError(`${f}.openingArea`, `${f}.openingArea is needed for a slightly ventilated layer: give a value above 500 and up to 1500 mm² per m (or per m²).`);
+        throw new InputError(`${f}.openingArea`, [`${f}.openingArea is needed for a slightly ventilated layer: give a value above `, area(500, '500'), ' and up to ', area(1500, '1500 mm² per m (or per m²)', false), '.']);
       }
       if (layer.emissivities !== undefined) {
         if (!Array.isArray(layer.emissivities) || layer.emissivities.length !== 2) {
@@ -119,8 +127,9 @@ export function validateWallInput(input: WallInput): void {
       throw new InputError('surfaceResistances', `surfaceResistances must be 'standard' or an object { inside, outside } in m²·K/W.`);
     }
     for (const side of ['inside', 'outside'] as const) {
-      const v = positive(`surfaceResistances.${side}`, rs[side], 'm²·K/W');
-      if (v > 10) throw new InputError(`surfaceResistances.${side}`, `surfaceResistances.${side} must be greater than 0 and at most 10 m²·K/W (got ${v}).`);
+      const v = requirePositive(`surfaceResistances.${side}`, rs[side], 'm²·K/W', 'thermalResistance');
+      const resistance = (x: number, si: string, bare = false) => enteredPart(x, 'thermalResistance', si, bare);
+      if (v > 10) throw new InputError(`surfaceResistances.${side}`, [`surfaceResistances.${side} must be greater than `, resistance(0, '0', true), ' and at most ', resistance(10, '10 m²·K/W'), ' (got ', resistance(v, String(v)), ').']);
     }
   }
   if (input.area !== undefined) requireNumberIn('area', input.area, QUANTITY_RANGES.area);
