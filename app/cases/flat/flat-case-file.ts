@@ -15,7 +15,7 @@
  */
 import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
 import { rejectUnknownKeys, requireObject, type JsonObject } from '../case-fields.js';
-import { caseEnvelope, caseLayers, caseMaterialLayer, type MaterialResolver } from '../pipe/pipe-case-file.js';
+import { caseEnvelope, caseLayers, caseMaterialLayer, withoutEnvelope, type MaterialResolver } from '../pipe/pipe-case-file.js';
 
 export const FLAT_CASE_SCHEMA_VERSION = 1;
 
@@ -44,7 +44,7 @@ export function parseFlatCaseFile(json: unknown, resolveMaterial: MaterialResolv
   const input: JsonObject = { ...file, layers: caseLayers(file['layers'], resolveMaterial) };
   if (file['wall'] !== undefined) input['wall'] = caseMaterialLayer(file['wall'], 'wall', resolveMaterial);
   if (file['jacket'] !== undefined) input['jacket'] = caseMaterialLayer(file['jacket'], 'jacket', resolveMaterial, ['emissivity']);
-  for (const key of ['$schema', 'schemaVersion', 'kind', 'notes']) delete input[key];
-  validateFlatSurfaceInput(input);
-  return input;
+  const fields = withoutEnvelope(input);
+  validateFlatSurfaceInput(fields);
+  return fields;
 }
