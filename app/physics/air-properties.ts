@@ -53,16 +53,33 @@ export const AIR_EXTRAPOLATION_LIMITS = { minimum: -100, maximum: 400 } as const
 /** The source named in the air property table. */
 export const AIR_TABLE_SOURCE: string = airTable.source;
 
+/**
+ * The last answer: mixed convection evaluates the forced and the natural correlation at the same
+ * film temperature one after the other, at every evaluation of the surface film. The answer is
+ * frozen, so sharing it cannot let one caller change another's properties.
+ */
+let last: { readonly celsius: number; readonly properties: AirProperties } | null = null;
+
 /** Air properties at 1 atm at temperature θ (°C), interpolated in the table. */
 export function airPropertiesAt(celsius: number, field = 'filmTemperature'): AirProperties {
+  if (last !== null && last.celsius === celsius) return last.properties;
   const theta = requireInRange(field, celsius, AIR_EXTRAPOLATION_LIMITS.minimum, AIR_EXTRAPOLATION_LIMITS.maximum, '°C');
+  const properties = interpolatedAirProperties(theta);
+  last = { celsius, properties };
+  return properties;
+}
+
+function mix(x: number, y: number, t: number): number {
+  return x + t * (y - x);
+}
+
+function interpolatedAirProperties(theta: number): AirProperties {
   // Pick the segment [i, i+1] containing θ; the end segments serve for extrapolation.
   let i = 0;
   while (i < rows.length - 2 && theta > rows[i + 1]!.temperature) i++;
   const a = rows[i]!;
   const b = rows[i + 1]!;
   const t = (theta - a.temperature) / (b.temperature - a.temperature);
-  const mix = (x: number, y: number): number => x + t * (y - x);
   const warnings: Sentence[] = [];
   if (theta < AIR_TABLE_RANGE.minimum || theta > AIR_TABLE_RANGE.maximum) {
     const { minimum, maximum } = AIR_TABLE_RANGE;
@@ -76,13 +93,13 @@ export function airPropertiesAt(celsius: number, field = 'filmTemperature'): Air
       '.',
     ]);
   }
-  return {
+  return Object.freeze({
     temperature: theta,
-    conductivity: mix(a.conductivity, b.conductivity),
-    kinematicViscosity: mix(a.kinematicViscosity, b.kinematicViscosity),
-    thermalDiffusivity: mix(a.thermalDiffusivity, b.thermalDiffusivity),
-    prandtl: mix(a.prandtl, b.prandtl),
+    conductivity: mix(a.conductivity, b.conductivity, t),
+    kinematicViscosity: mix(a.kinematicViscosity, b.kinematicViscosity, t),
+    thermalDiffusivity: mix(a.thermalDiffusivity, b.thermalDiffusivity, t),
+    prandtl: mix(a.prandtl, b.prandtl, t),
     expansionCoefficient: 1 / toKelvin(theta),
-    warnings,
-  };
+    warnings: Object.freeze(warnings),
+  });
 }
