@@ -56,21 +56,27 @@ function cross(a: Peg, b: Peg, c: Peg): number {
   return (b.x - a.x) * (c.p - a.p) - (b.p - a.p) * (c.x - a.x);
 }
 
-/** Lower convex hull of points sorted by x (first and last always kept). */
-function lowerHull(points: readonly Peg[]): Peg[] {
+/** Lower convex hull of points[from..to] sorted by x (first and last always kept). */
+function lowerHull(points: readonly Peg[], from: number, to: number): Peg[] {
   const hull: Peg[] = [];
-  for (const q of points) {
+  for (let i = from; i <= to; i++) {
+    const q = points[i]!;
     while (hull.length >= 2 && cross(hull[hull.length - 2]!, hull[hull.length - 1]!, q) <= 0) hull.pop();
     hull.push(q);
   }
   return hull;
 }
 
-/** Fills `out` for the points of `stretch` (sorted, first and last are the hull's ends) by the hull. */
-function fillByHull(stretch: readonly Peg[], out: (number | null)[], vertex: boolean[]): void {
-  const hull = lowerHull(stretch);
+/**
+ * Fills `out` for the points stretch[from..to] (sorted, first and last are the hull's ends) by the
+ * hull. A range of indices rather than a copied slice: the monthly procedure builds two dozen
+ * profiles per wall.
+ */
+function fillByHull(stretch: readonly Peg[], out: (number | null)[], vertex: boolean[], from: number, to: number): void {
+  const hull = lowerHull(stretch, from, to);
   let h = 0;
-  for (const q of stretch) {
+  for (let i = from; i <= to; i++) {
+    const q = stretch[i]!;
     while (h < hull.length - 2 && hull[h + 1]!.x <= q.x) h++;
     const a = hull[h]!;
     const b = hull[h + 1] ?? a;
@@ -90,7 +96,7 @@ function fillByHull(stretch: readonly Peg[], out: (number | null)[], vertex: boo
 function fillTowardsClosedEnd(towardsEnd: readonly Peg[], out: (number | null)[], vertex: boolean[]): void {
   let lowest = 0;
   for (let i = 1; i < towardsEnd.length; i++) if (towardsEnd[i]!.p < towardsEnd[lowest]!.p) lowest = i;
-  fillByHull(towardsEnd.slice(0, lowest + 1), out, vertex);
+  fillByHull(towardsEnd, out, vertex, 0, lowest);
   const level = towardsEnd[lowest]!.p;
   for (let i = lowest + 1; i < towardsEnd.length; i++) out[towardsEnd[i]!.k] = level;
 }
@@ -127,7 +133,8 @@ export function constructVapourProfile(input: GlaserInput): GlaserProfile {
       if (k > start) x += sd[k - 1]!;
       run.push({ k, x, p: fixedValue(input, k) ?? sat[k]! });
     }
-    const anchors = run.map((q, i) => (fixedValue(input, q.k) !== undefined ? i : -1)).filter((i) => i >= 0);
+    const anchors: number[] = [];
+    for (let i = 0; i < run.length; i++) if (fixedValue(input, run[i]!.k) !== undefined) anchors.push(i);
     if (anchors.length > 0) {
       const first = anchors[0]!;
       const last = anchors[anchors.length - 1]!;
@@ -135,7 +142,7 @@ export function constructVapourProfile(input: GlaserInput): GlaserProfile {
         pressure[run[i]!.k] = run[i]!.p;
         vertex[run[i]!.k] = true;
       }
-      for (let a = 0; a + 1 < anchors.length; a++) fillByHull(run.slice(anchors[a]!, anchors[a + 1]! + 1), pressure, vertex);
+      for (let a = 0; a + 1 < anchors.length; a++) fillByHull(run, pressure, vertex, anchors[a]!, anchors[a + 1]!);
       if (first > 0) {
         const fx = run[first]!.x;
         fillTowardsClosedEnd(run.slice(0, first + 1).reverse().map((q) => ({ ...q, x: fx - q.x })), pressure, vertex);

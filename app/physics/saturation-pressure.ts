@@ -33,10 +33,13 @@ function coefficientsOf(options: SaturationOptions | undefined): { water: Magnus
   return { water: row.water, ice: row.ice, phase };
 }
 
+/** The default formula's coefficients, looked up once: a wall case asks for p_sat at every point of every month. */
+const DEFAULT_COEFFICIENTS = coefficientsOf(undefined);
+
 /** p_sat in Pa at θ (°C). */
 export function saturationPressure(celsius: number, options?: SaturationOptions): number {
   const theta = requireCelsius('temperature', celsius);
-  const { water, ice, phase } = coefficientsOf(options);
+  const { water, ice, phase } = options === undefined ? DEFAULT_COEFFICIENTS : coefficientsOf(options);
   const k = phase === 'water' || (phase === 'auto' && theta >= 0) ? water : ice;
   return k.a * Math.exp((k.b * theta) / (k.c + theta));
 }
