@@ -7,6 +7,7 @@
 import { MATERIAL_LIMITS } from '../materials/material-limits.js';
 import { optionalNumberIn } from '../base/field-checks.js';
 import { InputError } from '../base/input-error.js';
+import { enteredPart } from '../base/quantity-sentence.js';
 import type { NumberRange } from '../base/number-range.js';
 import { validateConductivityModel } from '../materials/conductivity-checks.js';
 import { MATERIAL_CATEGORIES, type MaterialCategory, type MaterialProperties } from '../materials/material-properties.js';
@@ -61,7 +62,7 @@ export function parseInlineMaterial(value: unknown, field: string, defaultCatego
   const low = optionalNumber(value, 'minServiceTemperature', field, MATERIAL_LIMITS.temperature);
   const high = optionalNumber(value, 'maxServiceTemperature', field, MATERIAL_LIMITS.temperature);
   if (low !== null && high !== null && !(low < high)) {
-    throw new InputError(`${field}.maxServiceTemperature`, `${field}.maxServiceTemperature must be above ${field}.minServiceTemperature (${low} °C) (got ${high}).`);
+    throw new InputError(`${field}.maxServiceTemperature`, [`${field}.maxServiceTemperature must be above ${field}.minServiceTemperature (`, enteredPart(low, 'temperature', `${low} °C`), ') (got ', enteredPart(high, 'temperature', String(high)), ').']);
   }
   return {
     name: value.name,

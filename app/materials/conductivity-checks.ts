@@ -8,6 +8,7 @@ import { InputError } from '../base/input-error.js';
 import { isObject, requireNumberIn } from '../base/field-checks.js';
 import { shownValue } from '../base/shown-value.js';
 import { describeRange } from '../base/number-range.js';
+import { enteredPart, figurePart, rangePart } from '../base/quantity-sentence.js';
 import { QUANTITY_RANGES } from '../base/quantity-ranges.js';
 import { conductivityAt, type ConductivityModel } from '../fe/conductivity.js';
 import { validateConductivity } from '../fe/validate.js';
@@ -70,10 +71,20 @@ export function requireConductivityOver(model: ConductivityModel, field: string,
     const t = low + ((high - low) * i) / POLYNOMIAL_SAMPLES;
     const k = conductivityAt(model, t);
     if (!(k >= range.min && k <= range.max)) {
-      throw new InputError(
-        field,
-        `${field} gives ${Number.isFinite(k) ? k.toPrecision(3) : 'no finite value'} W/(m·K) at ${t.toPrecision(4)} °C, but must stay ${describeRange(range)} over the case's temperatures (${low} to ${high} °C).`,
-      );
+      const gives = Number.isFinite(k) ? figurePart(k, 'conductivity', `${k.toPrecision(3)} W/(m·K)`) : 'no finite value';
+      throw new InputError(field, [
+        `${field} gives `,
+        gives,
+        ' at ',
+        figurePart(t, 'temperature', `${t.toPrecision(4)} °C`),
+        ', but must stay ',
+        rangePart({ ...range, quantity: 'conductivity' }, 'conductivity', describeRange(range)),
+        " over the case's temperatures (",
+        enteredPart(low, 'temperature', String(low), true),
+        ' to ',
+        enteredPart(high, 'temperature', `${high} °C`),
+        ').',
+      ]);
     }
   }
 }

@@ -53,6 +53,14 @@ describe('a refusal reads in the project units', () => {
     expect(refusal(pipe, US).message).toMatch(/\(got 100 in\)\.$/);
   });
 
+  it('a pipe wall thicker than the pipe allows: the bound from its diameter in inches', () => {
+    const pipe = example('pipe-hot-water-plant-room.json');
+    pipe['pipe'].wallThickness = 0.06;
+    expect(refusal(pipe, SI).message).toBe('pipe.wallThickness must be at least 0.000001 m and less than half of pipe.outerDiameter (0.05715 m) (got 0.06).');
+    // Half of 0.1143 m is 0.05715 m = 2.25 in; 0.06 m = 2.3622 in (1 in = 0.0254 m).
+    expect(refusal(pipe, US).message).toBe('pipe.wallThickness must be at least 0.0000393701 in and less than half of pipe.outerDiameter (2.25 in) (got 2.3622 in).');
+  });
+
   it('a fluid temperature too high: the limits and the value in °F', () => {
     const pipe = example('pipe-hot-water-plant-room.json');
     pipe['inner'].temperature = 1200;

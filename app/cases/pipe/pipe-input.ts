@@ -6,6 +6,7 @@
 import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { requireNumberIn } from '../../base/field-checks.js';
 import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
+import { enteredPart } from '../../base/quantity-sentence.js';
 import { InputError } from '../../fe/errors.js';
 import type { MaterialProperties } from '../../materials/material-properties.js';
 import { requireOneOf } from '../../physics/input-checks.js';
@@ -73,7 +74,15 @@ export function validatePipeInput(input: unknown): asserts input is PipeInput {
   if (!(wall < d / 2)) {
     throw new InputError(
       'pipe.wallThickness',
-      `pipe.wallThickness must be at least ${QUANTITY_RANGES.pipeWallThickness.min} m and less than half of pipe.outerDiameter (${d / 2} m) (got ${wall}).`,
+      [
+        'pipe.wallThickness must be at least ',
+        enteredPart(QUANTITY_RANGES.pipeWallThickness.min, 'thickness', `${QUANTITY_RANGES.pipeWallThickness.min} m`),
+        ' and less than half of pipe.outerDiameter (',
+        enteredPart(d / 2, 'thickness', `${d / 2} m`),
+        ') (got ',
+        enteredPart(wall, 'thickness', String(wall)),
+        ').',
+      ],
     );
   }
   validateMaterial('pipe.material', p.pipe.material);

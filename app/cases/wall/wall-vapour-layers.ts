@@ -5,6 +5,7 @@
  * parsed (wall-validation.ts asks for μ or s_d on every layer whenever moisture is checked).
  */
 import { InputError } from '../../base/input-error.js';
+import { enteredPart } from '../../base/quantity-sentence.js';
 import type { VapourLayer } from '../../checks/interstitial-vapour-stack.js';
 import { isAirLayer, type WallInput } from './wall-input.js';
 import type { ThermalStack } from './wall-thermal-stack.js';
@@ -25,7 +26,8 @@ export function vapourLayers(input: WallInput, includedIndices: readonly number[
     if (m.equivalentAirLayerThickness !== null && m.equivalentAirLayerThickness !== undefined) {
       const sd = m.equivalentAirLayerThickness;
       if (typeof sd !== 'number' || Number.isNaN(sd) || !(sd > 0)) {
-        throw new InputError(`${field}.equivalentAirLayerThickness`, `${field}.equivalentAirLayerThickness must be greater than 0 m (or Infinity for vapour-tight) (got ${String(sd)}).`);
+        const shown = typeof sd === 'number' && Number.isFinite(sd) ? enteredPart(sd, 'equivalentAirLayerThickness', String(sd)) : String(sd);
+        throw new InputError(`${field}.equivalentAirLayerThickness`, [`${field}.equivalentAirLayerThickness must be greater than `, enteredPart(0, 'equivalentAirLayerThickness', '0 m'), ' (or Infinity for vapour-tight) (got ', shown, ').']);
       }
       return { index, name: names[j]!, sd };
     }
