@@ -59,7 +59,8 @@ export function iterateToSteadyState(d: Discretisation, guess: Float64Array, tol
   const workspace = newBalanceWorkspace(d);
   const solver = new CorrectionSolver(workspace, n, first, last);
   const previous = new Float64Array(n);
-  const limit = stepLimit(d);
+  // A linear problem is solved by its first correction and never limits a step.
+  const limit = d.nonlinear ? stepLimit(d) : Infinity;
 
   assembleTangent(d, temperatures, workspace);
   let imbalance = largestMagnitude(workspace.imbalance, first, last);
