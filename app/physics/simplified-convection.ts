@@ -8,6 +8,8 @@
  * L³·ΔT (natural convection) or v·L (wind) against the case's threshold.
  */
 import table from '../../data/physics/simplified-convection.json' with { type: 'json' };
+import { QUANTITIES, type QuantityName } from '../base/quantities.js';
+import { figurePart, type Sentence, type SentencePart } from '../base/quantity-sentence.js';
 import { InputError } from './errors.js';
 import { requireFinite, requireNonNegative, requirePositive } from './input-checks.js';
 
@@ -22,6 +24,15 @@ export interface SimplifiedFormulaRow {
   readonly label: string;
   /** A caution the user sees whenever this row is used. */
   readonly caution?: string;
+  /** The caution's figures, in the order they appear: their text there, SI value and quantity kind. */
+  readonly cautionFigures?: readonly CautionFigure[];
+}
+
+export interface CautionFigure {
+  readonly text: string;
+  readonly value: number;
+  readonly quantity: string;
+  readonly bare?: boolean;
 }
 
 export interface SimplifiedCaseRow {
@@ -56,7 +67,7 @@ export interface SimplifiedConvectionResult {
   /** L³·ΔT or v·L, the quantity compared with the threshold. */
   readonly regimeValue: number;
   readonly label: string;
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Sentence[];
 }
 
 function isWindCase(id: SimplifiedCase): boolean {
@@ -82,6 +93,25 @@ export function simplifiedConvection(
   const coefficient =
     f.constantOverLength / L +
     f.factor * dT ** f.temperatureDifferenceExponent * v ** f.windSpeedExponent * L ** f.lengthExponent;
-  const warnings = f.caution ? [f.caution] : [];
+  const warnings = f.caution ? [cautionSentence(f.caution, f.cautionFigures ?? [])] : [];
   return { coefficient, regime, regimeValue, label: f.label, warnings };
+}
+
+/**
+ * A row's caution as a sentence whose figures read in the project's units: each listed figure is
+ * found in the text in order and kept as its SI value and kind. A figure missing from the text, or
+ * of no known kind, is an error of the table, not of the user's input.
+ */
+function cautionSentence(caution: string, figures: readonly CautionFigure[]): Sentence {
+  if (figures.length === 0) return caution;
+  const parts: SentencePart[] = [];
+  let rest = caution;
+  for (const f of figures) {
+    const at = rest.indexOf(f.text);
+    if (at < 0 || !(f.quantity in QUANTITIES)) throw new Error(`The simplified-convection table's caution does not hold the figure "${f.text}" of kind "${f.quantity}".`);
+    parts.push(rest.slice(0, at), figurePart(f.value, f.quantity as QuantityName, f.text, f.bare ?? false));
+    rest = rest.slice(at + f.text.length);
+  }
+  parts.push(rest);
+  return parts;
 }

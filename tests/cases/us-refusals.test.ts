@@ -144,6 +144,16 @@ describe('a surface-physics warning reads in the project units', () => {
   });
 });
 
+describe("the simplified method's caution reads in the project units", () => {
+  it("a steam main in wind: the caution's coefficients, diameter and wind speed converted", () => {
+    const steam = { ...example('pipe-steam-outdoor.json'), surfaceMethod: { kind: 'simplified' } };
+    const caution = (warnings: readonly string[]) => warnings.filter((w) => w.includes('treat the result with caution'));
+    expect(caution(solveCase(steam, SI).warnings)[0]).toContain('(44.5 against 20.8 W/(m²·K) at D = 0.2 m, v = 5 m/s)');
+    // 1 Btu/(h·ft²·°F) = 5.678263 W/(m²·K), 1 in = 0.0254 m, 1 mph = 0.44704 m/s (NIST SP 811, Appendix B).
+    expect(caution(solveCase(steam, US).warnings)[0]).toContain('(7.84 against 3.66 Btu/(h·ft²·°F) at D = 7.874 in, v = 11 mph)');
+  });
+});
+
 describe('the vent opening area has its kind', () => {
   it('1000 mm²/m reads 0.472 in²/ft and comes back to 1e-12; per m² of a roof, in²/ft²', () => {
     // 1 in²/ft = 2116.667 mm²/m; 1 in²/ft² = 1e6/144 = 6944.444 mm²/m² (NIST SP 811, Appendix B).

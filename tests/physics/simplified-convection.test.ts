@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
+import { writeSentence } from '../../app/base/quantity-sentence.js';
+import { quantityText } from '../../app/base/quantity-text.js';
 import {
   InputError,
   SIMPLIFIED_CONVECTION_TABLE,
@@ -34,7 +36,15 @@ describe('simplified convection formulas (ISO 12241:2008 / VDI 2055-1 style)', (
     const pipe = simplifiedConvection({ case: 'pipe-wind', temperatureDifference: 10, length: 0.2, windSpeed: 5 });
     expect(pipe.coefficient).toBeCloseTo(44.5, 1);
     expect(pipe.warnings).toHaveLength(1);
-    expect(pipe.warnings[0]).toMatch(/treat the result with caution/);
+    expect(writeSentence(pipe.warnings[0]!)).toBe(
+      'The simplified pipe-in-wind formula for v·D above the threshold gives about twice the Churchill–Bernstein coefficient (44.5 against 20.8 W/(m²·K) at D = 0.2 m, v = 5 m/s), so treat the result with caution.',
+    );
+    // In US units its figures are converted (NIST SP 811, Appendix B: 1 Btu/(h·ft²·°F) =
+    // 5.678263 W/(m²·K), 1 in = 0.0254 m, 1 mph = 0.44704 m/s): 44.5 → 7.84, 20.8 → 3.66,
+    // 0.2 m → 7.874 in, 5 m/s → 11 mph (to the 2 figures of a wind speed).
+    expect(writeSentence(pipe.warnings[0]!, quantityText('IP'))).toBe(
+      'The simplified pipe-in-wind formula for v·D above the threshold gives about twice the Churchill–Bernstein coefficient (7.84 against 3.66 Btu/(h·ft²·°F) at D = 7.874 in, v = 11 mph), so treat the result with caution.',
+    );
     expect(simplifiedConvection({ case: 'vertical-natural', temperatureDifference: 10, length: 1 }).warnings).toEqual([]);
   });
 
