@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import type { ReportChart } from '../../app/report/report-model.js';
-import { chartConfiguration, type ChartInk } from '../../renderer/src/report-view/chart-config.js';
+import { besideTheAxis, chartConfiguration, type ChartInk } from '../../renderer/src/report-view/chart-config.js';
 import { quantityText } from '../../renderer/src/report-view/quantity-text.js';
 import { seriesStyles } from '../../renderer/src/report-view/series-styles.js';
 import { chartOf, exampleReport } from './report-fixtures.js';
@@ -63,5 +63,11 @@ describe('seriesStyles', () => {
       if (series[i]!.reference) expect(s.dash.length).toBeGreaterThan(0);
     });
     expect(styles[0]!.dash).toEqual([]);
+  });
+
+  it('sets a long y-axis title on two lines, the unit under the words, and keeps a short one whole', () => {
+    expect(besideTheAxis('stored condensate (kg/m²)')).toEqual(['stored condensate', '(kg/m²)']);
+    expect(besideTheAxis('temperature (°C)')).toBe('temperature (°C)');
+    expect(besideTheAxis('a title with no unit at all, long')).toBe('a title with no unit at all, long');
   });
 });

@@ -155,6 +155,14 @@ const SERIES_LABELS: Record<(typeof PIPE_SIZE_SERIES)[number], string> = {
   'plastic-metric': 'Plastic pipe, metric outside diameter',
 };
 
+/** A size as the trade names it: "DN100", "NPS 6", "15 mm" copper or plastic by outside diameter, "1/2 in" copper tube. */
+function nominalWords(size: PipeSize): string {
+  if (size.series === 'steel-iso') return /^\d/.test(size.nominal) ? `DN${size.nominal}` : size.nominal;
+  if (size.series === 'steel-asme') return `NPS ${size.nominal}`;
+  if (size.series === 'copper-astm-b88') return `${size.nominal} in`;
+  return `${size.nominal} mm`;
+}
+
 export function sizeInTable(doc: Json, context: FormContext): PipeSize | undefined {
   const series = getAt(doc, 'pipe.size.series');
   const nominal = String(getAt(doc, 'pipe.size.nominal') ?? '');
@@ -194,7 +202,7 @@ const PIPE_SIZE: readonly FormField[] = [
     type: 'choice', path: 'pipe.size.nominal', label: 'Nominal size', shown: inTable,
     options: (doc, context) => {
       const series = getAt(doc, 'pipe.size.series');
-      return context.pipeSizes.filter((s) => s.series === series).map((s) => ({ value: s.nominal, label: s.nominal }));
+      return context.pipeSizes.filter((s) => s.series === series).map((s) => ({ value: s.nominal, label: nominalWords(s) }));
     },
     read: (doc) => {
       const nominal = String(getAt(doc, 'pipe.size.nominal') ?? '');

@@ -74,7 +74,7 @@ export function chartConfiguration(chart: ReportChart, ink: ChartInk, text: Quan
         x: categories
           ? { type: 'category', title: title(chart.x.label, undefined), ...common }
           : { type: 'linear', title: title(chart.x.label, chart.x.quantity), ...common },
-        y: { type: 'linear', title: title(chart.y.label, chart.y.quantity), ...common },
+        y: { type: 'linear', title: { ...title(chart.y.label, chart.y.quantity), text: besideTheAxis(text.labelWithUnit(chart.y.label, chart.y.quantity)) }, ...common },
       },
       plugins: {
         legend: { position: 'bottom', labels: { color: ink.ink, font, boxWidth: 32, boxHeight: 2 } },
@@ -83,4 +83,13 @@ export function chartConfiguration(chart: ReportChart, ink: ChartInk, text: Quan
       },
     },
   };
+}
+
+/**
+ * A y-axis title runs up the plot's short side: a long one ("stored condensate (kg/m²)") is set on
+ * two lines, the unit under the words, so it is not cut off on a low chart.
+ */
+export function besideTheAxis(title: string, longest = 20): string | string[] {
+  const unitAt = title.lastIndexOf(' (');
+  return title.length > longest && unitAt > 0 ? [title.slice(0, unitAt), title.slice(unitAt + 1)] : title;
 }

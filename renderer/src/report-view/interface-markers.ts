@@ -1,9 +1,11 @@
 /**
  * A chart.js plugin of Lamina's own: thin dotted vertical lines at given x values (the interfaces
  * between layers, or a month where something starts), each numbered at the top so the caption and
- * the text alternative can name it without crowding the plot.
+ * the text alternative can name it without crowding the plot; numbers of lines close together are
+ * set apart, in order.
  */
 import type { ChartType, Plugin } from 'chart.js';
+import { spreadLabels } from './label-spread.js';
 
 export interface InterfaceMarkerOptions {
   /** x values in the units the x axis plots (category index on a category axis). */
@@ -32,15 +34,20 @@ export const interfaceMarkers: Plugin<'line', InterfaceMarkerOptions> = {
     ctx.font = options.font;
     ctx.textAlign = 'center';
     ctx.textBaseline = 'bottom';
-    options.positions.forEach((value, i) => {
-      const px = x.getPixelForValue(value);
-      if (!Number.isFinite(px) || px < chartArea.left - 0.5 || px > chartArea.right + 0.5) return;
+    const shown = options.positions
+      .map((value, i) => ({ px: x.getPixelForValue(value), number: String(i + 1) }))
+      .filter(({ px }) => Number.isFinite(px) && px >= chartArea.left - 0.5 && px <= chartArea.right + 0.5);
+    for (const { px } of shown) {
       ctx.beginPath();
       ctx.moveTo(px, chartArea.top);
       ctx.lineTo(px, chartArea.bottom);
       ctx.stroke();
-      ctx.fillText(String(i + 1), px, chartArea.top - 2);
-    });
+    }
+    // Interfaces close together (a thin layer, or a foil's s_d step) keep their numbers apart.
+    const gap = ctx.measureText(String(options.positions.length)).width + 5;
+    // The plot keeps 8 px on its right (chart-config), room for a last number pushed past the axis.
+    const at = spreadLabels(shown.map((m) => m.px), gap, chartArea.left, chartArea.right + 6);
+    shown.forEach(({ number }, i) => ctx.fillText(number, at[i]!, chartArea.top - 2));
     ctx.restore();
   },
 };
