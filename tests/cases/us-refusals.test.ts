@@ -7,7 +7,7 @@
  * Expected figures are worked by hand with the exact definitions NIST SP 811 (2008), Appendix B
  * lists: θ_F = 1.8·θ_C + 32, 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 in² = 6.4516e-4 m².
  */
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { InputError, parseCase, solveCase } from '../../app/index.js';
@@ -106,6 +106,49 @@ describe('a refusal reads in the project units', () => {
     pipe['inner'].kind = 'steam';
     expect(refusal(pipe, US).message).toBe(refusal(pipe, SI).message);
   });
+});
+
+/** SI units of kinds that have a US unit, as tests/report/us-sentences.test.ts looks for them in sentences. */
+const SI_UNITS: readonly RegExp[] = [/°C/, /\d K\b/, / W\/m/, /\d W\b/, /W\/\(m/, /m²·K\/W/, /\d mm\b/, /\d m\b/, /\bm²/, /m\/s/, /\d Pa\b/, /kg\/m/, / in m\b/];
+
+/** The path of every number in a case file ("layers[0].thickness"). */
+function numberPaths(value: unknown, at: string, out: string[] = []): string[] {
+  if (Array.isArray(value)) value.forEach((v, i) => numberPaths(v, `${at}[${i}]`, out));
+  else if (value !== null && typeof value === 'object') for (const [k, v] of Object.entries(value)) numberPaths(v, at ? `${at}.${k}` : k, out);
+  else if (typeof value === 'number') out.push(at);
+  return out;
+}
+
+function withValueAt(json: Json, at: string, value: unknown): Json {
+  const copy = structuredClone(json);
+  const keys = at.replace(/\[(\d+)\]/g, '.$1').split('.');
+  let node: Json = copy;
+  for (const key of keys.slice(0, -1)) node = node[key];
+  node[keys[keys.length - 1]!] = value;
+  return copy;
+}
+
+describe('every refusal of a pipe, flat or wall example reads without an SI unit in a US project', () => {
+  const files = readdirSync(path.join(root, 'data', 'examples')).filter((f) => /^(pipe|flat|wall)-.*\.json$/.test(f));
+  for (const file of files) {
+    it(`${file}: each number set far out of range, negative, zero or to text`, () => {
+      const json = example(file);
+      const unconverted: string[] = [];
+      // λ(θ) models are checked by the engine's own validation, which speaks SI (see the report).
+      for (const at of numberPaths(json, '').filter((p) => !p.includes('.conductivity'))) {
+        for (const bad of [1e12, -1e12, 0, 'x']) {
+          try {
+            solveCase(withValueAt(json, at, bad), US);
+          } catch (error) {
+            expect(error).toBeInstanceOf(InputError);
+            const message = (error as InputError).message;
+            if (SI_UNITS.some((unit) => unit.test(message))) unconverted.push(message);
+          }
+        }
+      }
+      expect(unconverted).toEqual([]);
+    });
+  }
 });
 
 describe('a surface-physics warning reads in the project units', () => {
