@@ -29,11 +29,15 @@ export function engineFigures(services: LaminaServices, caseId: number, system: 
  * Types `text` into the box `selector` inside the page (one input event, as a keystroke gives) and
  * waits for the key figures to change: ms from the keystroke to the new figures. Refuses (the test
  * fails) when the figures have not changed within `timeoutMs`, so every measured edit moved them.
+ * Each keystroke starts on a settled page, as a person's next keystroke does (typing leaves 100 ms
+ * or more between keys): the charts of the previous edit, drawn two frames after its figures
+ * (ReportChart), are drawn before the clock starts.
  */
 export function keystrokeToFigures(page: Page, selector: string, text: string, timeoutMs = 5000): Promise<number> {
   return page.evaluate(
-    ([sel, value, timeout]) =>
-      new Promise<number>((resolve, reject) => {
+    async ([sel, value, timeout]) => {
+      await new Promise<void>((settled) => requestAnimationFrame(() => requestAnimationFrame(() => requestAnimationFrame(() => setTimeout(settled)))));
+      return new Promise<number>((resolve, reject) => {
         const box = document.querySelector<HTMLInputElement>(sel as string)!;
         const figures = document.querySelector('.case-editor .key-figures')!;
         const before = figures.textContent;
@@ -52,7 +56,8 @@ export function keystrokeToFigures(page: Page, selector: string, text: string, t
         observer.observe(figures, { subtree: true, characterData: true, childList: true });
         box.value = value as string;
         box.dispatchEvent(new Event('input', { bubbles: true }));
-      }),
+      });
+    },
     [selector, text, timeoutMs] as const,
   );
 }
