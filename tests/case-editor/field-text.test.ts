@@ -10,6 +10,7 @@ describe('field text', () => {
     expect(boxText(0.0036, 'thickness', 'SI')).toBe('3.6');
     expect(boxText(150, 'temperature', 'IP')).toBe('302'); // NIST SP 811: 1.8·150 + 32
     expect(boxText(0.0508, 'thickness', 'IP')).toBe('2'); // NIST SP 811: 1 in = 0.0254 m exactly
+    expect(boxText(0.05, 'thickness', 'IP')).toBe('1.9685'); // NIST SP 811: 0.05 / 0.0254 = 1.968503…, six significant digits
     expect(boxText(0.6, 'relativeHumidity', 'SI')).toBe('60');
     expect(boxText(-5, 'temperature', 'SI')).toBe('-5');
   });

@@ -7,8 +7,13 @@ import type { QuantityName } from '../../../app/base/quantities.js';
 import type { NumberRange } from '../../../app/base/number-range.js';
 import { fromDisplay, toDisplay, unitLabel, type UnitSystem } from '../../../app/base/unit-systems.js';
 
-/** Digits a box shows: enough to round-trip any typed value, few enough to hide binary noise (0.0036 m -> "3.6" mm). */
-const BOX_DIGITS = 12;
+/**
+ * Digits a box shows: six, as a hint does, so that a converted value reads as a person would write
+ * it (50 mm -> "1.9685" in, not "1.96850393701"), and binary noise never shows (0.0036 m -> "3.6" mm).
+ * Nothing is lost by it: an untouched or retyped box keeps every stored digit (storedValueFor), and
+ * a typed value is stored as typed, converted.
+ */
+const BOX_DIGITS = 6;
 
 export function boxText(stored: number, quantity: QuantityName, system: UnitSystem): string {
   const shown = Number(toDisplay(stored, quantity, system).toPrecision(BOX_DIGITS));
