@@ -20,11 +20,17 @@ export function exactLayerProfile(
   count: number,
 ): [number, number][] {
   const total = meanConductivityBetween(model, t1, t2) * (t2 - t1);
-  const share = (x: number) => (geometry === 'planar' ? (x - x1) / (x2 - x1) : Math.log(x / x1) / Math.log(x2 / x1));
+  const logRatio = Math.log(x2 / x1);
   const points: [number, number][] = [];
   for (let i = 0; i <= count; i++) {
     const x = geometry === 'planar' ? x1 + ((x2 - x1) * i) / count : x1 * Math.pow(x2 / x1, i / count);
-    points.push([x, i === 0 ? t1 : i === count ? t2 : temperatureAtShare(model, t1, t2, total, share(x))]);
+    if (i === 0 || i === count) {
+      points.push([x, i === 0 ? t1 : t2]);
+      continue;
+    }
+    // The share of the potential reached at x: linear in x (plane) or in ln r (cylinder).
+    const share = geometry === 'planar' ? (x - x1) / (x2 - x1) : Math.log(x / x1) / logRatio;
+    points.push([x, temperatureAtShare(model, t1, t2, total, share)]);
   }
   return points;
 }

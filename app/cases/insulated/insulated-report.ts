@@ -107,12 +107,13 @@ export function temperaturesSection(result: InsulatedResult, geometry: Insulated
       row(`outer surface of the ${layerLabel(last, layers)}`, last.outerPosition, last.outerTemperature),
     ],
   };
-  const points = layers
-    .flatMap((l, i) => {
-      const inside = exactLayerProfile(geometry.profile.kind, geometry.profile.conductivities[i]!, l.innerPosition, l.outerPosition, l.innerTemperature, l.outerTemperature, PROFILE_POINTS_PER_LAYER);
-      return i === 0 ? inside : inside.slice(1);
-    })
-    .map(([x, t]) => [geometry.shownPosition(x), t] as const);
+  // Each layer's profile, its first point left out after the first layer (the interface is the
+  // previous layer's last); a plain loop, as this runs for every chart point of every solve.
+  const points: (readonly [number, number])[] = [];
+  layers.forEach((l, i) => {
+    const inside = exactLayerProfile(geometry.profile.kind, geometry.profile.conductivities[i]!, l.innerPosition, l.outerPosition, l.innerTemperature, l.outerTemperature, PROFILE_POINTS_PER_LAYER);
+    for (let k = i === 0 ? 0 : 1; k < inside.length; k++) points.push([geometry.shownPosition(inside[k]![0]), inside[k]![1]]);
+  });
   const ends = [points[0]![0], points[points.length - 1]![0]];
   return {
     id: 'temperatures',
