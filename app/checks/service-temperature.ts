@@ -63,10 +63,14 @@ export const SERVICE_TEMPERATURE_CAUTION =
 
 /** `text` writes the reason's figures in the project's units. */
 export function serviceTemperatureCheck(layers: readonly LayerTemperatureSpan[], text: QuantityText = SI_TEXT): ServiceTemperatureResult {
-  const base = { check: 'service-temperature' as const, title: 'Service temperature', caution: SERVICE_TEMPERATURE_CAUTION };
+  // The common fields written out in each result, not spread from one object: in Node 20 a
+  // spread followed by more fields is a slow path (app/cases/with-fields.ts).
+  const check = 'service-temperature' as const;
+  const title = 'Service temperature';
+  const caution = SERVICE_TEMPERATURE_CAUTION;
   const limited = layers.filter((l) => l.minServiceTemperature !== null || l.maxServiceTemperature !== null);
   if (limited.length === 0) {
-    return { ...base, verdict: 'not-applicable', reason: 'No layer material gives a service temperature range.', layersOutside: [], governingLimit: null };
+    return { check, title, caution, verdict: 'not-applicable', reason: 'No layer material gives a service temperature range.', layersOutside: [], governingLimit: null };
   }
   const judged = limited.map(judgeLayer);
   const governing = judged.reduce((a, b) => (b.margin < a.margin ? b : a));
@@ -88,7 +92,9 @@ export function serviceTemperatureCheck(layers: readonly LayerTemperatureSpan[],
       ? `Outside the service range: ${failing.map((f) => describeOutside(f.judged, f.layer, text)).join('; ')}.${unlimitedNote}`
       : `Every layer with a service range stays within it. Nearest to its limit: ${describeWithin(governing, limited[judged.indexOf(governing)]!, text)}.${unlimitedNote}`;
   return {
-    ...base,
+    check,
+    title,
+    caution,
     verdict: outside.length > 0 ? 'fail' : 'pass',
     margin: {
       value: governing.margin,
@@ -122,29 +128,32 @@ function judgeLayer(layer: LayerTemperatureSpan): ServiceLimitJudged {
 function rangeText(layer: LayerTemperatureSpan, text: QuantityText): string {
   const min = layer.minServiceTemperature;
   const max = layer.maxServiceTemperature;
-  const { limitText } = phrases(text);
-  if (min !== null && max !== null) return `${text.givenNumber(min, 'temperature')} to ${limitText(max)}`;
-  return min !== null ? `from ${limitText(min)}; no upper limit given` : `up to ${limitText(max!)}; no lower limit given`;
+  if (min !== null && max !== null) return `${text.givenNumber(min, 'temperature')} to ${limitText(text, max)}`;
+  return min !== null ? `from ${limitText(text, min)}; no upper limit given` : `up to ${limitText(text, max!)}; no lower limit given`;
 }
 
 function describeOutside(j: ServiceLimitJudged, layer: LayerTemperatureSpan, text: QuantityText): string {
-  const { celsius, kelvin, limitText } = phrases(text);
-  const reaches = j.side === 'upper' ? `reaches ${celsius(j.temperature)}, ${kelvin(-j.margin)} above` : `falls to ${celsius(j.temperature)}, ${kelvin(-j.margin)} below`;
-  return `${j.layer} ${reaches} its ${j.side} limit of ${limitText(j.limit)} (service range ${rangeText(layer, text)})`;
+  const reaches = j.side === 'upper' ? `reaches ${celsius(text, j.temperature)}, ${kelvin(text, -j.margin)} above` : `falls to ${celsius(text, j.temperature)}, ${kelvin(text, -j.margin)} below`;
+  return `${j.layer} ${reaches} its ${j.side} limit of ${limitText(text, j.limit)} (service range ${rangeText(layer, text)})`;
 }
 
 function describeWithin(j: ServiceLimitJudged, layer: LayerTemperatureSpan, text: QuantityText): string {
-  const { celsius, kelvin, limitText } = phrases(text);
   const face = j.side === 'upper' ? 'hottest' : 'coldest';
   const side = j.side === 'upper' ? 'below' : 'above';
-  return `${j.layer}, whose ${face} face at ${celsius(j.temperature)} is ${kelvin(j.margin)} ${side} its ${j.side} limit of ${limitText(j.limit)} (service range ${rangeText(layer, text)})`;
+  return `${j.layer}, whose ${face} face at ${celsius(text, j.temperature)} is ${kelvin(text, j.margin)} ${side} its ${j.side} limit of ${limitText(text, j.limit)} (service range ${rangeText(layer, text)})`;
 }
 
-/** A face temperature, a distance to a limit (a temperature difference) and a limit as given. */
-function phrases(text: QuantityText) {
-  return {
-    celsius: (t: number) => text.figure(t, 'temperature'),
-    kelvin: (dt: number) => text.figure(dt, 'temperatureDifference'),
-    limitText: (t: number) => text.given(t, 'temperature'),
-  };
+/** A face temperature. */
+function celsius(text: QuantityText, t: number): string {
+  return text.figure(t, 'temperature');
+}
+
+/** A distance to a limit (a temperature difference). */
+function kelvin(text: QuantityText, dt: number): string {
+  return text.figure(dt, 'temperatureDifference');
+}
+
+/** A limit as given. */
+function limitText(text: QuantityText, t: number): string {
+  return text.given(t, 'temperature');
 }

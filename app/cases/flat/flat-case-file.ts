@@ -15,6 +15,7 @@
  */
 import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
 import { rejectUnknownKeys, requireObject, type JsonObject } from '../case-fields.js';
+import { withFields } from '../with-fields.js';
 import { caseEnvelope, caseLayers, caseMaterialLayer, withoutEnvelope, type MaterialResolver } from '../pipe/pipe-case-file.js';
 
 export const FLAT_CASE_SCHEMA_VERSION = 1;
@@ -41,7 +42,7 @@ const FLAT_TOP_KEYS = [
 export function parseFlatCaseFile(json: unknown, resolveMaterial: MaterialResolver): FlatSurfaceInput {
   const file = caseEnvelope(json, 'flat', FLAT_CASE_SCHEMA_VERSION, FLAT_TOP_KEYS);
   rejectUnknownKeys(requireObject(file['surface'], 'surface'), ['kind', 'height', 'facing', 'characteristicLength'], 'surface');
-  const input: JsonObject = { ...file, layers: caseLayers(file['layers'], resolveMaterial) };
+  const input: JsonObject = withFields(file, { layers: caseLayers(file['layers'], resolveMaterial) });
   if (file['wall'] !== undefined) input['wall'] = caseMaterialLayer(file['wall'], 'wall', resolveMaterial);
   if (file['jacket'] !== undefined) input['jacket'] = caseMaterialLayer(file['jacket'], 'jacket', resolveMaterial, ['emissivity']);
   const fields = withoutEnvelope(input);

@@ -10,6 +10,7 @@ import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity 
 import { insulatedStack, reportedStackSolution, solveStack, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
 import { validateFlatSurfaceInput, type FlatSurfaceInput } from './flat-surface-input.js';
 import { DEFAULT_SURFACE_METHOD } from '../pipe/pipe-input.js';
+import { withFields } from '../with-fields.js';
 
 export interface FlatSurfaceResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
   /** W/m² of surface; positive = heat lost. */
@@ -65,13 +66,12 @@ export function calculateValidatedFlatSurface(input: FlatSurfaceInput, text: Qua
   const heatLoss = heatOut * input.area;
   // Σ d/λ_eff over the layers, from the engine's per-layer resistances where they are defined.
   const layerResistance = solution.layers.reduce((sum, l) => sum + (l.thermalResistance ?? l.thickness / (l.effectiveConductivity ?? l.conductivityAtMeanTemperature)), 0);
-  return {
-    ...solution,
+  return withFields(solution, {
     heatFlowDensity: heatOut,
     heatLoss,
     annualEnergy: (heatLoss * input.operatingHours) / 1000,
     layerResistance,
     emissivity,
     assumptions,
-  };
+  });
 }

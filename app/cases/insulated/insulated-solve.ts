@@ -18,6 +18,7 @@ import { serviceTemperatureCheck, type ServiceTemperatureResult } from '../../ch
 import { surfaceCondensationCheck, type SurfaceCondensationResult } from '../../checks/surface-condensation.js';
 import { conductivityUseWarnings } from '../../checks/plausibility-warnings.js';
 import { toEngineLayers, type MaterialLayer } from './layer-build.js';
+import { withFields } from '../with-fields.js';
 import type { AmbientConditions, InnerCondition } from './insulated-inputs.js';
 
 export type LayerRole = 'pipe-wall' | 'wall' | 'insulation' | 'jacket';
@@ -151,7 +152,7 @@ function innerFace(inner: InnerCondition): FaceCondition {
 /** `text` writes the figures of the checks' reasons and of the warnings in the project's units. */
 export function solveStack(problem: StackProblem, text: QuantityText): StackSolution {
   const solution = solveStackOnly(problem, text);
-  return { ...solution, ...surfaceChecks(problem, solution, text) };
+  return withFields(solution, surfaceChecks(problem, solution, text));
 }
 
 /** The engine solve of the stack and what is read back from it, before any check. */
@@ -159,7 +160,7 @@ function solveStackOnly(problem: StackProblem, text: QuantityText): Omit<StackSo
   const { stack, exchange, ambient } = problem;
   const engine = solveSteady({
     geometry: problem.geometry,
-    layers: toEngineLayers(stack).map((layer, i) => ({ ...layer, name: stack[i]!.name })),
+    layers: toEngineLayers(stack).map((layer, i) => withFields(layer, { name: stack[i]!.name })),
     inner: innerFace(problem.inner),
     outer: { kind: 'film', coefficient: exchange, ambient: ambient.airTemperature },
   });

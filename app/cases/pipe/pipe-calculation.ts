@@ -18,6 +18,7 @@ import {
 } from '../insulated/insulated-inputs.js';
 import { insulatedStack, reportedStackSolution, solveStack, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
 import { DEFAULT_SURFACE_METHOD, validatePipeInput, verticalPipeHeight, type PipeInput } from './pipe-input.js';
+import { withFields } from '../with-fields.js';
 
 export interface PipeResult extends Omit<StackSolution, 'engine' | 'heatOut'> {
   /** W/m; positive = heat lost by the pipe. */
@@ -93,8 +94,7 @@ export function calculateValidatedPipe(input: PipeInput, text: QuantityText): Pi
   const surfaceAreaPerMetre = Math.PI * outerDiameter;
   const warnings = [...geometryPlausibilityWarnings(innerRadius, text), ...solution.warnings];
   const heatLoss = heatOut * input.length;
-  return {
-    ...solution,
+  return withFields(solution, {
     warnings,
     heatLossPerMetre: heatOut,
     heatLoss,
@@ -105,5 +105,5 @@ export function calculateValidatedPipe(input: PipeInput, text: QuantityText): Pi
     emissivity,
     height,
     assumptions,
-  };
+  });
 }

@@ -18,6 +18,7 @@
 import { InputError } from '../../fe/errors.js';
 import { resolveCaseMaterial, type MaterialResolver } from '../case-material.js';
 import { validatePipeInput, type PipeInput } from './pipe-input.js';
+import { withFields } from '../with-fields.js';
 import { rejectUnknownKeys, requireObject, requireSchemaVersion, requireString, shown, type JsonObject } from '../case-fields.js';
 
 export type { MaterialResolver } from '../case-material.js';
@@ -29,7 +30,7 @@ export function caseMaterialLayer(value: unknown, field: string, resolve: Materi
   const entry = requireObject(value, field);
   rejectUnknownKeys(entry, ['material', 'materialId', 'thickness', ...extraKeys], field);
   const { materialId: _id, ...rest } = entry;
-  return { ...rest, material: resolveCaseMaterial(entry, field, resolve, 'other') };
+  return withFields(rest, { material: resolveCaseMaterial(entry, field, resolve, 'other') });
 }
 
 export function caseLayers(value: unknown, resolve: MaterialResolver): JsonObject[] {
@@ -80,11 +81,10 @@ export function parsePipeCaseFile(json: unknown, resolveMaterial: MaterialResolv
   const pipe = requireObject(file['pipe'], 'pipe');
   rejectUnknownKeys(pipe, ['outerDiameter', 'wallThickness', 'material', 'materialId'], 'pipe');
   const { materialId: _id, ...pipeRest } = pipe;
-  const input: JsonObject = {
-    ...file,
-    pipe: { ...pipeRest, material: resolveCaseMaterial(pipe, 'pipe', resolveMaterial, 'pipe') },
+  const input: JsonObject = withFields(file, {
+    pipe: withFields(pipeRest, { material: resolveCaseMaterial(pipe, 'pipe', resolveMaterial, 'pipe') }),
     layers: caseLayers(file['layers'], resolveMaterial),
-  };
+  });
   if (file['jacket'] !== undefined) input['jacket'] = caseMaterialLayer(file['jacket'], 'jacket', resolveMaterial, ['emissivity']);
   const fields = withoutEnvelope(input);
   validatePipeInput(fields);

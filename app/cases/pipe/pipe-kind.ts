@@ -6,6 +6,7 @@
 import type { JsonObject } from '../../base/field-checks.js';
 import { quantityText } from '../../base/quantity-text.js';
 import type { CaseKind } from '../case-kind.js';
+import { withFields } from '../with-fields.js';
 import { requireInsulatedConductivities } from '../insulated/insulated-conductivity-span.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity } from '../insulated/insulated-inputs.js';
 import { insulatedSolvedParts } from '../insulated/insulated-solved-parts.js';
@@ -29,7 +30,7 @@ export const pipeKind: CaseKind<PipeCase, PipeResult> = {
     requireInsulatedConductivities(complete as JsonObject, input, { entry: 'pipe', material: input.pipe.material });
     // Radiation needs the outer surface's emissivity: refuse a case without it now, not at the solve.
     if (methodNeedsEmissivity(input.surfaceMethod ?? DEFAULT_SURFACE_METHOD)) outerSurfaceEmissivity(input.layers, input.jacket);
-    return { title: input.title ?? 'Pipe', input: { ...input, pipeSize: sized.size }, assumptions };
+    return { title: input.title ?? 'Pipe', input: withFields(input, { pipeSize: sized.size }), assumptions };
   },
   solve({ input, assumptions }, text) {
     return insulatedSolvedParts(calculateValidatedPipe(input, text), assumptions);

@@ -6,6 +6,7 @@
  */
 import { InputError } from '../../base/input-error.js';
 import { shownValue } from '../../base/shown-value.js';
+import { withFields } from '../with-fields.js';
 
 export const PIPE_SIZE_SERIES = ['steel-iso', 'steel-asme', 'copper-en1057', 'copper-astm-b88', 'plastic-metric'] as const;
 export type PipeSizeSeries = (typeof PIPE_SIZE_SERIES)[number];
@@ -65,5 +66,5 @@ export function resolvePipeSizeInCase(json: unknown, catalogue: readonly PipeSiz
   if (wallThickness === null) {
     throw new InputError('pipe.wallThickness', `pipe.wallThickness is needed: the ${size.series} table gives no wall for ${size.nominal}; give it in m.`);
   }
-  return { json: { ...file, pipe: { ...rest, outerDiameter: size.outerDiameter, wallThickness } }, size };
+  return { json: withFields(file, { pipe: withFields(rest, { outerDiameter: size.outerDiameter, wallThickness }) }), size };
 }
