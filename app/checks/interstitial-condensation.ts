@@ -133,5 +133,15 @@ export function checkInterstitialAtDesignCondition(
         : `Condensation at the design condition at the ${condensing.map((p) => `${p.name} (${perDay(p.condensationRate)})`).join(', ')}; run the monthly procedure to see whether it dries out within the year.`,
     caution: MOISTURE_CAUTION,
   };
-  return { ...state, check };
+  // Field by field: a spread followed by a field is a slow path in V8 (app/cases/with-fields.ts).
+  return {
+    insideVapourPressure: state.insideVapourPressure,
+    outsideVapourPressure: state.outsideVapourPressure,
+    layers: state.layers,
+    points: state.points,
+    totalCondensationRate: state.totalCondensationRate,
+    saturationReserve: state.saturationReserve,
+    surfaceCondensation: state.surfaceCondensation,
+    check,
+  };
 }

@@ -20,6 +20,7 @@ import {
 } from '../insulated/insulated-report.js';
 import type { FlatSurfaceResult } from './flat-surface-calculation.js';
 import type { FlatSurfaceInput } from './flat-surface-input.js';
+import { withFields } from '../with-fields.js';
 
 export interface FlatReportExtras {
   /** The case's title; default the input's. */
@@ -66,7 +67,7 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
       temperaturesSection(result, { positionLabel: 'distance from the inner surface', shownPosition: (x) => x, profile: { kind: 'planar', conductivities: materials.map((m) => m.conductivity) } }),
       surfaceSection(result),
     ],
-    energyBalance: { ...result.energyBalance, quantity: 'heatFlux' },
+    energyBalance: withFields(result.energyBalance, { quantity: 'heatFlux' as const }),
     assumptions: insulatedAssumptions(extras.assumptions ?? result.assumptions),
     warnings: result.warnings.map(asSentence),
     sources: insulatedSources(input, materials, convectionOf(input), text),

@@ -20,6 +20,7 @@ import {
 import type { PipeResult } from './pipe-calculation.js';
 import type { PipeInput } from './pipe-input.js';
 import type { PipeSize } from './pipe-sizes.js';
+import { withFields } from '../with-fields.js';
 
 export interface PipeReportExtras {
   /** The case's title; default the input's. */
@@ -82,7 +83,7 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
         ],
       },
     ],
-    energyBalance: { ...result.energyBalance, quantity: 'heatFlowPerLength' },
+    energyBalance: withFields(result.energyBalance, { quantity: 'heatFlowPerLength' as const }),
     assumptions: insulatedAssumptions(extras.assumptions ?? result.assumptions),
     warnings: result.warnings.map(asSentence),
     sources: [

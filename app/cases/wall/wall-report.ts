@@ -17,6 +17,7 @@ import type { WallAnalysis } from './wall-analysis.js';
 import { isAirLayer, type WallInput } from './wall-input.js';
 import { ventOpeningQuantity } from './vent-opening.js';
 import { conditionPhrase, insideHumidityWords, interstitialSection, monthlySection, mouldSection, wallVerdicts } from './wall-moisture-report.js';
+import { withFields } from '../with-fields.js';
 
 const LAYER_TABLE = 'Layers, inside to outside, with the surface resistances';
 
@@ -38,7 +39,7 @@ export function wallReport(input: WallInput, analysis: WallAnalysis, text: Quant
     ],
     verdicts,
     sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis, text), mouldSection(analysis, text), interstitialSection(analysis), ...(monthly ? [monthly] : [])],
-    energyBalance: { ...w.energyBalance, quantity: 'heatFlux' },
+    energyBalance: withFields(w.energyBalance, { quantity: 'heatFlux' as const }),
     assumptions: assumptionsOf(input, analysis),
     warnings: analysis.warnings.map(asSentence),
     sources: sourcesOf(input, analysis, text),
