@@ -66,9 +66,10 @@ function rangeText(range: NumberRange, quantity: QuantityName, text: QuantityTex
   return `${low} and ${high}${unit ? ` ${unit}` : ''}`;
 }
 
-function partText(part: SentencePart, text: QuantityText): string {
+/** A part's text; `keepSi` gives a figure the SI sentence's own text (the command line's metres, fractions). */
+function partText(part: SentencePart, text: QuantityText, keepSi: boolean): string {
   if (typeof part === 'string') return part;
-  if (text.system === 'SI') return part.si;
+  if (keepSi) return part.si;
   switch (part.kind) {
     case 'figure':
       return part.bare ? text.number(part.value, part.quantity) : text.figure(part.value, part.quantity);
@@ -83,7 +84,16 @@ function partText(part: SentencePart, text: QuantityText): string {
 
 /** The sentence in the units of `text` (SI unless told). */
 export function writeSentence(sentence: Sentence, text: QuantityText = SI_TEXT): string {
-  return typeof sentence === 'string' ? sentence : sentence.map((part) => partText(part, text)).join('');
+  return typeof sentence === 'string' ? sentence : sentence.map((part) => partText(part, text, text.system === 'SI')).join('');
+}
+
+/**
+ * The sentence as a form shows it beside its boxes: every figure in the units the boxes show,
+ * the display units of `text`'s system, in SI too ("at most 2000 mm" beside a millimetre box,
+ * where the command line's SI sentence says "2 m"; a humidity in %, not as a fraction).
+ */
+export function writeShownSentence(sentence: Sentence, text: QuantityText): string {
+  return typeof sentence === 'string' ? sentence : sentence.map((part) => partText(part, text, false)).join('');
 }
 
 /** Sentences without repeats, compared as their SI text (two correlations may flag the same air properties). */

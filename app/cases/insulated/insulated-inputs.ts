@@ -7,7 +7,7 @@
 import { requireNumberIn } from '../../base/field-checks.js';
 import type { NumberRange } from '../../base/number-range.js';
 import type { QuantityName } from '../../base/quantities.js';
-import { enteredPart, type SentencePart } from '../../base/quantity-sentence.js';
+import { enteredPart, rangePart, type SentencePart } from '../../base/quantity-sentence.js';
 import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
 import { validateConductivity } from '../../fe/validate.js';
@@ -102,7 +102,9 @@ export function requireObjectField(field: string, value: unknown, what: string):
 export function validateRelativeHumidity(field: string, value: unknown): number {
   const rh = requireFinite(field, value, 'fraction');
   if (!(rh > 0 && rh <= 1)) {
-    throw new InputError(field, `${field} must be a fraction above 0 and at most 1 (above 0 up to 100 %) (got ${rh}).`);
+    // Parts, so a form showing humidity in per cent says "more than 0 and at most 100 % (got 150 %)".
+    const allowed = rangePart({ min: 0, minExclusive: true, max: 1, unit: '' }, 'relativeHumidity', 'a fraction above 0 and at most 1 (above 0 up to 100 %)');
+    throw new InputError(field, [`${field} must be `, allowed, ' (got ', enteredPart(rh, 'relativeHumidity', String(rh)), ').']);
   }
   return rh;
 }

@@ -5,7 +5,7 @@
 import classTable from '../../../data/physics/humidity-classes.json' with { type: 'json' };
 import { requireFinite, requireNumberIn, requirePositive } from '../../base/field-checks.js';
 import type { QuantityName } from '../../base/quantities.js';
-import { enteredPart } from '../../base/quantity-sentence.js';
+import { enteredPart, rangePart } from '../../base/quantity-sentence.js';
 import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
 import { airLayerVentilation, HEAT_FLOW_DIRECTIONS } from '../../physics/index.js';
@@ -26,7 +26,9 @@ function finite(field: string, value: unknown, unit: string, quantity?: Quantity
 export function requireRelativeHumidity(field: string, value: unknown): number {
   const v = finite(field, value, 'fraction 0..1');
   if (v < 0 || v > 1) {
-    throw new InputError(field, `${field} must be a fraction from 0 to 1 (0 to 100 %) (got ${v}).`);
+    // Parts, so a form showing humidity in per cent says "at least 0 and at most 100 % (got 150 %)".
+    const allowed = rangePart({ min: 0, max: 1, unit: '' }, 'relativeHumidity', 'a fraction from 0 to 1 (0 to 100 %)');
+    throw new InputError(field, [`${field} must be `, allowed, ' (got ', enteredPart(v, 'relativeHumidity', String(v)), ').']);
   }
   return v;
 }

@@ -16,6 +16,7 @@ import { shownFields, type CaseKindName, type NumberField } from './case-form-fi
 import { buildUpPaths, normaliseMaterialPath, referencedMaterialIds } from './build-up.js';
 import { EditHistory } from './edit-history.js';
 import { storedValueFor } from './field-text.js';
+import { refusalText } from './refusal-text.js';
 import { SolveClient, type TimedAnswer } from './solve-client.js';
 
 /** Pause after the last edit before saving (as the project details wait). */
@@ -199,7 +200,8 @@ export class CaseEditorState {
     this.roundTripMs = roundTripMs;
     if (this.sentDoc !== this.doc) return;
     if (!answer.ok) {
-      this.refusal = { field: answer.field ?? null, message: answer.message };
+      const message = answer.sentence === undefined ? answer.message : refusalText(answer.field, answer.sentence, this.unitSystem, this.kind, this.doc);
+      this.refusal = { field: answer.field ?? null, message };
       return;
     }
     this.refusal = null;

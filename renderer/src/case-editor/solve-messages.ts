@@ -1,6 +1,7 @@
 /** What the page and the solving worker say to each other (structured-clone data only). */
 import type { PipeSize } from '../../../app/index.js';
 import type { UnitSystem } from '../../../app/base/unit-systems.js';
+import type { Sentence } from '../../../app/base/quantity-sentence.js';
 import type { CaseReport } from '../../../app/report/report-model.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 
@@ -30,6 +31,9 @@ export type SolveAnswer =
       readonly ok: false;
       /** The case path the engine names, when it names one. */
       readonly field?: string;
+      /** The sentence as the command line would print it (SI; US units in a US project). */
       readonly message: string;
+      /** A refusal of the input: its sentence as parts, for the page to write in the boxes' units and words. */
+      readonly sentence?: Sentence;
       readonly solveMs: number;
     };

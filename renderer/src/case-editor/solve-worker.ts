@@ -1,7 +1,8 @@
 /**
  * The case editor's solver, off the page's main thread so typing never waits for a solve: it runs
  * `solveCase` on each case the page sends, with the library materials the case refers to, the
- * pipe-size tables and the project's units, and answers with the report model or the engine's one-sentence refusal.
+ * pipe-size tables and the project's units, and answers with the report model or the engine's one-sentence refusal
+ * (kept as parts, so the page writes it in the units and words of the box beside it: refusal-text).
  */
 import { InputError, solveCase, type PipeSize } from '../../../app/index.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
@@ -18,7 +19,7 @@ function answer(request: SolveRequest): SolveAnswer {
     return { id: request.id, ok: true, report: solved.report, layerMeans: layerMeansOf(solved.result), solveMs: performance.now() - started };
   } catch (error) {
     const solveMs = performance.now() - started;
-    if (error instanceof InputError) return { id: request.id, ok: false, field: error.field, message: error.message, solveMs };
+    if (error instanceof InputError) return { id: request.id, ok: false, field: error.field, message: error.message, sentence: error.sentence ?? error.message, solveMs };
     // A solver failure (no convergence, a singular problem) is said in its own sentence, never thrown at the page.
     return { id: request.id, ok: false, message: error instanceof Error ? error.message : String(error), solveMs };
   }
