@@ -92,7 +92,7 @@ function verdictFor(
   }
   const margin = factor - minimum;
   const climate = (t: number) => text.keepingSi(`${t} °C`, t, 'temperature');
-  const where = `${condition.label} (θ_i ${climate(condition.inside.temperature)}, θ_e ${climate(condition.outside.temperature)}, p_i ${text.figure(condition.insideVapourPressure, 'vapourPressure')} from ${source})`;
+  const where = `${conditionPhrase(condition.label)} (θ_i ${climate(condition.inside.temperature)}, θ_e ${climate(condition.outside.temperature)}, p_i ${text.figure(condition.insideVapourPressure, 'vapourPressure')} from ${source})`;
   const pass = factor > minimum;
   const impossible = minimum >= 1 ? ' The critical factor is 1 or more: no wall can avoid it at this inside humidity; reduce the humidity (ventilation).' : '';
   return {
@@ -101,10 +101,15 @@ function verdictFor(
     verdict: pass ? 'pass' : 'fail',
     margin: { value: margin, unit: 'temperature factor (dimensionless)' },
     reason: pass
-      ? `f_Rsi = ${factor.toFixed(3)} exceeds the critical f_Rsi,min = ${minimum.toFixed(3)} for ${criterion} at ${where}.`
-      : `f_Rsi = ${factor.toFixed(3)} does not exceed the critical f_Rsi,min = ${minimum.toFixed(3)} for ${criterion} at ${where}: risk expected.${impossible}`,
+      ? `f_Rsi = ${factor.toFixed(3)} exceeds the critical f_Rsi,min = ${minimum.toFixed(3)} for ${criterion} ${where}.`
+      : `f_Rsi = ${factor.toFixed(3)} does not exceed the critical f_Rsi,min = ${minimum.toFixed(3)} for ${criterion} ${where}: risk expected.${impossible}`,
     caution: MOISTURE_CAUTION,
   };
+}
+
+/** When a condition holds, as a sentence says it: "in January" (a month), or "at the design condition". */
+export function conditionPhrase(label: string): string {
+  return label === 'design condition' ? 'at the design condition' : `in ${label}`;
 }
 
 /** The conditions to judge (one design condition, or each month), with their critical factors; no solve needed. */

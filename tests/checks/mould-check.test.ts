@@ -122,6 +122,14 @@ describe('monthly mould check: the design month has the largest f_Rsi,min', () =
     const fRsi = 1 - 0.25 / (0.25 + 0.05 / 0.04 + 0.1 + 0.04);
     expect(Math.abs(r.temperatureFactor! - fRsi)).toBeLessThan(1e-9);
     expect(r.mould.verdict).toBe(fRsi > hand[designHand]! ? 'pass' : 'fail');
-    expect(r.mould.reason).toContain(`M${designHand + 1}`);
+    // The month is named as a sentence says when something holds: "in M2", not "at M2".
+    expect(r.mould.reason).toContain(`(mould) in M${designHand + 1} (θ_i 20 °C`);
+    expect(r.surfaceCondensation.reason).toContain(`(surface condensation) in M`);
+  });
+
+  it('a single design condition reads "at the design condition"', () => {
+    const r = checkMouldAtDesignCondition(poor);
+    expect(r.mould.reason).toContain('(mould) at the design condition (θ_i 20 °C, θ_e 0 °C');
+    expect(r.surfaceCondensation.reason).toContain('(surface condensation) at the design condition (θ_i');
   });
 });

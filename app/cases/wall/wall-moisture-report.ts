@@ -8,6 +8,7 @@ import humidityClasses from '../../../data/physics/humidity-classes.json' with {
 import type { QuantityText } from '../../base/quantity-text.js';
 import type { CheckResult } from '../../checks/check-result.js';
 import type { InsideHumiditySource } from '../../checks/mould-humidity-classes.js';
+import { conditionPhrase } from '../../checks/mould-check.js';
 import { marginPhrase } from '../../report/margin-phrase.js';
 import type { ReportSection, ReportTable, ReportVerdict } from '../../report/report-model.js';
 import { reportVerdict } from '../../report/report-verdicts.js';
@@ -244,7 +245,5 @@ export function monthlySection(input: WallInput, a: WallAnalysis): ReportSection
   };
 }
 
-/** "in January", or "at the design condition". */
-export function conditionPhrase(label: string): string {
-  return label === 'design condition' ? 'at the design condition' : `in ${label}`;
-}
+/** "in January", or "at the design condition": the checks' own wording, for the report's notes. */
+export { conditionPhrase };
