@@ -30,8 +30,9 @@ export function engineFigures(services: LaminaServices, caseId: number, system: 
  * waits for the key figures to change: ms from the keystroke to the new figures. Refuses (the test
  * fails) when the figures have not changed within `timeoutMs`, so every measured edit moved them.
  * Each keystroke starts on a settled page, as a person's next keystroke does (typing leaves 100 ms
- * or more between keys): the charts of the previous edit, drawn two frames after its figures
- * (ReportChart), are drawn before the clock starts.
+ * or more between keys): the sections of the previous edit (tables, drawing, charts), drawn after
+ * its figures have been painted (CaseReportView's `detailsAfterPaint`, then ReportChart a frame
+ * later), are drawn before the clock starts.
  */
 export function keystrokeToFigures(page: Page, selector: string, text: string, timeoutMs = 5000): Promise<number> {
   return page.evaluate(
@@ -59,6 +60,13 @@ export function keystrokeToFigures(page: Page, selector: string, text: string, t
       });
     },
     [selector, text, timeoutMs] as const,
+  );
+}
+
+/** The words of the report's sections and lists on screen (tables, drawings' keys, charts' tables), which follow the figures a frame later. */
+export async function shownDetails(page: Page): Promise<string> {
+  return page.locator('.case-editor .case-report').evaluate((report) =>
+    Array.from(report.querySelectorAll('[data-section], [data-list]'), (part) => part.textContent ?? '').join('\n'),
   );
 }
 

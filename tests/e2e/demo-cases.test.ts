@@ -4,7 +4,8 @@
  * - the time from a keystroke in an insulation layer's thickness box to the updated key figures,
  *   median over a dozen edits, printed and written to test-results/keystroke-to-figures.{txt,json}
  *   (reported, never asserted); each edit must move the figures, and the last figures must be the
- *   engine's for the case as stored;
+ *   engine's for the case as stored; the sections below them (drawn after the figures) follow the
+ *   first edit and, once the edits return to the stored case, read as they did on opening;
  * - at 1280×720 and 1366×800, every drop-down's chosen label fits its box and the page does not
  *   scroll sideways;
  * - screenshots of each case's editor (top, whole form, the results scrolled to the charts, and the
@@ -19,7 +20,7 @@ import { startBrowserServer, type BrowserServer } from '../../main/server/browse
 import type { LaminaServices } from '../../main/services/lamina-services.js';
 import type { ProjectCase } from '../../app/api/contract.js';
 import { resultsFolder, useBrowserSession } from './browser-session.js';
-import { clippedChoices, engineFigures, keystrokeToFigures, median, scrollsSideways, shownFigures, shownSolveTimes } from './case-editor-page.js';
+import { clippedChoices, engineFigures, keystrokeToFigures, median, scrollsSideways, shownDetails, shownFigures, shownSolveTimes } from './case-editor-page.js';
 
 const session = useBrowserSession('lamina-demo-cases-');
 let server: BrowserServer;
@@ -93,6 +94,7 @@ describe('the demo cases in the case editor', () => {
       const box = `#case-layers-${index}-thickness`;
       await openCase(page, projectCase.id);
       expect(await page.inputValue(box)).toBe(String(mm));
+      const opened = await shownDetails(page);
       const times: number[] = [];
       const solves: number[] = [];
       const roundTrips: number[] = [];
@@ -102,8 +104,10 @@ describe('the demo cases in the case editor', () => {
         const shown = await shownSolveTimes(page);
         if (shown !== null) solves.push(shown.solveMs);
         if (shown?.roundTripMs != null) roundTrips.push(shown.roundTripMs);
+        if (times.length === 1) await expect.poll(() => shownDetails(page)).not.toBe(opened);
       }
       await saved(page);
+      await expect.poll(() => shownDetails(page)).toBe(opened);
       expect(services.projects.getCase(projectCase.id).inputs).toEqual(projectCase.inputs);
       await expect.poll(() => shownFigures(page)).toEqual(engineFigures(services, projectCase.id, 'SI').figures);
       expect(solves.length).toBe(times.length);
