@@ -77,6 +77,12 @@ const httpApi: LaminaApi = {
     exportProject: call('projects:export-file'),
     importProject: call('projects:import-file'),
     addDemo: call('projects:add-demo'),
+    report: call('projects:report'),
+    saveReportPdf: call('projects:save-report-pdf'),
+  },
+  settings: {
+    letterhead: call('settings:letterhead'),
+    saveLetterhead: call('settings:save-letterhead'),
   },
   backups: {
     list: call('backups:list'),

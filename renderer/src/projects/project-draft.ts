@@ -16,7 +16,9 @@ export const PROJECT_FIELD_LABELS: Readonly<Record<ProjectField, string>> = {
   site: 'Site',
   reference: 'Reference',
   engineer: 'Engineer',
+  checker: 'Checker',
   revision: 'Revision',
+  revisionNote: 'Revision note',
   date: 'Date',
   unitSystem: 'Units',
   notes: 'Notes',
@@ -61,6 +63,8 @@ export function readProjectField(field: ProjectField, raw: string): FieldReading
       return readText(field, raw, 1, PROJECT_LIMITS.name);
     case 'revision':
       return readText(field, raw, 0, PROJECT_LIMITS.revision);
+    case 'revisionNote':
+      return readText(field, raw, 0, PROJECT_LIMITS.revisionNote);
     case 'notes':
       return readText(field, raw, 0, PROJECT_LIMITS.notes);
     case 'date': {
