@@ -113,7 +113,7 @@ describe('outer film from the surface physics', () => {
     const Ts = result.surfaceTemperature + 273.15;
     const Tr = 5 + 273.15;
     expect(result.surfaceCoefficient.radiation).toBeCloseTo(0.13 * STEFAN_BOLTZMANN * (Ts * Ts + Tr * Tr) * (Ts + Tr), 12);
-    expect(result.emissivity).toEqual({ value: 0.13, from: 'jacket.material.emissivity' });
+    expect(result.emissivity).toEqual({ value: 0.13, from: 'jacket.material.emissivity', source: "the value of the jacket's material" });
     expect(result.energyBalance.relativeResidual).toBeLessThan(1e-9);
     expect(result.iterations).toBeGreaterThan(1);
   });
@@ -122,7 +122,7 @@ describe('outer film from the surface physics', () => {
     const result = calculatePipe(hotPipe({ jacket: { material: aluminium, thickness: 0.0008, emissivity: 0 } }));
     expect(result.surfaceCoefficient.radiation).toBe(0);
     expect(result.surfaceCoefficient.total).toBe(result.surfaceCoefficient.convection);
-    expect(result.emissivity).toEqual({ value: 0, from: 'jacket.emissivity' });
+    expect(result.emissivity).toEqual({ value: 0, from: 'jacket.emissivity', source: 'as given for the jacket surface' });
   });
 
   it('a higher-emissivity jacket runs cooler and loses more heat (more radiation)', () => {
@@ -134,7 +134,7 @@ describe('outer film from the surface physics', () => {
 
   it('without a jacket the outermost insulation material gives the emissivity', () => {
     const result = calculatePipe(hotPipe({ jacket: undefined }));
-    expect(result.emissivity).toEqual({ value: 0.9, from: 'layers[0].material.emissivity' });
+    expect(result.emissivity).toEqual({ value: 0.9, from: 'layers[0].material.emissivity', source: 'the value of the material of layer 1, with no jacket over it' });
   });
 
   it('vertical pipe: the height defaults to the run length capped at 3 m, and a given height is used as is', () => {

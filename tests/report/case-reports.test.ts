@@ -50,6 +50,8 @@ function numbers(value: unknown): number[] {
 function expectSoundReport(report: CaseReport, checks: readonly CheckResult[]): string {
   expect(report.verdicts.map((v) => [v.check, v.verdict, v.title])).toEqual(checks.map((c) => [c.check, c.verdict, c.title]));
   for (const s of strings(report)) expect(s).not.toMatch(/NaN|undefined|Infinity/);
+  // A report speaks in words, never in case-file paths ("from jacket.material.emissivity").
+  for (const s of strings(report)) expect(s).not.toMatch(/\b(?:jacket|pipe|wall|ambient|inner|inside|outside|moisture|surfaceMethod|layers\[\d+\])\.[a-zA-Z]/);
   for (const n of numbers(report)) expect(Number.isFinite(n)).toBe(true);
   // JSON-serialisable plain data: a round trip changes nothing.
   expect(JSON.parse(JSON.stringify(report))).toEqual(report);
@@ -114,6 +116,8 @@ describe('pipe reports', () => {
     expect(report.verdicts[2]!.margin).toMatch(/^\d+\.\d K (below the upper|above the lower) service limit of /);
     expect(report.energyBalance.relativeResidual).toBe(result.energyBalance.relativeResidual);
     expect(text).not.toMatch(/allowed −|− to/);
+    // Where the outer surface's emissivity came from, in words.
+    expect(text).toMatch(/Emissivity of the outer surface +0\.\d\d +\((the value of the jacket's material|as given for the jacket surface|the value of the material of layer \d+, with no jacket over it)\)\n/);
     // Rings round the bore: the pipe wall's inner radius, then the pipe wall, insulation and jacket by material category.
     const drawing = expectCrossSection(report, 'build-up', result.layers, faceTemperatures(result.layers));
     expect(drawing.geometry === 'cylinder' && drawing.innerRadius).toBe(input.pipe.outerDiameter / 2 - input.pipe.wallThickness);

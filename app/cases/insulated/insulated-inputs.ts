@@ -203,8 +203,10 @@ export function methodNeedsEmissivity(method: SurfaceMethod): boolean {
 
 export interface ResolvedEmissivity {
   readonly value: number;
-  /** The input field the value came from. */
+  /** The input field the value came from (a case-file path, for the result's reader). */
   readonly from: string;
+  /** Where it came from in words, for the report ("the value of the jacket's material"). */
+  readonly source: string;
 }
 
 /**
@@ -213,9 +215,9 @@ export interface ResolvedEmissivity {
  */
 export function outerSurfaceEmissivity(layers: readonly MaterialLayer[], jacket: JacketInput | undefined): ResolvedEmissivity {
   if (jacket) {
-    if (jacket.emissivity !== undefined) return { value: jacket.emissivity, from: 'jacket.emissivity' };
+    if (jacket.emissivity !== undefined) return { value: jacket.emissivity, from: 'jacket.emissivity', source: 'as given for the jacket surface' };
     if (jacket.material.emissivity !== null && jacket.material.emissivity !== undefined) {
-      return { value: jacket.material.emissivity, from: 'jacket.material.emissivity' };
+      return { value: jacket.material.emissivity, from: 'jacket.material.emissivity', source: "the value of the jacket's material" };
     }
     throw new InputError(
       'jacket.emissivity',
@@ -231,5 +233,5 @@ export function outerSurfaceEmissivity(layers: readonly MaterialLayer[], jacket:
       `${field} is needed for the radiation from the bare insulation surface: give a value from 0 to 1, or add a jacket with an emissivity.`,
     );
   }
-  return { value: e, from: field };
+  return { value: e, from: field, source: `the value of the material of layer ${last + 1}, with no jacket over it` };
 }

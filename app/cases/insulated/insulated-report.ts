@@ -149,7 +149,7 @@ export function surfaceSection(result: InsulatedResult): ReportSection {
     { label: 'of which convection', value: c.convection, quantity: 'filmCoefficient' },
     { label: 'of which radiation', value: c.radiation, quantity: 'filmCoefficient' },
     { label: 'Combined sink temperature', value: c.sinkTemperature, quantity: 'temperature', note: 'air and surroundings weighted by the two coefficients' },
-    ...(result.emissivity ? [{ label: 'Emissivity of the outer surface', value: result.emissivity.value, quantity: 'emissivity' as const, note: `from ${result.emissivity.from}` }] : []),
+    ...(result.emissivity ? [{ label: 'Emissivity of the outer surface', value: result.emissivity.value, quantity: 'emissivity' as const, note: result.emissivity.source }] : []),
     { label: 'Dew point of the air', value: result.dewPoint, quantity: 'temperature' },
   ];
   return { id: 'surface', heading: 'Outer surface heat transfer', blocks: [{ kind: 'figures', figures }] };
