@@ -2,6 +2,7 @@
  * Projects and their cases as the API carries them. Pure declarations: main/services validates and
  * stores them. A case stores inputs only; results are recomputed by the engine, never stored.
  */
+import type { Letterhead } from '../report/project-report.js';
 import type { MaterialInput } from './material-types.js';
 
 export const UNIT_SYSTEMS = ['SI', 'IP'] as const;
@@ -15,12 +16,18 @@ export interface ProjectFields {
   readonly reference: string;
   readonly engineer: string;
   readonly revision: string;
+  /** What the revision changed or why it is issued ("Issued for comment"). */
+  readonly revisionNote: string;
+  /** Who checked the calculation. */
+  readonly checker: string;
   readonly date: string;
   readonly unitSystem: UnitSystem;
   readonly notes: string;
 }
 
-export const PROJECT_FIELDS = ['name', 'client', 'site', 'reference', 'engineer', 'revision', 'date', 'unitSystem', 'notes'] as const;
+export const PROJECT_FIELDS = [
+  'name', 'client', 'site', 'reference', 'engineer', 'checker', 'revision', 'revisionNote', 'date', 'unitSystem', 'notes',
+] as const;
 
 export interface ProjectSummary extends ProjectFields {
   readonly id: number;
@@ -68,12 +75,15 @@ export interface CaseDraft {
 /**
  * The project exchange file: the project's fields, its cases' inputs and every material those
  * inputs use. Case inputs refer to materials by `fileId`, which only means something in the file.
+ * From formatVersion 2 it also carries the letterhead the project's report prints with, so a
+ * colleague's copy prints the same; version 1 files have none (and no checker or revision note).
  */
 export interface ProjectFile {
   readonly format: 'lamina-project';
   readonly formatVersion: number;
   readonly exportedAt: string;
   readonly project: ProjectFields;
+  readonly letterhead?: Letterhead;
   readonly materials: readonly ({ readonly fileId: number } & MaterialInput)[];
   readonly cases: readonly { readonly name: string; readonly inputs: CaseInputs }[];
 }

@@ -14,6 +14,8 @@ import { PROJECT_FIELDS } from '../../app/api/project-types.js';
 import { fitConductivityCurve } from '../services/conductivity-fit.js';
 import { validateMaterialInput } from '../services/material-validation.js';
 import { projectFileFromJson, projectFileToJson } from '../services/project-file.js';
+import { projectReport } from '../services/project-report-service.js';
+import type { ProjectReport } from '../../app/report/project-report.js';
 import { PROJECT_LIMITS } from '../services/project-validation.js';
 import { NotFoundError, RefusedError } from '../services/service-errors.js';
 import { InputError, SingularProblemError } from '../../app/index.js';
@@ -33,6 +35,7 @@ export const API_CHANNELS = [
   'projects:list', 'projects:list-recycle-bin', 'projects:open', 'projects:create', 'projects:update', 'projects:rename',
   'projects:duplicate', 'projects:remove', 'projects:restore', 'projects:empty-recycle-bin', 'projects:add-case',
   'projects:update-case', 'projects:remove-case', 'projects:move-case', 'projects:export-file', 'projects:import-file', 'projects:add-demo',
+  'projects:report', 'projects:save-report-pdf', 'settings:letterhead', 'settings:save-letterhead',
   'backups:list', 'backups:create', 'backups:restore',
 ] as const satisfies readonly ApiChannel[];
 // A channel in the contract but missing from the list above fails to compile here.
@@ -49,6 +52,12 @@ export interface OperationContext {
   readonly version: string;
   /** The library; absent only where no database is wanted (then data channels refuse politely). */
   readonly library?: LibraryHost;
+  /**
+   * Prints a report to a PDF file the user picks (the desktop app's save dialog and printToPDF);
+   * resolves to the path, or null when the user cancels. Absent in browser mode, where the
+   * browser's own print dialog saves the PDF.
+   */
+  readonly saveReportPdf?: (report: ProjectReport) => Promise<string | null>;
 }
 
 /** Largest CSV or project file text accepted in one request (the HTTP body limit is set to match). */
@@ -193,6 +202,28 @@ export function createOperations(context: OperationContext): OperationHandlers {
     'projects:add-demo': async (request) => {
       requireNoFields('projects:add-demo', request);
       return addDemoProject(lib().projects, host().dataFolder);
+    },
+    'projects:report': async (request) => {
+      const id = requireId(fields('projects:report', request, ['id'])['id'], 'id');
+      return projectReport(lib(), id, `${context.name} ${context.version}`);
+    },
+    'projects:save-report-pdf': async (request) => {
+      const id = requireId(fields('projects:save-report-pdf', request, ['id'])['id'], 'id');
+      if (!context.saveReportPdf) {
+        throw new RefusedError("This window cannot save a PDF itself: open the project's report and use the browser's print (Print, then Save as PDF).");
+      }
+      const report = projectReport(lib(), id, `${context.name} ${context.version}`);
+      return { saved: await context.saveReportPdf(report) };
+    },
+
+    'settings:letterhead': async (request) => {
+      requireNoFields('settings:letterhead', request);
+      return lib().letterhead.get();
+    },
+    'settings:save-letterhead': async (request) => {
+      const r = fields('settings:save-letterhead', request, ['letterhead']);
+      // The service checks every field (texts, paper, the logo's type, size and content).
+      return lib().letterhead.save(r['letterhead']);
     },
 
     'backups:list': async (request) => {

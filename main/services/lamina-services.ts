@@ -3,6 +3,7 @@ import { openDatabase } from '../storage/open-database.js';
 import { BackupsService } from './backups-service.js';
 import { addDemoProject } from './demo-project.js';
 import type { DatabaseContext } from './database-context.js';
+import { LetterheadService } from './letterhead-service.js';
 import { MaterialsService } from './materials-service.js';
 import { ProjectsService } from './projects-service.js';
 import { DEFAULT_SEED_FOLDER, seedBuiltInMaterials } from './seed-materials.js';
@@ -19,6 +20,8 @@ export interface LaminaServices {
   readonly preMigrationBackup?: string;
   readonly materials: MaterialsService;
   readonly projects: ProjectsService;
+  /** The library's letterhead for printed reports (the settings table). */
+  readonly letterhead: LetterheadService;
   readonly backups: BackupsService;
   close(): void;
 }
@@ -49,7 +52,8 @@ export async function openLamina(databasePath: string, options: OpenLaminaOption
   try {
     const materials = new MaterialsService(context);
     seedBuiltInMaterials(context, materials, options.seedFolder ?? DEFAULT_SEED_FOLDER);
-    const projects = new ProjectsService(context, materials);
+    const letterhead = new LetterheadService(context);
+    const projects = new ProjectsService(context, materials, letterhead);
     // migratedFrom 0: this call created the file (a first start).
     if (options.demoProjectOnCreate && opened.migratedFrom === 0) addDemoProject(projects, options.dataFolder);
     return {
@@ -58,6 +62,7 @@ export async function openLamina(databasePath: string, options: OpenLaminaOption
       ...(opened.preMigrationBackup ? { preMigrationBackup: opened.preMigrationBackup } : {}),
       materials,
       projects,
+      letterhead,
       backups: new BackupsService(context, keep),
       close: () => opened.db.close(),
     };

@@ -3,6 +3,8 @@ import { materialReferences, validateCaseInputs, type CaseInputs } from './case-
 import type { MaterialInput } from './material-types.js';
 import { validateMaterialInput } from './material-validation.js';
 import { validateProjectFields, validateCaseDraft } from './project-validation.js';
+import { validateLetterhead } from './letterhead-validation.js';
+import type { Letterhead } from '../../app/report/project-report.js';
 import type { ProjectFields } from './project-types.js';
 import { requireBoundedNesting } from '../../app/base/json-depth.js';
 import { InputError } from '../../app/index.js';
@@ -14,12 +16,19 @@ import { rejectUnknownKeys, requireId, requireObject } from './validate.js';
  * Case inputs refer to materials by `fileId`, which only means something inside the file.
  */
 export const PROJECT_FILE_FORMAT = 'lamina-project';
-export const PROJECT_FILE_VERSION = 1;
+/**
+ * The version this Lamina writes. 2 added the project's checker and revision note and the
+ * letterhead; version 1 files (no letterhead) are still read.
+ */
+export const PROJECT_FILE_VERSION = 2;
+const READABLE_VERSIONS: readonly number[] = [1, 2];
 
 export type { ProjectFile };
 
 export interface CheckedProjectFile {
   readonly project: ProjectFields;
+  /** The letterhead the file carries, or null (a version 1 file, or one written without). */
+  readonly letterhead: Letterhead | null;
   readonly materials: readonly { fileId: number; material: MaterialInput }[];
   readonly cases: readonly { name: string; inputs: CaseInputs }[];
 }
@@ -48,11 +57,14 @@ export function projectFileFromJson(text: string): unknown {
 export function readProjectFile(value: unknown): CheckedProjectFile {
   const raw = requireObject(value, 'file');
   if (raw['format'] !== PROJECT_FILE_FORMAT) throw new InputError('format', `format must be "${PROJECT_FILE_FORMAT}"; this is not a Lamina project file.`);
-  if (raw['formatVersion'] !== PROJECT_FILE_VERSION) {
-    throw new InputError('formatVersion', `formatVersion must be ${PROJECT_FILE_VERSION} (the file was written by a Lamina this version cannot read).`);
+  const version = raw['formatVersion'];
+  if (typeof version !== 'number' || !READABLE_VERSIONS.includes(version)) {
+    throw new InputError('formatVersion', `formatVersion must be ${READABLE_VERSIONS.join(' or ')} (the file was written by a Lamina this version cannot read).`);
   }
-  rejectUnknownKeys(raw, ['format', 'formatVersion', 'exportedAt', 'project', 'materials', 'cases'], 'file');
+  const keys = ['format', 'formatVersion', 'exportedAt', 'project', 'materials', 'cases'];
+  rejectUnknownKeys(raw, version >= 2 ? [...keys, 'letterhead'] : keys, 'file');
   const project = validateProjectFields(raw['project']);
+  const letterhead = raw['letterhead'] === undefined || raw['letterhead'] === null ? null : fileLetterhead(raw['letterhead']);
   const rawMaterials = raw['materials'];
   if (!Array.isArray(rawMaterials) || rawMaterials.length > MAX_FILE_MATERIALS) {
     throw new InputError('materials', `materials must be a list of at most ${MAX_FILE_MATERIALS} materials.`);
@@ -85,5 +97,14 @@ export function readProjectFile(value: unknown): CheckedProjectFile {
     }
     return { name: draft.name, inputs: validateCaseInputs(draft.inputs) };
   });
-  return { project, materials, cases };
+  return { project, letterhead, materials, cases };
+}
+
+function fileLetterhead(value: unknown): Letterhead {
+  try {
+    return validateLetterhead(value);
+  } catch (error) {
+    if (error instanceof InputError) throw new InputError(`letterhead.${error.field}`, `The file's letterhead cannot be used: ${error.message}`);
+    throw error;
+  }
 }

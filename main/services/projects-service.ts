@@ -6,7 +6,9 @@ import type { MaterialsService } from './materials-service.js';
 import type { Material } from './material-types.js';
 import { MATERIAL_LIMITS } from './material-validation.js';
 import { mergeProjectFields, PROJECT_LIMITS, validateCaseDraft, validateProjectFields } from './project-validation.js';
-import { readProjectFile, type ProjectFile } from './project-file.js';
+import { PROJECT_FILE_VERSION, readProjectFile, type ProjectFile } from './project-file.js';
+import { LetterheadService, parseStoredLetterhead } from './letterhead-service.js';
+import type { Letterhead } from '../../app/report/project-report.js';
 import type { Project, ProjectCase, ProjectFields, ProjectSummary, UnitSystem } from './project-types.js';
 import { NotFoundError, RefusedError } from './service-errors.js';
 import { InputError } from '../../app/index.js';
@@ -14,9 +16,9 @@ import { requireOneOf } from '../../app/base/field-checks.js';
 import { isPlainObject, rejectUnknownKeys, requireId, requireText } from './validate.js';
 
 interface ProjectRow {
-  id: number; name: string; client: string; site: string; reference: string; engineer: string; revision: string;
-  project_date: string; unit_system: string; notes: string; created_at: string; updated_at: string; deleted_at: string | null;
-  case_count: number;
+  id: number; name: string; client: string; site: string; reference: string; engineer: string; checker: string; revision: string;
+  revision_note: string; project_date: string; unit_system: string; notes: string; letterhead: string | null;
+  created_at: string; updated_at: string; deleted_at: string | null; case_count: number;
 }
 interface CaseRow { id: number; project_id: number; name: string; position: number; inputs: string; created_at: string; updated_at: string }
 
@@ -25,7 +27,7 @@ const PROJECT_SELECT = `SELECT p.*, (SELECT COUNT(*) FROM cases c WHERE c.projec
 function summaryFromRow(row: ProjectRow): ProjectSummary {
   return {
     id: row.id, name: row.name, client: row.client, site: row.site, reference: row.reference, engineer: row.engineer,
-    revision: row.revision, date: row.project_date, unitSystem: row.unit_system as UnitSystem, notes: row.notes,
+    checker: row.checker, revision: row.revision, revisionNote: row.revision_note, date: row.project_date, unitSystem: row.unit_system as UnitSystem, notes: row.notes,
     caseCount: row.case_count, createdAt: row.created_at, updatedAt: row.updated_at, deletedAt: row.deleted_at,
   };
 }
@@ -40,7 +42,8 @@ function caseFromRow(row: CaseRow): ProjectCase {
 function fieldParameters(fields: ProjectFields) {
   return {
     name: fields.name, client: fields.client, site: fields.site, reference: fields.reference, engineer: fields.engineer,
-    revision: fields.revision, project_date: fields.date, unit_system: fields.unitSystem, notes: fields.notes,
+    checker: fields.checker, revision: fields.revision, revision_note: fields.revisionNote, project_date: fields.date,
+    unit_system: fields.unitSystem, notes: fields.notes,
   };
 }
 
@@ -63,7 +66,11 @@ function storeNamingCase(index: number, name: string, store: () => void): void {
  * Deleting moves a project to the recycle bin; it can be restored until the bin is emptied.
  */
 export class ProjectsService {
-  constructor(private readonly context: DatabaseContext, private readonly materials: MaterialsService) {}
+  constructor(
+    private readonly context: DatabaseContext,
+    private readonly materials: MaterialsService,
+    private readonly letterheads: LetterheadService = new LetterheadService(context),
+  ) {}
 
   private get db() {
     return this.context.db;
@@ -99,7 +106,8 @@ export class ProjectsService {
       this.db
         .prepare(
           `UPDATE projects SET name = @name, client = @client, site = @site, reference = @reference, engineer = @engineer,
-             revision = @revision, project_date = @project_date, unit_system = @unit_system, notes = @notes, updated_at = @now
+             checker = @checker, revision = @revision, revision_note = @revision_note, project_date = @project_date,
+             unit_system = @unit_system, notes = @notes, updated_at = @now
            WHERE id = @id`,
         )
         .run({ ...fieldParameters(merged), id: checkedId, now: nowIso() });
@@ -117,7 +125,8 @@ export class ProjectsService {
     const checkedName = name === undefined ? undefined : requireText(name, 'name', { min: 1, max: PROJECT_LIMITS.name });
     return inWriteTransaction(this.context, () => {
       const original = this.open(checkedId);
-      const copyId = this.insertProject({ ...original, name: checkedName ?? `${original.name} (copy)`.slice(0, PROJECT_LIMITS.name) });
+      // The copy prints as the original does: with the letterhead it carries, if any.
+      const copyId = this.insertProject({ ...original, name: checkedName ?? `${original.name} (copy)`.slice(0, PROJECT_LIMITS.name) }, this.ownLetterhead(checkedId));
       original.cases.forEach((c, i) => storeNamingCase(i, c.name, () => this.insertCase(copyId, c.name, c.inputs)));
       return this.open(copyId);
     });
@@ -222,16 +231,28 @@ export class ProjectsService {
     return caseFromRow(row);
   }
 
-  /** One self-contained file: the project, its cases' inputs and every material they use. */
+  /**
+   * The letterhead the project's report prints with: its own (from an imported file), else the
+   * library's.
+   */
+  letterheadOf(id: number): Letterhead {
+    return this.ownLetterhead(requireId(id, 'id')) ?? this.letterheads.get();
+  }
+
+  /**
+   * One self-contained file: the project, its cases' inputs, every material they use, and the
+   * letterhead its report prints with (so a colleague's copy prints the same).
+   */
   exportProject(id: number): ProjectFile {
     const project = this.open(requireId(id, 'id'));
     const ids = [...new Set(project.cases.flatMap((c) => materialIdsOf(c.inputs)))].sort((a, b) => a - b);
     const { id: _id, caseCount: _n, createdAt: _c, updatedAt: _u, deletedAt: _d, cases, ...fields } = project;
     return {
       format: 'lamina-project',
-      formatVersion: 1,
+      formatVersion: PROJECT_FILE_VERSION,
       exportedAt: nowIso(),
       project: fields,
+      letterhead: this.letterheadOf(project.id),
       materials: ids.map((materialId) => ({ fileId: materialId, ...materialInputOf(this.materials.get(materialId)) })),
       cases: cases.map((c) => ({ name: c.name, inputs: c.inputs })),
     };
@@ -272,7 +293,7 @@ export class ProjectsService {
         idMap.set(fileId, this.materials.insert({ ...material, name }, { builtIn: false, seedKey: null }).id);
         created++;
       }
-      const projectId = this.insertProject(parsed.project);
+      const projectId = this.insertProject(parsed.project, parsed.letterhead);
       parsed.cases.forEach((c, i) => {
         const inputs = validateCaseInputs(remapMaterialIds(c.inputs, (fileId) => idMap.get(fileId)!));
         storeNamingCase(i, c.name, () => this.insertCase(projectId, c.name, inputs));
@@ -294,15 +315,24 @@ export class ProjectsService {
     }
   }
 
-  private insertProject(fields: ProjectFields): number {
+  private insertProject(fields: ProjectFields, letterhead: Letterhead | null = null): number {
     const now = nowIso();
     const result = this.db
       .prepare(
-        `INSERT INTO projects (name, client, site, reference, engineer, revision, project_date, unit_system, notes, created_at, updated_at)
-         VALUES (@name, @client, @site, @reference, @engineer, @revision, @project_date, @unit_system, @notes, @now, @now)`,
+        `INSERT INTO projects (name, client, site, reference, engineer, checker, revision, revision_note, project_date, unit_system, notes,
+           letterhead, created_at, updated_at)
+         VALUES (@name, @client, @site, @reference, @engineer, @checker, @revision, @revision_note, @project_date, @unit_system, @notes,
+           @letterhead, @now, @now)`,
       )
-      .run({ ...fieldParameters(fields), now });
+      .run({ ...fieldParameters(fields), letterhead: letterhead === null ? null : JSON.stringify(letterhead), now });
     return Number(result.lastInsertRowid);
+  }
+
+  /** The letterhead stored on the project itself (from an imported file), or null. */
+  private ownLetterhead(id: number): Letterhead | null {
+    const row = this.db.prepare('SELECT letterhead FROM projects WHERE id = ?').get(id) as { letterhead: string | null } | undefined;
+    if (!row) throw new NotFoundError(`There is no project with id ${id}.`);
+    return row.letterhead === null ? null : parseStoredLetterhead(row.letterhead);
   }
 
   private insertCase(projectId: number, name: string, inputs: CaseInputs): number {

@@ -110,6 +110,19 @@ export const MIGRATIONS: readonly Migration[] = [
       db.pragma(`application_id = ${LAMINA_APPLICATION_ID}`);
     },
   },
+  {
+    version: 5,
+    description: 'settings (the letterhead of printed reports); projects gain checker, revision note and an imported letterhead',
+    up: (db) =>
+      db.exec(`
+        -- One row per setting; the value is JSON (key 'letterhead': the firm's letterhead).
+        CREATE TABLE settings (key TEXT PRIMARY KEY, value TEXT NOT NULL) WITHOUT ROWID;
+        ALTER TABLE projects ADD COLUMN checker TEXT NOT NULL DEFAULT '';
+        ALTER TABLE projects ADD COLUMN revision_note TEXT NOT NULL DEFAULT '';
+        -- A project's own letterhead (JSON), from an imported file; NULL prints the library's.
+        ALTER TABLE projects ADD COLUMN letterhead TEXT NULL;
+      `),
+  },
 ];
 
 export const LATEST_SCHEMA_VERSION = MIGRATIONS[MIGRATIONS.length - 1]!.version;

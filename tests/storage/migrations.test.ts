@@ -6,6 +6,7 @@ import { listBackups } from '../../main/storage/backups.js';
 import { LATEST_SCHEMA_VERSION, MIGRATIONS, migrate } from '../../main/storage/migrations.js';
 import { openDatabase } from '../../main/storage/open-database.js';
 import { openLamina } from '../../main/services/lamina-services.js';
+import { EMPTY_LETTERHEAD } from '../../app/report/project-report.js';
 import { tempDatabasePath } from './temp-folder.js';
 
 /** Builds a database at an earlier schema version, the way that version of Lamina left it, with data in it. */
@@ -87,6 +88,32 @@ describe('schema migrations', () => {
       }
     });
   }
+
+  it('version 5 gives a version 4 library a settings table and each project an empty checker, revision note and no letterhead of its own', async () => {
+    const file = tempDatabasePath();
+    databaseAtVersion(file, 4);
+    const lamina = await openLamina(file);
+    try {
+      expect(lamina.migratedFrom).toBe(4);
+      const [summary] = lamina.projects.list();
+      const project = lamina.projects.open(summary!.id);
+      expect([project.checker, project.revisionNote]).toEqual(['', '']);
+      // No letterhead of its own: it prints with the library's, empty until one is saved.
+      expect(lamina.projects.letterheadOf(project.id)).toEqual(EMPTY_LETTERHEAD);
+      lamina.letterhead.save({ firmName: 'Fernhill Thermal Consultants', paper: 'Letter' });
+      expect(lamina.projects.letterheadOf(project.id)).toMatchObject({ firmName: 'Fernhill Thermal Consultants', paper: 'Letter' });
+      expect(lamina.projects.update(project.id, { checker: 'J. Lindqvist', revisionNote: 'Issued for tender' })).toMatchObject({ checker: 'J. Lindqvist', revisionNote: 'Issued for tender' });
+    } finally {
+      lamina.close();
+    }
+    const db = new Database(file, { readonly: true });
+    const columns = (db.prepare('PRAGMA table_info(projects)').all() as { name: string; notnull: number; dflt_value: string | null }[])
+      .filter((c) => ['checker', 'revision_note', 'letterhead'].includes(c.name))
+      .map((c) => [c.name, c.notnull, c.dflt_value]);
+    expect(columns).toEqual([['checker', 1, "''"], ['revision_note', 1, "''"], ['letterhead', 0, null]]);
+    expect(db.prepare(`SELECT key FROM settings`).all()).toEqual([{ key: 'letterhead' }]);
+    db.close();
+  });
 
   it('refuses a database from a newer Lamina and leaves its bytes untouched', async () => {
     const file = tempDatabasePath();
