@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import type { ReportChart } from '../../app/report/report-model.js';
 import { besideTheAxis, chartConfiguration, type ChartInk } from '../../renderer/src/report-view/chart-config.js';
 import { quantityText } from '../../renderer/src/report-view/quantity-text.js';
-import { seriesStyles } from '../../renderer/src/report-view/series-styles.js';
+import { seriesStyles } from '../../app/report/drawing/series-styles.js';
 import { chartOf, exampleReport } from './report-fixtures.js';
 
 const ink: ChartInk = { ink: '#111111', soft: '#555555', rule: '#dddddd', fontFamily: 'sans-serif' };

@@ -4,7 +4,7 @@
  * scale" (only then), labels that do not overlap, and each temperature label at its face.
  */
 import { describe, expect, it } from 'vitest';
-import { crossSectionLayout, MINIMUM_WIDTH, type CrossSectionLayout } from '../../renderer/src/report-view/cross-section-layout.js';
+import { crossSectionLayout, MINIMUM_WIDTH, type CrossSectionLayout } from '../../app/report/drawing/cross-section-layout.js';
 import { quantityText } from '../../renderer/src/report-view/quantity-text.js';
 import { crossSectionOf, exampleReport } from './report-fixtures.js';
 

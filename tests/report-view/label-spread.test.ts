@@ -1,6 +1,6 @@
 /** Labels along a line: in order, at least the gap apart, inside the bounds, as near their targets as that allows. */
 import { describe, expect, it } from 'vitest';
-import { spreadLabels } from '../../renderer/src/report-view/label-spread.js';
+import { spreadLabels } from '../../app/report/drawing/label-spread.js';
 
 describe('spreadLabels', () => {
   it('leaves labels with room where they are', () => {

@@ -9,7 +9,7 @@ import { render } from 'svelte/server';
 import { describe, expect, it } from 'vitest';
 import CaseReportView from '../../renderer/src/report-view/CaseReportView.svelte';
 import { chartConfiguration } from '../../renderer/src/report-view/chart-config.js';
-import { crossSectionLayout } from '../../renderer/src/report-view/cross-section-layout.js';
+import { crossSectionLayout } from '../../app/report/drawing/cross-section-layout.js';
 import { quantityText } from '../../renderer/src/report-view/quantity-text.js';
 import { chartOf, crossSectionOf, exampleReport } from './report-fixtures.js';
 

@@ -4,7 +4,7 @@
  * lengths given (plain proportion, no source needed).
  */
 import { describe, expect, it } from 'vitest';
-import { visibleSpans } from '../../renderer/src/report-view/visible-spans.js';
+import { visibleSpans } from '../../app/report/drawing/visible-spans.js';
 
 const widths = (spans: ReturnType<typeof visibleSpans>) => spans.map((s) => s.end - s.start);
 

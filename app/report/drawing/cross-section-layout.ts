@@ -3,14 +3,22 @@
  * by side for a plane build-up (inside on the left), or concentric rings round the bore for a
  * pipe, to scale except for layers too thin to see (visible-spans.ts); a numbered badge above each
  * layer and the temperature below each face, spread so that none overlaps, each with a leader to
- * the place it names. Pure, so that the geometry is tested without a browser; the component only
- * draws it.
+ * the place it names. Pure, so that the geometry is tested without a browser, and shared: the screen's
+ * component (renderer CrossSection.svelte) and the printed report (app/report/html) only draw it.
  */
-import type { ReportCrossSection } from '../../../app/report/report-model.js';
-import type { MaterialCategory } from '../../../app/materials/material-properties.js';
+import type { QuantityName } from '../../base/quantities.js';
+import type { MaterialCategory } from '../../materials/material-properties.js';
+import type { ReportCrossSection } from '../report-model.js';
 import { spreadLabels } from './label-spread.js';
-import type { QuantityText } from './quantity-text.js';
 import { visibleSpans } from './visible-spans.js';
+
+/**
+ * How the drawing writes a figure with its unit in the project's unit system ("100.0 mm", "3.94 in"):
+ * the screen's and the paper's formatters both have this one method, so both lay out the same text.
+ */
+export interface FigureWriter {
+  withUnit(value: number, quantity: QuantityName): string;
+}
 
 /** A label and the point it names. */
 export interface Callout {
@@ -67,7 +75,7 @@ const EDGE = 6;
 const PLANE = { width: 560, left: 24, right: 536, top: 40, bottom: 150 };
 const CYLINDER = { width: 340, radius: 112, centreX: 132, centreY: 40 + 112 };
 
-export function crossSectionLayout(section: ReportCrossSection, text: QuantityText): CrossSectionLayout {
+export function crossSectionLayout(section: ReportCrossSection, text: FigureWriter): CrossSectionLayout {
   const cylinder = section.geometry === 'cylinder';
   const width = cylinder ? CYLINDER.width : PLANE.width;
   const thicknesses = section.layers.map((l) => l.thickness);

@@ -4,7 +4,7 @@
  * layer down to 0.03 for a membrane), with a pattern on top for the categories that sit beside
  * each other most often (masonry hatched, air dotted, the bore of a pipe lined).
  */
-import type { MaterialCategory } from '../../../app/materials/material-properties.js';
+import type { MaterialCategory } from '../../materials/material-properties.js';
 
 export type FillPattern = 'none' | 'hatch' | 'dots' | 'lines';
 

@@ -3,13 +3,13 @@
  * every series of a chart gets its own dash pattern and point shape, not only its own colour.
  * Ordinary series start solid; reference lines (saturation, dew point, a limit) are always dashed,
  * from patterns no ordinary series uses. The colours are Lamina's own, dark enough on white and
- * apart in lightness.
+ * apart in lightness. Shared by the screen's charts (chart.js) and the printed report's SVG charts.
  */
 export type PointShape = 'circle' | 'rect' | 'triangle' | 'rectRot' | 'crossRot' | 'star';
 
 export interface SeriesStyle {
   readonly colour: string;
-  /** Canvas line dash, in px: [] is solid. */
+  /** Line dash, in px (a canvas line dash, an SVG stroke-dasharray): [] is solid. */
   readonly dash: readonly number[];
   readonly point: PointShape;
   readonly width: number;

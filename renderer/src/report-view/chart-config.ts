@@ -9,7 +9,7 @@ import type { ReportChart } from '../../../app/report/report-model.js';
 // The marker plugin's options type, which also declares them among chart.js's plugin options.
 import type { InterfaceMarkerOptions } from './interface-markers.js';
 import type { QuantityText } from './quantity-text.js';
-import { seriesStyles } from './series-styles.js';
+import { seriesStyles } from '../../../app/report/drawing/series-styles.js';
 
 /** The page's colours and font, read from its style sheet by the component. */
 export interface ChartInk {

@@ -5,7 +5,7 @@
  * set apart, in order.
  */
 import type { ChartType, Plugin } from 'chart.js';
-import { spreadLabels } from './label-spread.js';
+import { spreadLabels } from '../../../app/report/drawing/label-spread.js';
 
 export interface InterfaceMarkerOptions {
   /** x values in the units the x axis plots (category index on a category axis). */
