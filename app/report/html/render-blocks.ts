@@ -11,6 +11,9 @@ import { VERDICT_WORDS } from './report-words.js';
 import { chartSvg } from './svg-chart.js';
 import { crossSectionSvg } from './svg-cross-section.js';
 
+/** Rows of a table kept whole on one page (about a third of a page at most). */
+const SHORT_TABLE_ROWS = 14;
+
 export function figuresHtml(figures: readonly ReportFigure[], print: PrintText, className = 'figures'): string {
   const items = figures.map(
     (f) =>
@@ -29,7 +32,9 @@ export function tableHtml(table: ReportTable, print: PrintText): string {
   const rows = table.rows
     .map((row) => `<tr>${row.map((c, j) => `<td${typeof c === 'string' && !numeric[j] ? '' : ' class="num"'}>${escapeHtml(cell(c))}</td>`).join('')}</tr>`)
     .join('');
-  return `<table class="data"><caption>${escapeHtml(table.title)}</caption><thead><tr>${head}</tr></thead><tbody>${rows}</tbody></table>`;
+  // A short table is kept on one page, its caption with it; a long one runs on with its header repeated.
+  const short = table.rows.length <= SHORT_TABLE_ROWS ? ' short-table' : '';
+  return `<table class="data${short}"><caption>${escapeHtml(table.title)}</caption><thead><tr>${head}</tr></thead><tbody>${rows}</tbody></table>`;
 }
 
 /** A chart whose figures no table of the report lists also prints them as a table, so none is only a picture. */
@@ -86,6 +91,7 @@ export function verdictHtml(v: ReportVerdict, cautionNumber: number | undefined)
   );
 }
 
+/** "Temperature"; a label that starts with a symbol ("s_d from the inside") keeps its case. */
 function capitalise(words: string): string {
-  return words.charAt(0).toUpperCase() + words.slice(1);
+  return /^\S*_/.test(words) ? words : words.charAt(0).toUpperCase() + words.slice(1);
 }

@@ -20,7 +20,8 @@ const TOP_WITH_MARKERS = 26;
 const TOP = 12;
 /** A series with more points than this is drawn as a line with a point shape every few points. */
 const MOST_POINTS_SHOWN = 24;
-const SHAPES_ON_A_DENSE_LINE = 8;
+/** Drawing units between the point shapes along a dense line. */
+const SHAPE_SPACING = 70;
 const POINT_RADIUS = 3.6;
 const INK = '#1f2429';
 const SOFT = '#56606a';
@@ -84,8 +85,7 @@ export function chartSvg(chart: ReportChart, print: PrintText): string {
     const style = styles[i]!;
     const dash = style.dash.length > 0 ? ` stroke-dasharray="${style.dash.join(' ')}"` : '';
     const line = points.map(([x, y]) => `${n(xOf(x))},${n(yOf(y))}`).join(' ');
-    const every = points.length <= MOST_POINTS_SHOWN ? 1 : Math.ceil(points.length / SHAPES_ON_A_DENSE_LINE);
-    const shapes = points.filter((_, k) => k % every === 0 || k === points.length - 1).map(([x, y]) => pointShape(style, xOf(x), yOf(y)));
+    const shapes = shapesAlong(points.map(([x, y]) => [xOf(x), yOf(y)] as const)).map(([x, y]) => pointShape(style, x, y));
     parts.push(
       `<g class="series" data-series="${i}"><polyline points="${line}" fill="none" stroke="${style.colour}" stroke-width="${style.width}" stroke-linejoin="round"${dash}/>${shapes.join('')}</g>`,
     );
@@ -111,6 +111,27 @@ export function chartSvg(chart: ReportChart, print: PrintText): string {
     `<svg class="chart-plot" viewBox="0 0 ${CHART_WIDTH} ${CHART_HEIGHT}" width="100%" role="img" aria-label="${escapeHtml(chart.title)}" font-size="11" fill="${INK}">${parts.join('')}</svg>` +
     `<ul class="chart-legend">${legend}</ul></figure>`
   );
+}
+
+/**
+ * Where a series shows its point shape: at every point of a short series; along a dense profile,
+ * at points at least SHAPE_SPACING apart on the drawing, and its last, so the shape names the line
+ * in greyscale without piling up where the points crowd (a thin pipe wall).
+ */
+function shapesAlong(points: readonly (readonly [number, number])[]): (readonly [number, number])[] {
+  if (points.length <= MOST_POINTS_SHOWN) return [...points];
+  const shown: (readonly [number, number])[] = [];
+  for (const p of points) {
+    const last = shown[shown.length - 1];
+    if (!last || Math.hypot(p[0] - last[0], p[1] - last[1]) >= SHAPE_SPACING) shown.push(p);
+  }
+  const end = points[points.length - 1]!;
+  const last = shown[shown.length - 1]!;
+  if (last !== end) {
+    if (Math.hypot(end[0] - last[0], end[1] - last[1]) < SHAPE_SPACING / 2) shown.pop();
+    shown.push(end);
+  }
+  return shown;
 }
 
 /** A point's shape at (x, y), in the series' colour; the crosses are strokes, the others filled. */
@@ -148,8 +169,9 @@ function besideTheAxis(title: string, longest = 24): string[] {
   return title.length > longest && unitAt > 0 ? [title.slice(0, unitAt), title.slice(unitAt + 1)] : [title];
 }
 
+/** "Temperature"; a label that starts with a symbol ("s_d from the inside") keeps its case. */
 function capitalise(words: string): string {
-  return words.charAt(0).toUpperCase() + words.slice(1);
+  return /^\S*_/.test(words) ? words : words.charAt(0).toUpperCase() + words.slice(1);
 }
 
 /** Drawing coordinates to 0.01 unit: sharp enough, and short. */

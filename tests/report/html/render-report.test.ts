@@ -181,3 +181,28 @@ describe('a case that could not be calculated', () => {
     for (const c of DEMO.cases) expect(html).toContain(`<h2>${escapeHtml(c.name)}</h2>`);
   });
 });
+
+describe('a project in US customary units', () => {
+  const report = demoReport({ unitSystem: 'IP' });
+  const html = renderReportBody(report);
+
+  it('prints its key figures in US units, as the US QuantityText writes them', () => {
+    const text = quantityText('IP');
+    for (const c of report.cases) {
+      if (!('report' in c)) throw new Error('every demo case solves');
+      for (const f of c.report.keyFigures) expect(html).toContain(`<span class="value">${escapeHtml(text.figure(f.value!, f.quantity))}</span>`);
+    }
+    expect(html).toContain('<span class="value">21.2 Btu/(h·ft)</span>');
+    expect(html).toContain('°F');
+    expect(html).toContain('<th scope="col" class="num">Thickness (in)</th>');
+    expect(html).toContain('in US customary units');
+  });
+
+  it('prints no °C, except where a cited data file states the conditions of its own table', () => {
+    const withoutSources = html.replace(/<section class="case-part sources">[\s\S]*?<\/section>/g, '');
+    expect(withoutSources).not.toContain('°C');
+    // data/physics/iso6946-air-layers.json cites the ISO 6946 air-layer table "at a mean temperature about 10 °C".
+    const cited = [...html.matchAll(/.{40}°C/g)].map((m) => m[0]);
+    for (const c of cited) expect(c).toMatch(/mean temperature about 10 °C$/);
+  });
+});
