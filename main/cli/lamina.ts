@@ -24,6 +24,7 @@ usage:
   lamina solve CASE.json [--format json|text] [--db PATH]   solve a case file and print the result
   lamina materials list|show|import|export ...              the materials library (see lamina materials --help)
   lamina projects list|export|import ...                    projects (see lamina projects --help)
+  lamina projects report ID --out FILE.pdf|FILE.html        print a project's report (PDF through Electron or Chromium)
   lamina --version
 
 Run "lamina solve --help" for the case-file format. Exit codes: 0 done, 1 failed while working,

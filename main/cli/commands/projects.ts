@@ -6,6 +6,7 @@ import type { CliCommand } from '../command.js';
 import { projectFileFromJson, projectFileToJson } from '../../services/project-file.js';
 import { parseArgs, withServices } from './materials.js';
 import { solveProject } from './project-solve.js';
+import { projectsReportCommand } from './project-report.js';
 import { EXIT_BAD_INPUT, exitCodeOf, isInputProblem } from '../exit-code.js';
 
 function caseTitle(inputs: unknown): string | undefined {
@@ -20,10 +21,11 @@ function caseTitle(inputs: unknown): string | undefined {
  * lamina projects create NAME [--client TEXT] [--site TEXT] [--reference TEXT] [--engineer TEXT]
  * lamina projects add-case ID CASE.json [--name NAME]   (a case file; materials inline or by library id)
  * lamina projects solve ID [--format json|text]          (recomputes every case from its stored inputs)
+ * lamina projects report ID --out FILE.pdf|FILE.html [--paper A4|Letter]   (the printed report)
  * Every form accepts --db PATH (else LAMINA_DB, else the per-system default).
  */
 const USAGE =
-  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | solve ID [--format json|text] [--db PATH]';
+  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | solve ID [--format json|text] | report ID --out FILE.pdf|FILE.html [--paper A4|Letter] [--db PATH]';
 
 const CREATE_FIELDS = ['client', 'site', 'reference', 'engineer'] as const;
 
@@ -33,7 +35,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
     io.stdout(`${USAGE}\n`);
     return 0;
   }
-  const parsed = parseArgs(rest, ['db', 'name', 'format', 'on-existing', ...CREATE_FIELDS], ['json', 'deleted']);
+  const parsed = parseArgs(rest, ['db', 'name', 'format', 'on-existing', 'out', 'paper', ...CREATE_FIELDS], ['json', 'deleted']);
   if (typeof parsed === 'string') {
     io.stderr(`${parsed} ${USAGE}\n`);
     return EXIT_BAD_INPUT;
@@ -128,6 +130,8 @@ export const projectsCommand: CliCommand = async (args, io) => {
       }
       return withServices(io, db, ({ projects, materials }) => solveProject(io, projects.open(Number(id)), materials, format));
     }
+    case 'report':
+      return projectsReportCommand(parsed, io);
     default:
       io.stderr(`${sub === undefined ? 'projects needs a subcommand.' : `unknown subcommand "${sub}".`} ${USAGE}\n`);
       return EXIT_BAD_INPUT;
