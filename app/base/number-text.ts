@@ -15,13 +15,18 @@ const LARGEST_PLAIN = 1e9;
 const EXPONENT_FORM_FIGURES = 3;
 const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
 
-export function numberText(value: number, precision: Precision): string {
+/**
+ * `inExponentForm` writes a non-zero value rounded to significant figures as "1.34 × 10⁻⁴" even
+ * where it would read plainly: a table column uses it for every cell once one cell needs it, so a
+ * column reads in one notation (see needsExponentForm).
+ */
+export function numberText(value: number, precision: Precision, inExponentForm = false): string {
   if (!Number.isFinite(value)) throw new Error(`numberText was given ${String(value)}: a non-finite value must not reach a report.`);
   const magnitude = Math.abs(value);
   let digits: string;
   if ('significant' in precision) {
     const rounded = Number(magnitude.toPrecision(precision.significant));
-    digits = rounded !== 0 && (rounded < SMALLEST_PLAIN || rounded >= LARGEST_PLAIN)
+    digits = rounded !== 0 && (inExponentForm || rounded < SMALLEST_PLAIN || rounded >= LARGEST_PLAIN)
       ? exponentForm(rounded, precision.significant)
       : plainSignificant(rounded, precision.significant);
   } else {
@@ -29,6 +34,17 @@ export function numberText(value: number, precision: Precision): string {
   }
   // A value that rounds to zero prints without a sign, so "−0.0" never appears.
   return value < 0 && /[1-9]/.test(digits) ? MINUS + digits : digits;
+}
+
+/**
+ * Whether numberText writes the value in exponent form. Only a kind rounded to significant figures
+ * is ever written so within the documented ranges; one rounded to decimals would need 1e9 or more.
+ */
+export function needsExponentForm(value: number, precision: Precision): boolean {
+  const magnitude = Math.abs(value);
+  if (!('significant' in precision)) return magnitude >= LARGEST_PLAIN;
+  const rounded = Number(magnitude.toPrecision(precision.significant));
+  return rounded !== 0 && (rounded < SMALLEST_PLAIN || rounded >= LARGEST_PLAIN);
 }
 
 /** `rounded` (already at `figures` significant figures) written out in full. */

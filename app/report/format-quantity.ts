@@ -6,9 +6,10 @@
  * prints as "—". Every rendering of the report model (text, screen, paper) writes its
  * numbers through here, so a figure reads alike everywhere.
  */
-import { numberText } from '../base/number-text.js';
+import { needsExponentForm, numberText } from '../base/number-text.js';
 import type { QuantityName } from '../base/quantities.js';
 import { displayPrecision, toDisplay, unitLabel, type UnitSystem } from '../base/unit-systems.js';
+import type { ReportTable } from './report-model.js';
 
 export const NOT_APPLICABLE = '—';
 
@@ -29,4 +30,26 @@ export function formatQuantity(value: number | null, quantity: QuantityName, sys
   const text = formatQuantityNumber(value, quantity, system);
   const unit = quantityUnit(quantity, system);
   return value === null || unit === '' ? text : `${text} ${unit}`;
+}
+
+/**
+ * The cells of a report table as text, each column in one notation: where one number of a column
+ * reads in exponent form ("5.78 × 10⁻⁵" among "0.000134"), every number of that column does
+ * ("1.34 × 10⁻⁴"), each still at its kind's precision; other columns read as formatQuantityNumber
+ * writes them. Text cells stay as they are.
+ */
+export function tableCellTexts(table: ReportTable, system: UnitSystem = 'SI'): string[][] {
+  const inExponentForm = table.columns.map((_, j) =>
+    table.rows.some((row) => {
+      const cell = row[j];
+      return cell !== undefined && typeof cell !== 'string' && cell.value !== null && Number.isFinite(cell.value) && needsExponentForm(toDisplay(cell.value, cell.quantity, system), displayPrecision(cell.quantity, system));
+    }),
+  );
+  return table.rows.map((row) =>
+    row.map((cell, j) => {
+      if (typeof cell === 'string') return cell;
+      if (!inExponentForm[j] || cell.value === null) return formatQuantityNumber(cell.value, cell.quantity, system);
+      return numberText(toDisplay(cell.value, cell.quantity, system), displayPrecision(cell.quantity, system), true);
+    }),
+  );
 }

@@ -8,7 +8,7 @@
  * the table of its layers.
  */
 import type { CheckVerdict } from '../checks/check-result.js';
-import { formatQuantity, formatQuantityNumber, quantityUnit } from './format-quantity.js';
+import { formatQuantity, quantityUnit, tableCellTexts } from './format-quantity.js';
 import type { CaseReport, ReportBlock, ReportCell, ReportChart, ReportCrossSection, ReportFigure, ReportTable, ReportVerdict } from './report-model.js';
 
 export const TEXT_WIDTH = 100;
@@ -67,17 +67,13 @@ function figureLines(figures: readonly ReportFigure[], indent: string): string[]
   return figures.map((f) => `${indent}${f.label.padEnd(width)}  ${formatQuantity(f.value, f.quantity)}${f.note ? `  (${f.note})` : ''}`);
 }
 
-function cellText(cell: ReportCell): string {
-  return typeof cell === 'string' ? cell : formatQuantityNumber(cell.value, cell.quantity);
-}
-
 /** Columns aligned: text to the left, numbers to the right, each header with its unit. */
 function tableLines(table: ReportTable): string[] {
   const headers = table.columns.map((c) => {
     const unit = c.quantity ? quantityUnit(c.quantity) : '';
     return unit ? `${c.label} (${unit})` : c.label;
   });
-  const rows = table.rows.map((row) => row.map(cellText));
+  const rows = tableCellTexts(table);
   const widths = headers.map((h, j) => Math.max(h.length, ...rows.map((r) => (r[j] ?? '').length)));
   const numeric = table.columns.map((c) => c.quantity !== undefined);
   const line = (cells: readonly string[]) =>

@@ -23,6 +23,7 @@ import { wallReport } from '../../app/cases/wall/wall-report.js';
 import type { CheckResult } from '../../app/checks/check-result.js';
 import { solveSteady, solveTransient } from '../../app/fe/index.js';
 import { renderReportText } from '../../app/report/render-text.js';
+import { tableCellTexts } from '../../app/report/format-quantity.js';
 import type { CaseReport } from '../../app/report/report-model.js';
 import { pipeSizeCatalogue } from '../../main/pipe-sizes/pipe-size-catalogue.js';
 
@@ -50,6 +51,14 @@ function numbers(value: unknown): number[] {
 function expectSoundReport(report: CaseReport, checks: readonly CheckResult[]): string {
   expect(report.verdicts.map((v) => [v.check, v.verdict, v.title])).toEqual(checks.map((c) => [c.check, c.verdict, c.title]));
   for (const s of strings(report)) expect(s).not.toMatch(/NaN|undefined|Infinity/);
+  // Each table column in one notation: its non-zero numbers all plain or all "× 10ⁿ".
+  for (const table of report.sections.flatMap((sec) => sec.blocks.flatMap((b) => (b.kind === 'table' ? [b.table] : [])))) {
+    const cells = tableCellTexts(table);
+    table.columns.forEach((_, j) => {
+      const forms = new Set(cells.filter((r, i) => typeof table.rows[i]![j] !== 'string' && !['0', '—'].includes(r[j]!)).map((r) => r[j]!.includes('× 10')));
+      expect(forms.size, `${table.title}, column ${j}`).toBeLessThanOrEqual(1);
+    });
+  }
   // A report speaks in words, never in case-file paths ("from jacket.material.emissivity").
   for (const s of strings(report)) expect(s).not.toMatch(/\b(?:jacket|pipe|wall|ambient|inner|inside|outside|moisture|surfaceMethod|layers\[\d+\])\.[a-zA-Z]/);
   for (const n of numbers(report)) expect(Number.isFinite(n)).toBe(true);

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { formatQuantity, formatQuantityNumber, quantityUnit } from '../../app/report/format-quantity.js';
+import { formatQuantity, formatQuantityNumber, quantityUnit, tableCellTexts } from '../../app/report/format-quantity.js';
+import type { ReportTable } from '../../app/report/report-model.js';
 import { numberText } from '../../app/base/number-text.js';
 
 // Writing conventions checked here: a space between the number and its unit, and the minus sign
@@ -70,5 +71,38 @@ describe('formatQuantity', () => {
   it('names the unit of each kind for table headers', () => {
     expect(quantityUnit('thermalResistance')).toBe('m²·K/W');
     expect(quantityUnit('temperatureFactor')).toBe('');
+  });
+});
+
+describe('tableCellTexts: one notation per column', () => {
+  // The wall-flat-roof example's monthly table had "5.78 × 10⁻⁵" among "0.000134"; kg/m² to 3 significant figures.
+  const kg = (value: number | null) => ({ value, quantity: 'massPerArea' as const });
+  const table: ReportTable = {
+    title: 'Condensate stored at the end of each month',
+    columns: [{ label: 'Month' }, { label: 'θ outside', quantity: 'temperature' }, { label: 'Change', quantity: 'massPerArea' }, { label: 'Stored', quantity: 'massPerArea' }],
+    rows: [
+      ['February', { value: -4, quantity: 'temperature' }, kg(0.000196), kg(0.00084)],
+      ['March', { value: 1, quantity: 'temperature' }, kg(5.78e-5), kg(0.000898)],
+      ['April', { value: 7, quantity: 'temperature' }, kg(-0.000321), kg(0.000577)],
+      ['June', { value: 16, quantity: 'temperature' }, kg(0), kg(null)],
+    ],
+  };
+
+  it('a column with one exponent-form number writes every number so, at the same significant figures', () => {
+    const cells = tableCellTexts(table);
+    expect(cells.map((r) => r[2])).toEqual(['1.96 × 10⁻⁴', '5.78 × 10⁻⁵', '\u22123.21 × 10⁻⁴', '0']);
+    // The figures are the plain ones, digit for digit: 0.000196 = 1.96 × 10⁻⁴.
+    expect(cells.map((r) => r[3])).toEqual(['0.000840', '0.000898', '0.000577', '—']);
+    expect(cells.map((r) => r[1])).toEqual(['\u22124.0', '1.0', '7.0', '16.0']);
+    expect(cells.map((r) => r[0])).toEqual(['February', 'March', 'April', 'June']);
+  });
+
+  it('a column with no such number is written cell by cell as before', () => {
+    const plain: ReportTable = { ...table, rows: table.rows.filter((r) => r[0] !== 'March') };
+    expect(tableCellTexts(plain).map((r) => r[2])).toEqual([formatQuantityNumber(0.000196, 'massPerArea'), formatQuantityNumber(-0.000321, 'massPerArea'), '0']);
+  });
+
+  it('decides in the unit system shown (°F of a temperature column stays plain)', () => {
+    expect(tableCellTexts(table, 'IP').map((r) => r[1])).toEqual(['24.8', '33.8', '44.6', '60.8']);
   });
 });

@@ -7,13 +7,16 @@
 import type { UnitSystem } from '../../../app/api/contract.js';
 import type { QuantityName } from '../../../app/base/quantities.js';
 import { toDisplay } from '../../../app/base/unit-systems.js';
-import { formatQuantity, formatQuantityNumber, quantityUnit } from '../../../app/report/format-quantity.js';
+import { formatQuantity, formatQuantityNumber, quantityUnit, tableCellTexts } from '../../../app/report/format-quantity.js';
+import type { ReportTable } from '../../../app/report/report-model.js';
 
 export interface QuantityText {
   /** "18.6 °C", "50.0 mm"; "—" where the value does not apply. */
   readonly withUnit: (value: number | null, quantity: QuantityName) => string;
   /** The number alone, for a table cell whose header carries the unit. */
   readonly number: (value: number | null, quantity: QuantityName) => string;
+  /** A table's cells, numbers without units, each column in one notation. */
+  readonly cells: (table: ReportTable) => string[][];
   /** The unit a kind is read in; empty for a dimensionless number. */
   readonly unit: (quantity: QuantityName) => string;
   /** A stored (SI) value in the unit it is read in, for a chart axis: metres of a position become millimetres (or inches). */
@@ -27,6 +30,7 @@ export function quantityText(unitSystem: UnitSystem = 'SI'): QuantityText {
   return {
     withUnit: (value, quantity) => formatQuantity(value, quantity, unitSystem),
     number: (value, quantity) => formatQuantityNumber(value, quantity, unitSystem),
+    cells: (table) => tableCellTexts(table, unitSystem),
     unit,
     plotted: (value, quantity) => toDisplay(value, quantity, unitSystem),
     labelWithUnit: (label, quantity) => {
