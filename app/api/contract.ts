@@ -14,10 +14,12 @@ import type {
 } from './material-types.js';
 import type { PipeSize } from '../cases/pipe/pipe-sizes.js';
 import type { CaseDraft, Project, ProjectCase, ProjectFields, ProjectSummary } from './project-types.js';
+import type { Letterhead, ProjectReport } from '../report/project-report.js';
 
 export type * from './backup-types.js';
 export type * from './material-types.js';
 export type * from './project-types.js';
+export type { Letterhead, LetterheadLogo, PaperSize, ProjectReport } from '../report/project-report.js';
 
 /** What the running program is, for the title bar and the report footer. */
 export interface AppInfo {
@@ -93,6 +95,23 @@ export interface ApiChannels {
   /** Adds the demo project of data/demo again (a new library starts with it). */
   'projects:add-demo': { readonly request: NoFields; readonly response: Project };
 
+  /**
+   * The printed report of a project: every case solved in the project's units, with the letterhead
+   * the project carries (from an imported file) or else the library's own.
+   */
+  'projects:report': { readonly request: Id; readonly response: ProjectReport };
+  /**
+   * Desktop only: prints the project's report to a PDF file the user picks in a save dialog
+   * (Electron's printToPDF). `saved` is null when the user cancels. Browser mode prints through the
+   * browser's own print dialog instead and refuses this channel.
+   */
+  'projects:save-report-pdf': { readonly request: Id; readonly response: { readonly saved: string | null } };
+
+  /** The firm's letterhead for printed reports (name, address, contact, logo, paper size). */
+  'settings:letterhead': { readonly request: NoFields; readonly response: Letterhead };
+  /** Stores the letterhead after checking it (texts' lengths, logo type and size, no script in an SVG). */
+  'settings:save-letterhead': { readonly request: { readonly letterhead: Letterhead }; readonly response: Letterhead };
+
   'backups:list': { readonly request: NoFields; readonly response: readonly BackupInfo[] };
   'backups:create': { readonly request: NoFields; readonly response: BackupInfo };
   /** Closes the library, replaces it by the backup (moving the current file aside) and reopens it. */
@@ -153,6 +172,12 @@ export interface LaminaApi {
     exportProject: ApiCall<'projects:export-file'>;
     importProject: ApiCall<'projects:import-file'>;
     addDemo: ApiCall<'projects:add-demo'>;
+    report: ApiCall<'projects:report'>;
+    saveReportPdf: ApiCall<'projects:save-report-pdf'>;
+  };
+  settings: {
+    letterhead: ApiCall<'settings:letterhead'>;
+    saveLetterhead: ApiCall<'settings:save-letterhead'>;
   };
   backups: {
     list: ApiCall<'backups:list'>;
