@@ -95,6 +95,7 @@ function coverHtml(report: ProjectReport): string {
 }
 
 function summaryHtml(report: ProjectReport, print: PrintText): string {
+  if (report.summary.length === 0) return `<section class="summary"><h2>Summary of the cases</h2><p>This project has no cases yet.</p></section>`;
   const rows = report.summary.map((line, i) => summaryRow(line, i, print)).join('');
   return (
     `<section class="summary"><h2>Summary of the cases</h2><table class="data summary-table"><thead><tr>` +
@@ -135,7 +136,7 @@ function caseHtml(c: ReportedCase, i: number, count: number, print: PrintText, c
     parts.push(`<section class="case-part checks"><h3>Checks</h3>${verdicts}</section>`);
   }
   r.sections.forEach((s, si) => {
-    const blocks = s.blocks.map((b, bi) => blockHtml(b, print, `case${i + 1}-s${si + 1}-b${bi + 1}`)).join('');
+    const blocks = s.blocks.map((b, bi) => blockHtml(b, print, `lamina-report-case${i + 1}-s${si + 1}-b${bi + 1}`)).join('');
     parts.push(`<section class="case-part section-${escapeHtml(s.id)}"><h3>${escapeHtml(s.heading)}</h3>${blocks}</section>`);
   });
   parts.push(energyBalanceHtml(r, print));

@@ -34,8 +34,9 @@ export function chartSvg(chart: ReportChart, print: PrintText): string {
   const top = markers.length > 0 ? TOP_WITH_MARKERS : TOP;
   const series = chart.series.map((s) => s.points.map(([x, y]) => [categories ? x : print.plotted(x, chart.x.quantity), print.plotted(y, chart.y.quantity)] as const));
   const all = series.flat();
-  const ys = all.map((p) => p[1]);
-  const yAxis = niceAxis(Math.min(...ys, Infinity), Math.max(...ys, -Infinity), true);
+  // A chart with no points still draws its empty axes rather than failing.
+  const ys = all.length > 0 ? all.map((p) => p[1]) : [0, 1];
+  const yAxis = niceAxis(Math.min(...ys), Math.max(...ys), true);
   const yOf = scaleOf(yAxis, PLOT.bottom, top);
   let xOf: (x: number) => number;
   let xTicks: { at: number; text: string }[];
@@ -46,8 +47,8 @@ export function chartSvg(chart: ReportChart, print: PrintText): string {
     const short = categories.some((c) => c.length * 6.2 > band);
     xTicks = categories.map((c, i) => ({ at: xOf(i), text: short ? c.slice(0, 3) : c }));
   } else {
-    const xs = all.map((p) => p[0]);
-    const xAxis: Axis = niceAxis(Math.min(...xs, Infinity), Math.max(...xs, -Infinity), false, 6);
+    const xs = all.length > 0 ? all.map((p) => p[0]) : [0, 1];
+    const xAxis: Axis = niceAxis(Math.min(...xs), Math.max(...xs), false, 6);
     xOf = scaleOf(xAxis, PLOT.left, PLOT.right);
     xTicks = xAxis.ticks.map((t) => ({ at: xOf(t), text: tickText(t, xAxis.decimals) }));
   }

@@ -206,3 +206,14 @@ describe('a project in US customary units', () => {
     for (const c of cited) expect(c).toMatch(/mean temperature about 10 °C$/);
   });
 });
+
+describe('a project without cases and without a letterhead', () => {
+  it('prints its cover, says it has no cases, and still prints the general caution', () => {
+    const report = demoReport({ cases: [], letterhead: { firmName: '', address: '', telephone: '', email: '', logo: null } });
+    const html = renderReportBody(report);
+    expect(html).not.toContain('class="letterhead"');
+    expect(html).toContain('This project has no cases yet.');
+    expect(html).toContain('<h1>Orrin Valley Creamery (demo)</h1>');
+    expect(html).toContain(escapeHtml(report.cautions[report.cautions.length - 1]!));
+  });
+});

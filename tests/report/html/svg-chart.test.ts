@@ -139,3 +139,13 @@ describe('niceAxis', () => {
     expect(tickText(-0.0001, 1)).toBe('0.0');
   });
 });
+
+describe('a chart without points', () => {
+  it('draws its empty axes, not NaN', () => {
+    const empty: ReportChart = { title: 'Nothing yet', x: { label: 'position', quantity: 'position' }, y: { label: 'temperature', quantity: 'temperature' }, series: [] };
+    const svg = chartSvg(empty, printText('SI'));
+    expect(svg).not.toContain('NaN');
+    expect(svg).not.toContain('Infinity');
+    expect(svg).toContain('<g class="tick y"');
+  });
+});
