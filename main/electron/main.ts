@@ -4,7 +4,8 @@
  *
  * Compiled by `npm run build:main` to build/main/electron/main.js (package.json "main").
  */
-import { app, BrowserWindow, ipcMain, session, type IpcMainInvokeEvent, type WebContents } from 'electron';
+import { app, BrowserWindow, dialog, ipcMain, session, type IpcMainInvokeEvent, type WebContents } from 'electron';
+import { mkdtemp, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import type { IpcReply } from '../../app/api/contract.js';
@@ -14,6 +15,9 @@ import { LibraryHost } from '../server/library-host.js';
 import { DATABASE_FILE_NAME } from '../storage/database-path.js';
 import { CONTENT_SECURITY_POLICY } from '../server/security-policy.js';
 import { isAppPage, mayNavigate } from './navigation-policy.js';
+import { renderReportDocument } from '../../app/report/html/render-report.js';
+import type { ProjectReport } from '../../app/report/project-report.js';
+import { reportAssets } from '../report/report-assets.js';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 /** build/main/electron/ -> build/renderer/index.html */
@@ -74,9 +78,44 @@ function openLibrary(): Promise<LibraryHost> {
   });
 }
 
+/** A file name from the project's reference or name: letters, digits, dashes and dots only. */
+function reportFileName(report: ProjectReport): string {
+  const stem = (report.project.reference || report.project.name).normalize('NFKD').replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80);
+  return `${stem || 'project'}-report.pdf`;
+}
+
+/**
+ * Prints a report to a PDF the user picks: the standalone document (fonts and stylesheet inline)
+ * in a hidden window with JavaScript off, printed with its CSS page size, then written.
+ */
+async function saveReportPdf(report: ProjectReport): Promise<string | null> {
+  const parent = BrowserWindow.getFocusedWindow();
+  const options = { defaultPath: reportFileName(report), filters: [{ name: 'PDF', extensions: ['pdf'] }] };
+  const choice = parent ? await dialog.showSaveDialog(parent, options) : await dialog.showSaveDialog(options);
+  if (choice.canceled || !choice.filePath) return null;
+  const html = renderReportDocument(report, reportAssets(app.getAppPath()));
+  // A file, not a data: URL: a logo of up to 1 MB would pass Chromium's 2 MB limit on URLs.
+  const folder = await mkdtemp(path.join(app.getPath('temp'), 'lamina-report-'));
+  const printer = new BrowserWindow({
+    show: false,
+    webPreferences: { sandbox: true, contextIsolation: true, javascript: false, nodeIntegration: false, webSecurity: true },
+  });
+  try {
+    const page = path.join(folder, 'report.html');
+    await writeFile(page, html);
+    await printer.loadFile(page);
+    const pdf = await printer.webContents.printToPDF({ preferCSSPageSize: true, printBackground: true });
+    await writeFile(choice.filePath, pdf);
+    return choice.filePath;
+  } finally {
+    printer.destroy();
+    await rm(folder, { recursive: true, force: true });
+  }
+}
+
 /** One ipcMain.handle per channel; the handler's own checks are in operations.ts. */
 function registerIpcHandlers(library: LibraryHost): void {
-  const operations = createOperations({ name: PRODUCT_NAME, version: app.getVersion(), library });
+  const operations = createOperations({ name: PRODUCT_NAME, version: app.getVersion(), library, saveReportPdf });
   for (const channel of API_CHANNELS) {
     ipcMain.handle(channel, async (event, request: unknown): Promise<IpcReply<unknown>> => {
       if (!isTrustedSender(event)) return { ok: false, error: 'Requests from pages other than Lamina are refused.' };

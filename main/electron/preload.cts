@@ -54,6 +54,12 @@ const api: LaminaApi = {
     exportProject: (request) => invoke('projects:export-file', request),
     importProject: (request) => invoke('projects:import-file', request),
     addDemo: (request) => invoke('projects:add-demo', request),
+    report: (request) => invoke('projects:report', request),
+    saveReportPdf: (request) => invoke('projects:save-report-pdf', request),
+  },
+  settings: {
+    letterhead: (request) => invoke('settings:letterhead', request),
+    saveLetterhead: (request) => invoke('settings:save-letterhead', request),
   },
   backups: {
     list: (request) => invoke('backups:list', request),
