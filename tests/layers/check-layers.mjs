@@ -4,7 +4,7 @@
  *
  *   app/       imports only app/ and data/*.json: no package at all (so no node:*, electron,
  *              better-sqlite3, svelte, chart.js), and uses no DOM global (window, document, ...).
- *   renderer/  may import app/, data files (*.json, *.csv?raw) and packages, but not main/ and not Node (node:*, built-ins,
+ *   renderer/  may import app/, data files (*.json, *.csv?raw, *.css) and packages, but not main/ and not Node (node:*, built-ins,
  *              electron, better-sqlite3).
  *   main/      may not import renderer/.
  *   data/      holds data files only, no code.
@@ -105,7 +105,7 @@ function checkFile(root, layer, file, relativeFile) {
     } else if (layer === 'renderer') {
       if (isNode || NODE_SIDE_PACKAGES.has(specifier.split('/')[0])) {
         report(index, `renderer/ may not import Node-side modules, but this file imports "${specifier}".`);
-      } else if (isRelative && target !== 'renderer' && target !== 'app' && !(target === 'data' && /\.(json|csv\?raw)$/.test(specifier))) {
+      } else if (isRelative && target !== 'renderer' && target !== 'app' && !(target === 'data' && /\.(json|csv\?raw|css)$/.test(specifier))) {
         report(index, `renderer/ may import only renderer/, app/ and data files, but this file imports "${specifier}".`);
       }
     } else if (layer === 'main' && target === 'renderer') {

@@ -39,6 +39,14 @@ export function letterheadFieldOf(serverField: string | undefined): LetterheadFi
   return parts.find((part): part is LetterheadField => (LETTERHEAD_FIELDS as readonly string[]).includes(part));
 }
 
+/**
+ * A refusal in the words of the form: the Node side names the field by its request key
+ * ("firmName must be at most 200 characters long."), the screen by its label ("Firm name must …").
+ */
+export function inFormWords(field: LetterheadField, message: string): string {
+  return message.startsWith(`${field} `) ? `${LETTERHEAD_LABELS[field]}${message.slice(field.length)}` : message;
+}
+
 /** The media type of a chosen file: its own type, else its extension (some systems give SVG no type). */
 export function logoMediaTypeOf(file: { readonly name: string; readonly type: string }): LetterheadLogo['mediaType'] | undefined {
   if ((LOGO_MEDIA_TYPES as readonly string[]).includes(file.type)) return file.type as LetterheadLogo['mediaType'];
@@ -121,7 +129,7 @@ export class LetterheadSettings {
       return true;
     } catch (error) {
       const field = letterheadFieldOf(fieldOf(error));
-      if (field) this.refusal = { field, message: messageOf(error) };
+      if (field) this.refusal = { field, message: inFormWords(field, messageOf(error)) };
       else this.notice = { kind: 'refused', text: messageOf(error) };
       return false;
     } finally {

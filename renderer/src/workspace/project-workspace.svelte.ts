@@ -38,6 +38,8 @@ export class ProjectWorkspace {
   renaming = $state<CaseRename | undefined>(undefined);
   /** The case open in the editor, as it was when opened: the editor keeps its own state from there. */
   openCase = $state.raw<ProjectCase | undefined>(undefined);
+  /** The report preview is open in the list's place (like an opened case). */
+  reportOpen = $state(false);
   /** A change in flight: another one pressed meanwhile is ignored, so two moves never cross. */
   busy = $state(false);
   private outcomes: CaseOutcomes | undefined;
