@@ -83,10 +83,10 @@ export function blockHtml(block: ReportBlock, print: PrintText, id: string): str
  * numbered, and the verdict points to it by number.
  */
 export function verdictHtml(v: ReportVerdict, cautionNumber: number | undefined): string {
-  const margin = v.margin ? `<span class="margin">${escapeHtml(v.margin)}</span>` : '';
+  const margin = v.margin ? `: <span class="margin">${escapeHtml(v.margin)}</span>` : '';
   const caution = cautionNumber !== undefined ? ` <span class="caution-ref">See caution ${cautionNumber}.</span>` : '';
   return (
-    `<div class="verdict verdict-${v.verdict}"><p class="verdict-head"><span class="verdict-word">${VERDICT_WORDS[v.verdict]}</span>` +
+    `<div class="verdict verdict-${v.verdict}"><p class="verdict-head"><span class="verdict-word">${VERDICT_WORDS[v.verdict]}</span> ` +
     `<span class="verdict-title">${escapeHtml(v.title)}</span>${margin}</p><p class="reason">${escapeHtml(v.reason)}${caution}</p></div>`
   );
 }

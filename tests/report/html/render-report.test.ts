@@ -75,12 +75,13 @@ describe('renderReportBody of the demo project', () => {
       if (!('report' in c)) throw new Error('every demo case solves');
       for (const v of c.report.verdicts) {
         expect(html).toContain(`<span class="verdict-word verdict-${v.verdict}">${VERDICT_WORDS[v.verdict]}</span> ${escapeHtml(v.title)}`);
-        expect(html).toContain(`<span class="verdict-word">${VERDICT_WORDS[v.verdict]}</span><span class="verdict-title">${escapeHtml(v.title)}</span>`);
-        if (v.margin) expect(html).toContain(`<span class="margin">${escapeHtml(v.margin)}</span>`);
+        expect(html).toContain(`<span class="verdict-word">${VERDICT_WORDS[v.verdict]}</span> <span class="verdict-title">${escapeHtml(v.title)}</span>`);
+        if (v.margin) expect(html).toContain(`${escapeHtml(v.title)}</span>: <span class="margin">${escapeHtml(v.margin)}</span>`);
         expect(text).toContain(v.reason);
       }
     }
     expect(text).toContain('Pass Surface condensation');
+    expect(html).toContain('Surface condensation</span>: <span class="margin">18.6 K above the dew point</span>');
     expect(text).toContain('Review Interstitial condensation (design condition)');
   });
 
