@@ -111,7 +111,7 @@ describe('the client report in browser mode', () => {
     await page.setViewportSize({ width: 1280, height: 720 });
     await page.locator('.lamina-report .case').first().scrollIntoViewIfNeeded();
     await shot(page, 'report-preview-case-1280x720.png');
-    await page.evaluate(() => window.scrollTo(0, 0));
+    await page.evaluate(() => document.getElementById('project-details')?.scrollIntoView({ block: 'start' }));
     await shot(page, 'report-preview-1280x720.png');
 
     // Printed as the browser prints it: the report only, with its page footer.
@@ -123,11 +123,28 @@ describe('the client report in browser mode', () => {
     expect(printedFlat).toContain(FIRM);
     expect(printedFlat).toContain(demo!.client);
     for (const c of cases) expect(printedFlat).toContain(c.name.slice(0, 30));
-    const pages = Number(/Pages:\s+(\d+)/.exec(execFileSync('pdfinfo', [pdfPath], { encoding: 'utf8' }))![1]);
+    const info = execFileSync('pdfinfo', [pdfPath], { encoding: 'utf8' });
+    expect(info).toMatch(/Page size:.*\(A4\)/);
+    const pages = Number(/Pages:\s+(\d+)/.exec(info)![1]);
     expect(pages).toBeGreaterThan(cases.length);
     expect(printedFlat).toContain(`page 1 of ${pages}`);
     expect(printedFlat).toContain(`page ${pages} of ${pages}`);
     expect(printedFlat).toContain(`${demo!.reference} revision ${demo!.revision}`);
+
+    // Letter paper: the preview and the print follow the letterhead's paper size.
+    await page.keyboard.press('Escape');
+    await page.click('#view-settings');
+    await page.selectOption('#letterhead-paper', 'Letter');
+    await page.click('#letterhead-save');
+    await expect.poll(() => services.letterhead.get().paper).toBe('Letter');
+    await page.click('#view-projects');
+    await page.locator('[data-testid="project-row"]').getByRole('button', { name: demo!.name, exact: true }).click();
+    await page.click('#project-report');
+    await page.locator('[data-testid="report-preview"] .lamina-report.paper-letter').waitFor();
+    const letterPath = path.join(resultsFolder, 'report-preview-print-letter.pdf');
+    await page.pdf({ path: letterPath, preferCSSPageSize: true });
+    // Letter is 8.5 × 11 in, 612 × 792 points (ANSI/ASME Y14.1).
+    expect(execFileSync('pdfinfo', [letterPath], { encoding: 'utf8' })).toMatch(/Page size:\s+612(\.\d+)? x 792(\.\d+)? pts \(letter\)/);
 
     // Escape returns to the workspace, the focus on the button that opened the preview, the footer gone.
     await page.keyboard.press('Escape');
