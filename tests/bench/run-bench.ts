@@ -5,7 +5,8 @@
  *  1. median solve time of a 3-layer wall and of a 2-layer pipe with temperature-dependent
  *     conductivity and a surface-temperature-dependent film (convection + radiation);
  *  2. time per unknown from 1e3 to 1e6 nodes (linear growth shows as a flat column);
- *  3. the band solver against ml-matrix's dense LU on the same tridiagonal systems (n = 250, 500, 1000).
+ *  3. the band solver against ml-matrix's dense LU on the same tridiagonal systems (n = 250, 500, 1000);
+ *  4. a 40-case project's report to PDF in Chromium (report-bench.ts).
  */
 import { execFileSync } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
@@ -16,6 +17,7 @@ import { solveCase } from '../../app/index.js';
 import { caseContext } from '../../main/cases/case-context.js';
 import { BandedMatrix, solveBanded, solveSteady, type SteadyProblem } from '../../app/fe/index.js';
 import { outerSurfaceExchange } from '../../app/physics/index.js';
+import { reportBench } from './report-bench.js';
 
 function median(values: number[]): number {
   const s = [...values].sort((a, b) => a - b);
@@ -145,3 +147,6 @@ for (const n of [250, 500, 1000]) {
   const denseMs = time(() => new LuDecomposition(dense).solve(Matrix.columnVector(rhs)), 1500, 30);
   console.log(`   ${String(n).padStart(6)}   ${fmt(bandMs).padStart(11)}   ${fmt(denseMs).padStart(15)}   ${(denseMs / bandMs).toFixed(0).padStart(10)}×`);
 }
+
+console.log('');
+await reportBench();
