@@ -61,7 +61,7 @@ describe('browser mode', () => {
     // A new library holds no project here (the server is started without the demo), so the list says so.
     await expect.poll(() => page.locator('[data-testid="projects-empty"]').count()).toBe(1);
     expect(await page.getAttribute('#view-projects', 'aria-current')).toBe('page');
-    expect(await page.locator('nav.views button').allTextContents()).toEqual(['Projects', 'Materials library', 'Backups']);
+    expect(await page.locator('nav.views button').allTextContents()).toEqual(['Projects', 'Materials library', 'Backups', 'Report letterhead']);
     expect(await page.textContent('body')).not.toMatch(/NaN|undefined|Infinity/);
     await page.screenshot({ path: path.join(resultsFolder, 'browser-mode.png'), fullPage: true });
     expect(problems).toEqual([]);
