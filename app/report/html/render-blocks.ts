@@ -5,6 +5,7 @@
  * is written through the project's QuantityText (print-text.ts).
  */
 import type { ReportBlock, ReportCell, ReportChart, ReportFigure, ReportTable, ReportVerdict } from '../report-model.js';
+import { tableCellTexts } from '../format-quantity.js';
 import { escapeHtml } from './escape-html.js';
 import type { PrintText } from './print-text.js';
 import { VERDICT_WORDS } from './report-words.js';
@@ -28,9 +29,10 @@ export function tableHtml(table: ReportTable, print: PrintText): string {
   const head = table.columns
     .map((c, j) => `<th scope="col"${numeric[j] ? ' class="num"' : ''}>${escapeHtml(print.labelWithUnit(c.label, c.quantity))}</th>`)
     .join('');
-  const cell = (value: ReportCell): string => (typeof value === 'string' ? value : print.number(value.value, value.quantity));
+  // Each column in one notation, as on screen and in the text report (format-quantity tableCellTexts).
+  const cells = tableCellTexts(table, print.text.system);
   const rows = table.rows
-    .map((row) => `<tr>${row.map((c, j) => `<td${typeof c === 'string' && !numeric[j] ? '' : ' class="num"'}>${escapeHtml(cell(c))}</td>`).join('')}</tr>`)
+    .map((row, r) => `<tr>${row.map((c, j) => `<td${typeof c === 'string' && !numeric[j] ? '' : ' class="num"'}>${escapeHtml(cells[r]![j]!)}</td>`).join('')}</tr>`)
     .join('');
   // A short table is kept on one page, its caption with it; a long one runs on with its header repeated.
   const short = table.rows.length <= SHORT_TABLE_ROWS ? ' short-table' : '';

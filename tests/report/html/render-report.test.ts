@@ -114,6 +114,19 @@ describe('renderReportBody of the demo project', () => {
     expect(html).toContain('<th scope="col" class="num">Thickness (mm)</th>');
   });
 
+  it('writes each table column in one notation (the warm-deck roof: its monthly change all in "× 10ⁿ")', () => {
+    expect(html).toContain('<td class="num">5.78 × 10⁻⁵</td>');
+    expect(html).toContain('<td class="num">1.34 × 10⁻⁴</td><td class="num">0.000134</td>');
+    for (const t of html.match(/<table[\s\S]*?<\/table>/g) ?? []) {
+      const rows = [...t.matchAll(/<tr>([\s\S]*?)<\/tr>/g)].slice(1).map((r) => [...r[1]!.matchAll(/<td class="num">([^<]*)<\/td>/g)].map((c) => c[1]!));
+      const columns = Math.max(0, ...rows.map((r) => r.length));
+      for (let j = 0; j < columns; j++) {
+        const forms = new Set(rows.map((r) => r[j]).filter((c): c is string => c !== undefined && /\d/.test(c) && c !== '0').map((c) => c.includes('× 10')));
+        expect(forms.size).toBeLessThanOrEqual(1);
+      }
+    }
+  });
+
   it('has no style attribute, no script and no event handler', () => {
     expect(html).not.toMatch(/\sstyle=/i);
     expect(html).not.toMatch(/<script/i);
