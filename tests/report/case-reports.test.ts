@@ -141,7 +141,7 @@ describe('pipe reports', () => {
     // 300 °C limit (the example's material data) − the 180 °C hot face of the first layer.
     const hottest = result.layers[1]!.innerTemperature;
     expect(report.verdicts[2]!.margin).toBe(`${(300 - hottest).toFixed(1)} K below the upper service limit of insulation layer 1 (Rock wool pipe section (demo))`);
-    expect(report.subject).toMatch(/^Horizontal pipe, 168\.3 × 7\.1 mm Carbon steel \(demo\) \(NPS 6\)/);
+    expect(report.subject).toMatch(/^Horizontal pipe, 168\.3 × 7\.1 mm of Carbon steel \(demo\) \(NPS 6\)/);
     expect(report.sources.some((s) => s.startsWith('Pipe size NPS 6 from the steel-asme table'))).toBe(true);
   });
 });

@@ -75,13 +75,13 @@ export function flatReport(input: FlatSurfaceInput, result: FlatSurfaceResult, e
   };
 }
 
-/** "Vertical surface 6 m high, 150 m²; wall 8.0 mm Carbon steel; insulation 100.0 mm Rock wool; …". */
+/** "Vertical surface 6 m high, 150 m²; wall 8.0 mm of Carbon steel; insulation 100.0 mm of Rock wool; …" ("of": see the pipe subject). */
 function subjectOf(input: FlatSurfaceInput, text: QuantityText): string {
   const s = input.surface;
   const shape = s.kind === 'vertical' ? `Vertical surface ${text.figure(s.height, 'length')} high` : `Horizontal surface facing ${s.facing}`;
-  const wall = input.wall ? `; wall ${text.figure(input.wall.thickness, 'thickness')} ${input.wall.material.name}` : '';
-  const insulation = input.layers.map((l) => `${text.figure(l.thickness, 'thickness')} ${l.material.name}`).join(' + ');
-  const jacket = input.jacket ? `; jacket ${text.figure(input.jacket.thickness, 'thickness')} ${input.jacket.material.name}` : '; no jacket';
+  const wall = input.wall ? `; wall ${text.figure(input.wall.thickness, 'thickness')} of ${input.wall.material.name}` : '';
+  const insulation = input.layers.map((l) => `${text.figure(l.thickness, 'thickness')} of ${l.material.name}`).join(' + ');
+  const jacket = input.jacket ? `; jacket ${text.figure(input.jacket.thickness, 'thickness')} of ${input.jacket.material.name}` : '; no jacket';
   const exposure = input.ambient.exposure.kind === 'outdoor' ? `outdoors in ${text.figure(input.ambient.exposure.windSpeed, 'windSpeed')} wind` : 'indoors in still air';
   return `${shape}, ${text.figure(input.area, 'area')}${wall}; insulation ${insulation}${jacket}; ${exposure}.`;
 }

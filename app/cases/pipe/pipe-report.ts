@@ -94,12 +94,16 @@ export function pipeReport(input: PipeInput & { readonly pipeSize?: PipeSize | n
   };
 }
 
-/** "Horizontal pipe, 168.3 × 7.1 mm Carbon steel; insulation 60.0 mm Rock wool; …; outdoors in 5.0 m/s wind". */
+/**
+ * "Horizontal pipe, 168.3 × 7.1 mm of Carbon steel; insulation 60.0 mm of Rock wool; …; outdoors in 5.0 m/s wind".
+ * "of" after each thickness: in US units the unit "in" would otherwise read as a preposition
+ * ("1.969 in Rock wool").
+ */
 function subjectOf(input: PipeInput, size: PipeSize | null, text: QuantityText): string {
-  const pipe = `${text.number(input.pipe.outerDiameter, 'diameter')} × ${text.figure(input.pipe.wallThickness, 'thickness')} ${input.pipe.material.name}`;
+  const pipe = `${text.number(input.pipe.outerDiameter, 'diameter')} × ${text.figure(input.pipe.wallThickness, 'thickness')} of ${input.pipe.material.name}`;
   const named = size ? ` (${sizeName(size)})` : '';
-  const insulation = input.layers.map((l) => `${text.figure(l.thickness, 'thickness')} ${l.material.name}`).join(' + ');
-  const jacket = input.jacket ? `; jacket ${text.figure(input.jacket.thickness, 'thickness')} ${input.jacket.material.name}` : '; no jacket';
+  const insulation = input.layers.map((l) => `${text.figure(l.thickness, 'thickness')} of ${l.material.name}`).join(' + ');
+  const jacket = input.jacket ? `; jacket ${text.figure(input.jacket.thickness, 'thickness')} of ${input.jacket.material.name}` : '; no jacket';
   const exposure = input.ambient.exposure.kind === 'outdoor' ? `outdoors in ${text.figure(input.ambient.exposure.windSpeed, 'windSpeed')} wind` : 'indoors in still air';
   return `${input.orientation === 'vertical' ? 'Vertical' : 'Horizontal'} pipe, ${pipe}${named}; insulation ${insulation}${jacket}; ${exposure}.`;
 }
