@@ -23,7 +23,7 @@ const HELP = `lamina — heat loss, surface temperatures and condensation checks
 usage:
   lamina solve CASE.json [--format json|text] [--db PATH]   solve a case file and print the result
   lamina materials list|show|import|export ...              the materials library (see lamina materials --help)
-  lamina projects list|export|import ...                    projects (see lamina projects --help)
+  lamina projects list|export|import|add-demo ...           projects (see lamina projects --help)
   lamina projects report ID --out FILE.pdf|FILE.html        print a project's report (PDF through Electron or Chromium)
   lamina --version
 

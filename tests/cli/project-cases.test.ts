@@ -112,4 +112,17 @@ describe('lamina projects create / add-case / solve', () => {
     expect(replace.stdout).toMatch(/ it replaces is in the recycle bin\.\n$/);
     expect(lamina('projects', 'import', file, '--on-existing', 'merge').stderr).toMatch(/onExisting must be one of 'copy', 'replace'/);
   });
+
+  it('adds the demo project as the app does, every case of it solvable', () => {
+    const added = lamina('projects', 'add-demo');
+    expect(added.code).toBe(0);
+    const [, id, name, count] = /^Added the demo project (\d+) "(.+)" with (\d+) case\(s\)\.\n$/.exec(added.stdout)!;
+    // data/demo/demo-project.json: the invented creamery project of the examples.
+    expect(name).toBe('Orrin Valley Creamery (demo)');
+    expect(Number(count)).toBeGreaterThanOrEqual(6);
+    const solved = lamina('projects', 'solve', id!);
+    expect(solved.code).toBe(0);
+    expect(JSON.parse(solved.stdout).cases).toHaveLength(Number(count));
+    expect(lamina('projects', 'add-demo', 'extra').code).toBe(2);
+  });
 });

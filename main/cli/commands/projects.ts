@@ -7,6 +7,7 @@ import { projectFileFromJson, projectFileToJson } from '../../services/project-f
 import { parseArgs, withServices } from './materials.js';
 import { solveProject } from './project-solve.js';
 import { projectsReportCommand } from './project-report.js';
+import { addDemoProject } from '../../services/demo-project.js';
 import { EXIT_BAD_INPUT, exitCodeOf, isInputProblem } from '../exit-code.js';
 
 function caseTitle(inputs: unknown): string | undefined {
@@ -20,12 +21,13 @@ function caseTitle(inputs: unknown): string | undefined {
  * lamina projects import FILE.json [--on-existing copy|replace]   (when the same project is already there)
  * lamina projects create NAME [--client TEXT] [--site TEXT] [--reference TEXT] [--engineer TEXT]
  * lamina projects add-case ID CASE.json [--name NAME]   (a case file; materials inline or by library id)
+ * lamina projects add-demo                              (the demo project of data/demo, as the app adds it)
  * lamina projects solve ID [--format json|text]          (recomputes every case from its stored inputs)
  * lamina projects report ID --out FILE.pdf|FILE.html [--paper A4|Letter]   (the printed report)
  * Every form accepts --db PATH (else LAMINA_DB, else the per-system default).
  */
 const USAGE =
-  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | solve ID [--format json|text] | report ID --out FILE.pdf|FILE.html [--paper A4|Letter] [--db PATH]';
+  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | add-demo | solve ID [--format json|text] | report ID --out FILE.pdf|FILE.html [--paper A4|Letter] [--db PATH]';
 
 const CREATE_FIELDS = ['client', 'site', 'reference', 'engineer'] as const;
 
@@ -121,6 +123,16 @@ export const projectsCommand: CliCommand = async (args, io) => {
         }
       });
     }
+    case 'add-demo':
+      if (parsed.positional.length > 0) {
+        io.stderr(`projects add-demo takes no arguments. ${USAGE}\n`);
+        return EXIT_BAD_INPUT;
+      }
+      return withServices(io, db, ({ projects }) => {
+        const demo = addDemoProject(projects);
+        io.stdout(`Added the demo project ${demo.id} "${demo.name}" with ${demo.cases.length} case(s).\n`);
+        return 0;
+      });
     case 'solve': {
       const id = parsed.positional[0];
       const format = parsed.options.get('format') ?? 'json';
