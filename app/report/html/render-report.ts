@@ -11,7 +11,7 @@
 import type { CaseReport } from '../report-model.js';
 import type { ProjectReport, ReportedCase, SummaryLine } from '../project-report.js';
 import { blockHtml, figuresHtml, verdictHtml } from './render-blocks.js';
-import { escapeHtml } from './escape-html.js';
+import { escapeAttribute, escapeHtml } from './escape-html.js';
 import { printText, type PrintText } from './print-text.js';
 import { VERDICT_WORDS, kindWords } from './report-words.js';
 
@@ -46,7 +46,7 @@ export function renderReportDocument(report: ProjectReport, assets: ReportAssets
   return (
     `<!doctype html>\n<html lang="en"><head><meta charset="utf-8">` +
     `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; img-src data:; font-src data:; style-src 'unsafe-inline'">` +
-    `<meta name="color-scheme" content="light"><title>${escapeHtml(title)}</title>` +
+    `<meta name="color-scheme" content="light"><title>${escapeAttribute(title)}</title>` +
     `<style>${assets.css}\n:root { --lamina-footer: ${cssString(report.footer)}; }</style></head>` +
     `<body class="lamina-report-document">${renderReportBody(report)}</body></html>\n`
   );
@@ -59,7 +59,7 @@ export function cssString(text: string): string {
 
 function coverHtml(report: ProjectReport): string {
   const { letterhead: l, project: p } = report;
-  const logo = l.logo ? `<img class="logo" src="data:${escapeHtml(l.logo.mediaType)};base64,${l.logo.base64.replace(/[^A-Za-z0-9+/=]/g, '')}" alt="${escapeHtml(l.firmName ? `Logo of ${l.firmName}` : 'Logo')}">` : '';
+  const logo = l.logo ? `<img class="logo" src="data:${escapeAttribute(l.logo.mediaType)};base64,${l.logo.base64.replace(/[^A-Za-z0-9+/=]/g, '')}" alt="${escapeAttribute(l.firmName ? `Logo of ${l.firmName}` : 'Logo')}">` : '';
   const address = l.address.split(/\r?\n/).map((line) => line.trim()).filter(Boolean).map(escapeHtml).join('<br>');
   const contact = [l.telephone.trim() ? `Telephone ${l.telephone.trim()}` : '', l.email.trim() ? `E-mail ${l.email.trim()}` : ''].filter(Boolean);
   const firm = [
@@ -137,7 +137,7 @@ function caseHtml(c: ReportedCase, i: number, count: number, print: PrintText, c
   }
   r.sections.forEach((s, si) => {
     const blocks = s.blocks.map((b, bi) => blockHtml(b, print, `lamina-report-case${i + 1}-s${si + 1}-b${bi + 1}`)).join('');
-    parts.push(`<section class="case-part section-${escapeHtml(s.id)}"><h3>${escapeHtml(s.heading)}</h3>${blocks}</section>`);
+    parts.push(`<section class="case-part section-${escapeAttribute(s.id)}"><h3>${escapeHtml(s.heading)}</h3>${blocks}</section>`);
   });
   parts.push(energyBalanceHtml(r, print));
   const lists: [string, string, readonly string[]][] = [

@@ -9,7 +9,7 @@ import { spreadLabels } from '../drawing/label-spread.js';
 import { seriesStyles, type PointShape, type SeriesStyle } from '../drawing/series-styles.js';
 import type { ReportChart } from '../report-model.js';
 import { niceAxis, scaleOf, tickText, type Axis } from './chart-axis.js';
-import { escapeHtml } from './escape-html.js';
+import { escapeAttribute, escapeHtml, escapeSvgText } from './escape-html.js';
 import type { PrintText } from './print-text.js';
 
 export const CHART_WIDTH = 640;
@@ -55,20 +55,18 @@ export function chartSvg(chart: ReportChart, print: PrintText): string {
   const xTitle = print.labelWithUnit(capitalise(chart.x.label), categories ? undefined : chart.x.quantity);
   const yTitle = print.labelWithUnit(capitalise(chart.y.label), chart.y.quantity);
 
+  // The grid and the ticks are one path each, and each tick label a plain <text>: a chart prints as
+  // a few dozen elements, not hundreds, which keeps a long report quick to print.
   const parts: string[] = [];
+  const grid = yAxis.ticks.map((t) => `M${PLOT.left} ${n(yOf(t))}H${PLOT.right}`).join('');
+  const tickMarks = xTicks.map((t) => `M${n(t.at)} ${PLOT.bottom}v5`).join('');
+  parts.push(`<path class="grid" d="${grid}" fill="none" stroke="${RULE}" stroke-width="0.7"/>`);
+  parts.push(`<path class="ticks" d="${tickMarks}" fill="none" stroke="${SOFT}" stroke-width="0.8"/>`);
   for (const t of yAxis.ticks) {
-    const y = n(yOf(t));
-    parts.push(
-      `<g class="tick y" data-value="${t}"><line x1="${PLOT.left}" y1="${y}" x2="${PLOT.right}" y2="${y}" stroke="${RULE}" stroke-width="0.7"/>` +
-        `<text x="${PLOT.left - 6}" y="${n(yOf(t) + 3.8)}" text-anchor="end">${escapeHtml(tickText(t, yAxis.decimals))}</text></g>`,
-    );
+    parts.push(`<text class="tick y" data-value="${t}" x="${PLOT.left - 6}" y="${n(yOf(t) + 3.8)}" text-anchor="end">${escapeSvgText(tickText(t, yAxis.decimals))}</text>`);
   }
   for (const t of xTicks) {
-    const x = n(t.at);
-    parts.push(
-      `<g class="tick x"><line x1="${x}" y1="${PLOT.bottom}" x2="${x}" y2="${PLOT.bottom + 5}" stroke="${SOFT}" stroke-width="0.8"/>` +
-        `<text x="${x}" y="${PLOT.bottom + 18}" text-anchor="middle">${escapeHtml(t.text)}</text></g>`,
-    );
+    parts.push(`<text class="tick x" x="${n(t.at)}" y="${PLOT.bottom + 18}" text-anchor="middle">${escapeSvgText(t.text)}</text>`);
   }
   parts.push(`<rect class="frame" x="${PLOT.left}" y="${top}" width="${PLOT.right - PLOT.left}" height="${PLOT.bottom - top}" fill="none" stroke="${SOFT}" stroke-width="0.8"/>`);
 
@@ -86,16 +84,16 @@ export function chartSvg(chart: ReportChart, print: PrintText): string {
     const style = styles[i]!;
     const dash = style.dash.length > 0 ? ` stroke-dasharray="${style.dash.join(' ')}"` : '';
     const line = points.map(([x, y]) => `${n(xOf(x))},${n(yOf(y))}`).join(' ');
-    const shapes = shapesAlong(points.map(([x, y]) => [xOf(x), yOf(y)] as const)).map(([x, y]) => pointShape(style, x, y));
+    const shapes = pointShapes(style, shapesAlong(points.map(([x, y]) => [xOf(x), yOf(y)] as const)));
     parts.push(
-      `<g class="series" data-series="${i}"><polyline points="${line}" fill="none" stroke="${style.colour}" stroke-width="${style.width}" stroke-linejoin="round"${dash}/>${shapes.join('')}</g>`,
+      `<g class="series" data-series="${i}"><polyline points="${line}" fill="none" stroke="${style.colour}" stroke-width="${style.width}" stroke-linejoin="round"${dash}/>${shapes}</g>`,
     );
   });
 
-  parts.push(`<text class="axis-title" x="${n((PLOT.left + PLOT.right) / 2)}" y="${CHART_HEIGHT - 14}" text-anchor="middle">${escapeHtml(xTitle)}</text>`);
+  parts.push(`<text class="axis-title" x="${n((PLOT.left + PLOT.right) / 2)}" y="${CHART_HEIGHT - 14}" text-anchor="middle">${escapeSvgText(xTitle)}</text>`);
   const middle = n((top + PLOT.bottom) / 2);
   const yLines = besideTheAxis(yTitle);
-  const yText = yLines.map((line, k) => `<tspan x="-${middle}" dy="${k === 0 ? 0 : 13}">${escapeHtml(line)}</tspan>`).join('');
+  const yText = yLines.map((line, k) => `<tspan x="-${middle}" dy="${k === 0 ? 0 : 13}">${escapeSvgText(line)}</tspan>`).join('');
   // Turned a quarter anticlockwise about the origin: (x, y) of the text is (−page y, page x).
   parts.push(`<text class="axis-title" transform="rotate(-90)" x="-${middle}" y="${yLines.length > 1 ? 12 : 18}" text-anchor="middle">${yText}</text>`);
 
@@ -109,7 +107,7 @@ export function chartSvg(chart: ReportChart, print: PrintText): string {
     : '';
   return (
     `<figure class="chart"><figcaption><span class="chart-title">${escapeHtml(chart.title)}</span>${markerWords}</figcaption>` +
-    `<svg class="chart-plot" viewBox="0 0 ${CHART_WIDTH} ${CHART_HEIGHT}" width="100%" role="img" aria-label="${escapeHtml(chart.title)}" font-size="11" fill="${INK}">${parts.join('')}</svg>` +
+    `<svg class="chart-plot" viewBox="0 0 ${CHART_WIDTH} ${CHART_HEIGHT}" width="100%" role="img" aria-label="${escapeAttribute(chart.title)}" font-size="11" fill="${INK}">${parts.join('')}</svg>` +
     `<ul class="chart-legend">${legend}</ul></figure>`
   );
 }
@@ -135,32 +133,33 @@ function shapesAlong(points: readonly (readonly [number, number])[]): (readonly 
   return shown;
 }
 
-/** A point's shape at (x, y), in the series' colour; the crosses are strokes, the others filled. */
-function pointShape(style: SeriesStyle, x: number, y: number): string {
+/**
+ * A series' point shapes as one <path> in its colour (data-shape names the shape): the crosses
+ * stroked, the others filled; a circle is two arcs.
+ */
+function pointShapes(style: SeriesStyle, at: readonly (readonly [number, number])[]): string {
+  if (at.length === 0) return '';
   const r = POINT_RADIUS;
-  const paint = `fill="${style.colour}" stroke="${style.colour}" stroke-width="0.8"`;
-  const stroke = `fill="none" stroke="${style.colour}" stroke-width="1.4"`;
-  const path = (d: string, how: string) => `<path d="${d}" ${how}/>`;
-  const shapes: Record<PointShape, () => string> = {
-    circle: () => `<circle cx="${n(x)}" cy="${n(y)}" r="${r}" ${paint}/>`,
-    rect: () => `<rect x="${n(x - r * 0.9)}" y="${n(y - r * 0.9)}" width="${n(1.8 * r)}" height="${n(1.8 * r)}" ${paint}/>`,
-    triangle: () => path(`M ${n(x)} ${n(y - 1.15 * r)} L ${n(x + r)} ${n(y + 0.75 * r)} L ${n(x - r)} ${n(y + 0.75 * r)} Z`, paint),
-    rectRot: () => path(`M ${n(x)} ${n(y - 1.2 * r)} L ${n(x + 1.2 * r)} ${n(y)} L ${n(x)} ${n(y + 1.2 * r)} L ${n(x - 1.2 * r)} ${n(y)} Z`, paint),
-    crossRot: () => path(`M ${n(x - r)} ${n(y - r)} L ${n(x + r)} ${n(y + r)} M ${n(x - r)} ${n(y + r)} L ${n(x + r)} ${n(y - r)}`, stroke),
-    star: () =>
-      path(
-        `M ${n(x - r)} ${n(y)} L ${n(x + r)} ${n(y)} M ${n(x)} ${n(y - r)} L ${n(x)} ${n(y + r)} M ${n(x - 0.7 * r)} ${n(y - 0.7 * r)} L ${n(x + 0.7 * r)} ${n(y + 0.7 * r)} M ${n(x - 0.7 * r)} ${n(y + 0.7 * r)} L ${n(x + 0.7 * r)} ${n(y - 0.7 * r)}`,
-        stroke,
-      ),
+  const outline: Record<PointShape, (x: number, y: number) => string> = {
+    circle: (x, y) => `M${n(x - r)} ${n(y)}a${r} ${r} 0 1 0 ${n(2 * r)} 0a${r} ${r} 0 1 0 ${n(-2 * r)} 0Z`,
+    rect: (x, y) => `M${n(x - r * 0.9)} ${n(y - r * 0.9)}h${n(1.8 * r)}v${n(1.8 * r)}h${n(-1.8 * r)}Z`,
+    triangle: (x, y) => `M${n(x)} ${n(y - 1.15 * r)}L${n(x + r)} ${n(y + 0.75 * r)}L${n(x - r)} ${n(y + 0.75 * r)}Z`,
+    rectRot: (x, y) => `M${n(x)} ${n(y - 1.2 * r)}L${n(x + 1.2 * r)} ${n(y)}L${n(x)} ${n(y + 1.2 * r)}L${n(x - 1.2 * r)} ${n(y)}Z`,
+    crossRot: (x, y) => `M${n(x - r)} ${n(y - r)}L${n(x + r)} ${n(y + r)}M${n(x - r)} ${n(y + r)}L${n(x + r)} ${n(y - r)}`,
+    star: (x, y) =>
+      `M${n(x - r)} ${n(y)}L${n(x + r)} ${n(y)}M${n(x)} ${n(y - r)}L${n(x)} ${n(y + r)}` +
+      `M${n(x - 0.7 * r)} ${n(y - 0.7 * r)}L${n(x + 0.7 * r)} ${n(y + 0.7 * r)}M${n(x - 0.7 * r)} ${n(y + 0.7 * r)}L${n(x + 0.7 * r)} ${n(y - 0.7 * r)}`,
   };
-  return shapes[style.point]();
+  const stroked = style.point === 'crossRot' || style.point === 'star';
+  const paint = stroked ? `fill="none" stroke="${style.colour}" stroke-width="1.4"` : `fill="${style.colour}" stroke="${style.colour}" stroke-width="0.8"`;
+  return `<path class="points" data-shape="${style.point}" d="${at.map(([x, y]) => outline[style.point](x, y)).join('')}" ${paint}/>`;
 }
 
 function legendSwatch(style: SeriesStyle): string {
   const dash = style.dash.length > 0 ? ` stroke-dasharray="${style.dash.join(' ')}"` : '';
   return (
     `<svg class="swatch" viewBox="0 0 40 12" width="40" height="12" aria-hidden="true">` +
-    `<line x1="1" y1="6" x2="39" y2="6" stroke="${style.colour}" stroke-width="${style.width}"${dash}/>${pointShape(style, 20, 6)}</svg>`
+    `<line x1="1" y1="6" x2="39" y2="6" stroke="${style.colour}" stroke-width="${style.width}"${dash}/>${pointShapes(style, [[20, 6]])}</svg>`
   );
 }
 

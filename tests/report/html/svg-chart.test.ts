@@ -23,10 +23,20 @@ function lineThrough(a: readonly [number, number], b: readonly [number, number])
   return (v) => a[1] + ((v - a[0]) * (b[1] - a[1])) / (b[0] - a[0]);
 }
 
-/** The y ticks (value, y) and x ticks (label, x) as the SVG draws them. */
+/**
+ * The y ticks (value, y) and x ticks (label, x) as the SVG draws them: the grid path has one
+ * horizontal "M x y H x" per y tick and the tick path one "M x y v 5" per x tick, in the order of
+ * their labels.
+ */
 function ticks(svg: string) {
-  const y = [...svg.matchAll(/<g class="tick y" data-value="([^"]+)"><line x1="[^"]+" y1="([^"]+)"/g)].map((m) => [Number(m[1]), Number(m[2])] as const);
-  const x = [...svg.matchAll(/<g class="tick x"><line x1="([^"]+)"[^>]*\/><text[^>]*>([^<]+)<\/text>/g)].map((m) => [m[2]!, Number(m[1])] as const);
+  const values = [...svg.matchAll(/<text class="tick y" data-value="([^"]+)"/g)].map((m) => Number(m[1]));
+  const gridYs = [...(/<path class="grid" d="([^"]*)"/.exec(svg)?.[1] ?? '').matchAll(/M[^ ]+ ([^H]+)H/g)].map((m) => Number(m[1]));
+  const labels = [...svg.matchAll(/<text class="tick x"[^>]*>([^<]+)<\/text>/g)].map((m) => m[1]!);
+  const tickXs = [...(/<path class="ticks" d="([^"]*)"/.exec(svg)?.[1] ?? '').matchAll(/M([^ ]+) /g)].map((m) => Number(m[1]));
+  expect(gridYs.length).toBe(values.length);
+  expect(tickXs.length).toBe(labels.length);
+  const y = values.map((v, k) => [v, gridYs[k]!] as const);
+  const x = labels.map((label, k) => [label, tickXs[k]!] as const);
   return { y, x };
 }
 
@@ -71,7 +81,7 @@ describe('chartSvg', () => {
 
   it('dashes the reference series, keeps the first solid, and gives each its own point shape and a legend entry', () => {
     expect(profile.series.map((s) => Boolean(s.reference))).toEqual([false, true]);
-    const series = [...svg.matchAll(/<g class="series" data-series="\d"><polyline [^>]*?\/>(<(circle|rect|path)[^>]*>)/g)];
+    const series = [...svg.matchAll(/<g class="series" data-series="\d"><polyline [^>]*?\/>(<path class="points" data-shape="([^"]+)" d="M[^"]+"[^>]*>)/g)];
     expect(series.length).toBe(2);
     expect(series[0]![0]).not.toContain('stroke-dasharray');
     expect(series[1]![0]).toContain('stroke-dasharray="6 4"');
@@ -146,6 +156,6 @@ describe('a chart without points', () => {
     const svg = chartSvg(empty, printText('SI'));
     expect(svg).not.toContain('NaN');
     expect(svg).not.toContain('Infinity');
-    expect(svg).toContain('<g class="tick y"');
+    expect(svg).toContain('<text class="tick y"');
   });
 });

@@ -3,6 +3,8 @@
  * (app/report/drawing/cross-section-layout): the same band edges and ring radii, to scale; its
  * fills read in greyscale (lightness or pattern tells every category apart); no style attribute.
  */
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { crossSectionLayout } from '../../../app/report/drawing/cross-section-layout.js';
 import { BORE_FILL, CATEGORY_FILLS } from '../../../app/report/drawing/material-palette.js';
@@ -67,6 +69,29 @@ describe('crossSectionSvg', () => {
         const apart = Math.abs(luminance(a.colour) - luminance(b.colour)) >= 0.05 || a.pattern !== b.pattern;
         expect(apart, `${a.label} and ${b.label}`).toBe(true);
       }
+    }
+  });
+});
+
+describe('the key swatches (spans the print stylesheet paints)', () => {
+  const css = readFileSync(path.resolve(import.meta.dirname, '../../../data/report/report-print.css'), 'utf8');
+
+  it('has a rule for every fill, in the fill’s own colour, and no <svg> per swatch', () => {
+    const fills: [string, string][] = [...Object.entries(CATEGORY_FILLS).map(([c, f]) => [c, f.colour] as [string, string]), ['bore', BORE_FILL.colour]];
+    for (const [name, colour] of fills) {
+      const rule = new RegExp(`\\.swatch\\.fill-${name} \\{[^}]*${colour}`);
+      expect(css, name).toMatch(rule);
+    }
+    const wall = sections().find((s) => s.geometry === 'plane')!;
+    const svg = crossSectionSvg(wall, printText('SI'), 'w');
+    expect(svg).not.toContain('<svg class="swatch"');
+    expect(svg).toContain(`<span class="swatch fill-${wall.layers[0]!.category}" aria-hidden="true"></span>`);
+  });
+
+  it('draws the patterns as marks inside their layer, with no <pattern> and no opacity', () => {
+    for (const s of sections()) {
+      const svg = crossSectionSvg(s, printText('SI'), 'm');
+      expect(svg).not.toMatch(/<pattern|opacity=/);
     }
   });
 });
