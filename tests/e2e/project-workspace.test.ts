@@ -18,7 +18,7 @@ import { caseContext } from '../../main/cases/case-context.js';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import type { LaminaServices } from '../../main/services/lamina-services.js';
 import { blankCaseInputs } from '../../renderer/src/workspace/blank-cases.js';
-import { VERDICT_WORDS } from '../../renderer/src/report-view/verdict-words.js';
+import { VERDICT_WORDS } from '../../app/report/report-words.js';
 import { projectRoot, resultsFolder, useBrowserSession } from './browser-session.js';
 
 const session = useBrowserSession('lamina-workspace-e2e-');

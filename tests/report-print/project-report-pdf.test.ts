@@ -13,7 +13,7 @@ import { solveCase } from '../../app/cases/solve-case.js';
 import { quantityText } from '../../app/base/quantity-text.js';
 import type { UnitSystem } from '../../app/base/unit-systems.js';
 import { GENERAL_CAUTION } from '../../app/report/general-caution.js';
-import { VERDICT_WORDS } from '../../app/report/html/report-words.js';
+import { VERDICT_WORDS } from '../../app/report/report-words.js';
 import { caseContext } from '../../main/cases/case-context.js';
 import { openLamina, type LaminaServices } from '../../main/services/lamina-services.js';
 import { addDemoProject } from '../../main/services/demo-project.js';

@@ -8,7 +8,7 @@ import type { ReportBlock, ReportCell, ReportChart, ReportFigure, ReportTable, R
 import { tableCellTexts } from '../format-quantity.js';
 import { escapeHtml } from './escape-html.js';
 import type { PrintText } from './print-text.js';
-import { VERDICT_WORDS } from './report-words.js';
+import { VERDICT_WORDS } from '../report-words.js';
 import { chartSvg } from './svg-chart.js';
 import { crossSectionSvg } from './svg-cross-section.js';
 

@@ -13,7 +13,7 @@ import type { ProjectReport, ReportedCase, SummaryLine } from '../project-report
 import { blockHtml, figuresHtml, verdictHtml } from './render-blocks.js';
 import { escapeAttribute, escapeHtml } from './escape-html.js';
 import { printText, type PrintText } from './print-text.js';
-import { VERDICT_WORDS, kindWords } from './report-words.js';
+import { VERDICT_WORDS, kindWords } from '../report-words.js';
 
 /** Printed among the cautions where the report uses the demo's invented materials or climates. */
 export const DEMO_DATA_CAUTION =

@@ -1,5 +1,6 @@
 /** How projects and cases read on screen: moments of change and kinds of case. */
 import type { CaseKind } from '../../../app/api/contract.js';
+import { KIND_WORDS, kindWords } from '../../../app/report/report-words.js';
 
 const changeFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -10,13 +11,10 @@ export function describeMoment(iso: string | null): string {
   return Number.isFinite(date.getTime()) ? changeFormat.format(date) : '–';
 }
 
-export const CASE_KIND_LABELS: Readonly<Record<CaseKind, string>> = {
-  pipe: 'Pipe run',
-  flat: 'Flat surface',
-  wall: 'Wall or roof',
-};
+/** The kinds a user adds from the app, in the words of app/report/report-words. */
+export const CASE_KIND_LABELS: Readonly<Record<CaseKind, string>> = { pipe: KIND_WORDS['pipe']!, flat: KIND_WORDS['flat']!, wall: KIND_WORDS['wall']! };
 
 /** The kind of a stored case, read defensively: inputs are versioned JSON that a later version may extend. */
 export function describeCaseKind(kind: unknown): string {
-  return typeof kind === 'string' && kind in CASE_KIND_LABELS ? CASE_KIND_LABELS[kind as CaseKind] : 'Other';
+  return kindWords(typeof kind === 'string' ? kind : '');
 }

@@ -9,7 +9,7 @@ import { quantityText } from '../../../app/base/quantity-text.js';
 import { solveCase } from '../../../app/cases/solve-case.js';
 import { renderReportBody, renderReportDocument, cssString } from '../../../app/report/html/render-report.js';
 import { escapeHtml } from '../../../app/report/html/escape-html.js';
-import { VERDICT_WORDS } from '../../../app/report/html/report-words.js';
+import { VERDICT_WORDS } from '../../../app/report/report-words.js';
 import { caseContext } from '../../../main/cases/case-context.js';
 import { DEMO, demoCases, demoReport, demoStoredCases } from './demo-report.js';
 

@@ -1,8 +1,9 @@
 /**
- * The words the printed report names kinds of case and verdicts with: the screen's words (the
- * case list's kinds, the report view's verdicts), so paper and screen read alike.
+ * The words kinds of case and verdicts are named with, on screen and on paper alike (the case list,
+ * the case editor, the report view and the printed report). The plain-text report keeps its own
+ * capitals for its fixed verdict column.
  */
-import type { CheckVerdict } from '../../checks/check-result.js';
+import type { CheckVerdict } from '../checks/check-result.js';
 
 export const VERDICT_WORDS: Readonly<Record<CheckVerdict, string>> = {
   pass: 'Pass',
@@ -11,7 +12,7 @@ export const VERDICT_WORDS: Readonly<Record<CheckVerdict, string>> = {
   'not-applicable': 'Does not apply',
 };
 
-const KIND_WORDS: Readonly<Record<string, string>> = {
+export const KIND_WORDS: Readonly<Record<string, string>> = {
   pipe: 'Pipe run',
   flat: 'Flat surface',
   wall: 'Wall or roof',
