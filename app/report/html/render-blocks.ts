@@ -65,7 +65,7 @@ function chartFiguresHtml(chart: ReportChart, print: PrintText): string {
   return tables.map((t) => tableHtml(t, print)).join('');
 }
 
-export function blockHtml(block: ReportBlock, print: PrintText, id: string): string {
+export function blockHtml(block: ReportBlock, print: PrintText): string {
   switch (block.kind) {
     case 'figures':
       return figuresHtml(block.figures, print);
@@ -76,7 +76,7 @@ export function blockHtml(block: ReportBlock, print: PrintText, id: string): str
     case 'chart':
       return chartSvg(block.chart, print) + chartFiguresHtml(block.chart, print);
     case 'cross-section':
-      return crossSectionSvg(block.crossSection, print, id);
+      return crossSectionSvg(block.crossSection, print);
   }
 }
 

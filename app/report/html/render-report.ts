@@ -135,8 +135,8 @@ function caseHtml(c: ReportedCase, i: number, count: number, print: PrintText, c
     const verdicts = r.verdicts.map((v) => verdictHtml(v, v.caution ? cautions.indexOf(v.caution) + 1 || undefined : undefined)).join('');
     parts.push(`<section class="case-part checks"><h3>Checks</h3>${verdicts}</section>`);
   }
-  r.sections.forEach((s, si) => {
-    const blocks = s.blocks.map((b, bi) => blockHtml(b, print, `lamina-report-case${i + 1}-s${si + 1}-b${bi + 1}`)).join('');
+  r.sections.forEach((s) => {
+    const blocks = s.blocks.map((b) => blockHtml(b, print)).join('');
     parts.push(`<section class="case-part section-${escapeAttribute(s.id)}"><h3>${escapeHtml(s.heading)}</h3>${blocks}</section>`);
   });
   parts.push(energyBalanceHtml(r, print));

@@ -16,8 +16,7 @@ import type { PrintText } from './print-text.js';
 const INK = '#1f2429';
 const SOFT = '#56606a';
 
-/** `id` names the drawing in the document (kept for callers; the drawing has no ids of its own now). */
-export function crossSectionSvg(section: ReportCrossSection, print: PrintText, id: string): string {
+export function crossSectionSvg(section: ReportCrossSection, print: PrintText): string {
   const layout = crossSectionLayout(section, { withUnit: (value, quantity) => print.withUnit(value, quantity) });
   const parts: string[] = [];
   const edge = `fill="none" stroke="${INK}" stroke-width="0.8"`;

@@ -31,7 +31,7 @@ describe('crossSectionSvg', () => {
   it('draws a plane build-up with the band edges of the shared layout', () => {
     const wall = sections().find((s) => s.geometry === 'plane')!;
     const layout = crossSectionLayout(wall, print);
-    const svg = crossSectionSvg(wall, print, 'w');
+    const svg = crossSectionSvg(wall, print);
     const rects = [...svg.matchAll(/<rect x="([^"]+)" y="[^"]+" width="([^"]+)" height="[^"]+" fill="#/g)].map((m) => [Number(m[1]), Number(m[2])]);
     expect(rects.length).toBe(layout.layers.length);
     layout.layers.forEach((l, i) => {
@@ -45,7 +45,7 @@ describe('crossSectionSvg', () => {
   it('draws a pipe as rings round the bore at the layout radii, the bore to scale with them', () => {
     const pipe = sections().find((s) => s.geometry === 'cylinder')!;
     const layout = crossSectionLayout(pipe, print);
-    const svg = crossSectionSvg(pipe, print, 'p');
+    const svg = crossSectionSvg(pipe, print);
     const radii = [...svg.matchAll(/<circle cx="[^"]+" cy="[^"]+" r="([^"]+)" fill="none"/g)].map((m) => Number(m[1]));
     for (const l of layout.layers) expect(radii.some((r) => Math.abs(r - l.to) < 0.006)).toBe(true);
     expect(radii.some((r) => Math.abs(r - layout.bore!.radius) < 0.006)).toBe(true);
@@ -54,7 +54,7 @@ describe('crossSectionSvg', () => {
 
   it('keys every layer by number, name and thickness, and names each fill in the legend', () => {
     for (const s of sections()) {
-      const svg = crossSectionSvg(s, print, 'k');
+      const svg = crossSectionSvg(s, print);
       s.layers.forEach((l, i) => expect(svg).toContain(`<span class="layer-number">${i + 1}</span><span>${l.name.replace(/&/g, '&amp;')}, `));
       for (const category of new Set(s.layers.map((l) => l.category))) expect(svg).toContain(`<span>${CATEGORY_FILLS[category].label}</span>`);
       expect(svg).not.toMatch(/\sstyle=/);
@@ -83,14 +83,14 @@ describe('the key swatches (spans the print stylesheet paints)', () => {
       expect(css, name).toMatch(rule);
     }
     const wall = sections().find((s) => s.geometry === 'plane')!;
-    const svg = crossSectionSvg(wall, printText('SI'), 'w');
+    const svg = crossSectionSvg(wall, printText('SI'));
     expect(svg).not.toContain('<svg class="swatch"');
     expect(svg).toContain(`<span class="swatch fill-${wall.layers[0]!.category}" aria-hidden="true"></span>`);
   });
 
   it('draws the patterns as marks inside their layer, with no <pattern> and no opacity', () => {
     for (const s of sections()) {
-      const svg = crossSectionSvg(s, printText('SI'), 'm');
+      const svg = crossSectionSvg(s, printText('SI'));
       expect(svg).not.toMatch(/<pattern|opacity=/);
     }
   });
