@@ -6,6 +6,7 @@
 import type { QuantityName } from '../../../app/base/quantities.js';
 import type { NumberRange } from '../../../app/base/number-range.js';
 import { fromDisplay, toDisplay, unitLabel, type UnitSystem } from '../../../app/base/unit-systems.js';
+import { quantityText } from '../../../app/base/quantity-text.js';
 
 /**
  * Digits a box shows: six, as a hint does, so that a converted value reads as a person would write
@@ -25,8 +26,7 @@ export function boxText(stored: number, quantity: QuantityName, system: UnitSyst
  * 32.8084 ft") and nothing is stored from them, so they need not round-trip.
  */
 export function hintValue(stored: number, quantity: QuantityName, system: UnitSystem): string {
-  const unit = unitLabel(quantity, system);
-  return `${formatBound(Number(toDisplay(stored, quantity, system).toPrecision(6)))}${unit ? ` ${unit}` : ''}`;
+  return quantityText(system).entered(stored, quantity);
 }
 
 export type TextReading = { readonly ok: true; readonly value: number } | { readonly ok: false; readonly message: string };
@@ -52,15 +52,9 @@ export function storedValueFor(text: string, current: number | undefined, quanti
 
 /** "Allowed −100 to 200 °C" in the project's units (a range's open ends say "above" and "below"). */
 export function rangeHint(range: NumberRange, quantity: QuantityName, system: UnitSystem): string {
-  const unit = unitLabel(quantity, system);
-  const low = Number(toDisplay(range.min, quantity, system).toPrecision(6));
-  const high = Number(toDisplay(range.max, quantity, system).toPrecision(6));
-  const from = range.minExclusive ? `above ${formatBound(low)}` : formatBound(low);
-  const to = range.maxExclusive ? `below ${formatBound(high)}` : formatBound(high);
+  const text = quantityText(system);
+  const unit = text.unit(quantity);
+  const from = range.minExclusive ? `above ${text.enteredNumber(range.min, quantity)}` : text.enteredNumber(range.min, quantity);
+  const to = range.maxExclusive ? `below ${text.enteredNumber(range.max, quantity)}` : text.enteredNumber(range.max, quantity);
   return `Allowed ${from} to ${to}${unit ? ` ${unit}` : ''}`;
-}
-
-function formatBound(value: number): string {
-  const text = Math.abs(value) >= 1e5 ? value.toExponential().replace('e+', 'e') : String(value);
-  return text.replace(/^-/, '−');
 }
