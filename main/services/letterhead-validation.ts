@@ -5,13 +5,12 @@
  * handler, no embedded HTML, no reference to anything outside itself (the report is offline and
  * must look the same on a colleague's machine).
  */
+import { LETTERHEAD_LIMITS, MAX_LOGO_BYTES } from '../../app/api/letterhead-limits.js';
 import { InputError } from '../../app/index.js';
 import { LOGO_MEDIA_TYPES, PAPER_SIZES, type Letterhead, type LetterheadLogo } from '../../app/report/project-report.js';
 import { optionalText, rejectUnknownKeys, requireObject, requireOneOf } from './validate.js';
 
-export const LETTERHEAD_LIMITS = { firmName: 200, address: 500, telephone: 60, email: 200 } as const;
-/** The largest logo file accepted, in bytes (1 MiB). */
-export const MAX_LOGO_BYTES = 1_048_576;
+export { LETTERHEAD_LIMITS, MAX_LOGO_BYTES };
 
 const LETTERHEAD_KEYS = ['firmName', 'address', 'telephone', 'email', 'logo', 'paper'] as const;
 

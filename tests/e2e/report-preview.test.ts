@@ -16,6 +16,7 @@ import type { Page } from 'playwright-core';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import type { LaminaServices } from '../../main/services/lamina-services.js';
 import { resultsFolder, useBrowserSession } from './browser-session.js';
+import { MAX_LOGO_BYTES } from '../../app/api/letterhead-limits.js';
 
 const session = useBrowserSession('lamina-report-preview-e2e-');
 let server: BrowserServer;
@@ -75,6 +76,12 @@ describe('the client report in browser mode', () => {
     expect(await focusedId(page)).toBe('letterhead-logo');
     expect(services.letterhead.get().firmName).toBe('');
     await shot(page, 'report-settings-refused-1366x800.png');
+
+    // A file over 1 MB is refused in the page, before it is read or sent (the service's own limit).
+    const large = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), Buffer.alloc(MAX_LOGO_BYTES)]);
+    await page.setInputFiles('#letterhead-logo', { name: 'large.png', mimeType: 'image/png', buffer: large });
+    await expect.poll(() => page.locator('#letterhead-logo-error').textContent()).toBe(`Logo must be at most 1 MB (${MAX_LOGO_BYTES} bytes); large.png is ${MAX_LOGO_BYTES + 8} bytes.`);
+    expect(await page.locator('#letterhead-firmName').getAttribute('maxlength')).toBe('200');
 
     await page.setInputFiles('#letterhead-logo', { name: 'brackwater.svg', mimeType: 'image/svg+xml', buffer: Buffer.from(CLEAN_LOGO) });
     await expect.poll(() => page.locator('#letterhead-logo-error').count()).toBe(0);

@@ -6,6 +6,7 @@
  */
 import type { Letterhead, LetterheadLogo, PaperSize } from '../../../app/api/contract.js';
 import { LOGO_MEDIA_TYPES, PAPER_SIZES } from '../../../app/report/project-report.js';
+import { MAX_LOGO_BYTES } from '../../../app/api/letterhead-limits.js';
 import { fieldOf, laminaApi, messageOf } from '../bridge/lamina-api.js';
 
 export const LETTERHEAD_FIELDS = ['firmName', 'address', 'telephone', 'email', 'paper', 'logo'] as const;
@@ -100,6 +101,10 @@ export class LetterheadSettings {
     const mediaType = logoMediaTypeOf(file);
     if (!mediaType) {
       this.refusal = { field: 'logo', message: `Logo must be a PNG, JPEG or SVG image; ${file.name} is none of these.` };
+      return;
+    }
+    if (file.size > MAX_LOGO_BYTES) {
+      this.refusal = { field: 'logo', message: `Logo must be at most 1 MB (${MAX_LOGO_BYTES} bytes); ${file.name} is ${file.size} bytes.` };
       return;
     }
     try {
