@@ -6,6 +6,7 @@
  * writeShownSentence), and the path it opens with is replaced by the words the form uses for that
  * field ("Thickness of layer 1"). A path the form has no words for is left as the engine wrote it.
  */
+import { openedWithName } from '../shared/named-refusal.js';
 import { boundedMessage } from '../../../app/base/input-error.js';
 import { writeShownSentence, type Sentence } from '../../../app/base/quantity-sentence.js';
 import { quantityText } from '../../../app/base/quantity-text.js';
@@ -48,6 +49,5 @@ export function fieldName(kind: CaseKindName, doc: Json, path: string): string |
 export function refusalText(field: string | undefined, sentence: Sentence, system: UnitSystem, kind: CaseKindName, doc: Json): string {
   const written = writeShownSentence(sentence, quantityText(system));
   const name = field === undefined ? undefined : fieldName(kind, doc, field);
-  const named = name !== undefined && field !== undefined && written.startsWith(`${field} `) ? `${name}${written.slice(field.length)}` : written;
-  return boundedMessage(named);
+  return boundedMessage(openedWithName(written, field, name));
 }

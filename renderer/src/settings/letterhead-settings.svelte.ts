@@ -8,6 +8,7 @@ import type { Letterhead, LetterheadLogo, PaperSize } from '../../../app/api/con
 import { LOGO_MEDIA_TYPES, PAPER_SIZES } from '../../../app/report/project-report.js';
 import { MAX_LOGO_BYTES } from '../../../app/api/letterhead-limits.js';
 import { fieldOf, laminaApi, messageOf } from '../bridge/lamina-api.js';
+import { openedWithName } from '../shared/named-refusal.js';
 
 export const LETTERHEAD_FIELDS = ['firmName', 'address', 'telephone', 'email', 'paper', 'logo'] as const;
 export type LetterheadField = (typeof LETTERHEAD_FIELDS)[number];
@@ -45,7 +46,7 @@ export function letterheadFieldOf(serverField: string | undefined): LetterheadFi
  * ("firmName must be at most 200 characters long."), the screen by its label ("Firm name must …").
  */
 export function inFormWords(field: LetterheadField, message: string): string {
-  return message.startsWith(`${field} `) ? `${LETTERHEAD_LABELS[field]}${message.slice(field.length)}` : message;
+  return openedWithName(message, field, LETTERHEAD_LABELS[field]);
 }
 
 /** The media type of a chosen file: its own type, else its extension (some systems give SVG no type). */
