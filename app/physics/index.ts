@@ -100,3 +100,22 @@ export {
   vapourConcentration,
   vapourPressureFromConcentration,
 } from './humidity.js';
+
+export { complex, type Complex } from './complex-number.js';
+export {
+  layerMatrix,
+  resistanceMatrix,
+  multiplyMatrices,
+  periodicPenetrationDepth,
+  type HeatTransferMatrix,
+  type StoringLayer,
+} from './heat-transfer-matrix.js';
+export {
+  periodicResponse,
+  elementMatrix,
+  DAILY_PERIOD,
+  type PeriodicElement,
+  type PeriodicLayer,
+  type PeriodicFigure,
+  type PeriodicResponse,
+} from './periodic-response.js';
