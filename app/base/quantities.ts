@@ -68,6 +68,23 @@ export const QUANTITIES = {
    */
   ventOpeningPerLength: { unit: 'mm²/m', precision: { decimals: 0 } },
   ventOpeningPerArea: { unit: 'mm²/m²', precision: { decimals: 0 } },
+  /**
+   * Sizing (app/cases/sizing). Money is in the currency the case's economics name and is never
+   * converted, so its kinds carry no unit: a label names the currency. Costs to 4 significant
+   * figures, so that neighbouring thicknesses' lifecycle costs still differ in print.
+   */
+  money: { unit: '', precision: { significant: 4 } },
+  moneyPerYear: { unit: '', precision: { significant: 4 } },
+  /** A price per kWh of energy, in the currency of the economics. */
+  pricePerEnergy: { unit: '', precision: { significant: 3 } },
+  /** kg of CO₂ emitted per year, and per kWh of fuel or electricity. */
+  emissionsPerYear: { unit: 'kg/a', precision: { significant: 3 } },
+  emissionFactor: { unit: 'kg/kWh', precision: { significant: 3 } },
+  massFlow: { unit: 'kg/s', precision: { significant: 3 } },
+  /** A yearly rate (escalation, discount), stored as a fraction, read in per cent. */
+  ratePerYear: { unit: '%/a', precision: { significant: 3 } },
+  /** A dimensionless multiplier (present-value and annuity factors, an efficiency or COP). */
+  factor: { unit: '', precision: { significant: 4 } },
 } as const satisfies Record<string, QuantityKind>;
 
 export type QuantityName = keyof typeof QUANTITIES;
@@ -89,4 +106,5 @@ export const DISPLAY_SCALE: Partial<Record<QuantityName, number>> = {
   timeHours: 1 / 3600,
   energyPerArea: 1e-3,
   energyPerLength: 1e-3,
+  ratePerYear: 100,
 };

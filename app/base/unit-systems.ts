@@ -25,7 +25,10 @@
  *   amount in the same unit; wind in mph;
  * - the vent opening area of a ventilated air layer in in²/ft (vertical layer) or in²/ft²
  *   (horizontal layer), the US way of stating net free vent area per length or area of a cavity;
- * - times, relative humidity and dimensionless numbers as in SI.
+ * - CO₂ in lb/yr, and its emission factor in lb/MWh, the unit US grid emission figures are
+ *   published in; mass flow in lb/h; yearly rates in %/yr;
+ * - times, relative humidity, money (never converted: its currency is the case's) and
+ *   dimensionless numbers as in SI.
  * Every factor comes from app/base/us-customary-units, derived there from the exact definitions.
  */
 import { DISPLAY_SCALE, QUANTITIES, type Precision, type QuantityName } from './quantities.js';
@@ -95,6 +98,14 @@ const US_CUSTOMARY = {
   specificHeat: { unit: 'Btu/(lb·°F)', precision: sig(3), storedPerShown: U.btuPerPoundFahrenheit },
   ventOpeningPerLength: { unit: 'in²/ft', precision: sig(3), storedPerShown: U.squareInchPerFootInSquareMillimetresPerMetre },
   ventOpeningPerArea: { unit: 'in²/ft²', precision: sig(3), storedPerShown: U.squareInchPerSquareFootInSquareMillimetresPerSquareMetre },
+  money: AS_IN_SI,
+  moneyPerYear: AS_IN_SI,
+  pricePerEnergy: AS_IN_SI,
+  emissionsPerYear: { unit: 'lb/yr', precision: sig(3), storedPerShown: U.pound },
+  emissionFactor: { unit: 'lb/MWh', precision: sig(3), storedPerShown: U.poundPerMegawattHourInKilogramsPerKilowattHour },
+  massFlow: { unit: 'lb/h', precision: sig(3), storedPerShown: U.poundPerHour },
+  ratePerYear: { unit: '%/yr', precision: sig(3), storedPerShown: 0.01 },
+  factor: AS_IN_SI,
 } as const satisfies Record<QuantityName, UsCustomaryUnit | typeof AS_IN_SI>;
 
 /** The US unit of a kind, or null where the kind shows as in SI. */

@@ -77,6 +77,12 @@ export const US_UNITS = {
   btuPerPoundFahrenheit: BTU / (POUND * FAHRENHEIT_DEGREE),
   /** m/s */
   milePerHour: MILE / HOUR,
+  /** kg */
+  pound: POUND,
+  /** kg/s */
+  poundPerHour: POUND / HOUR,
+  /** kg/kWh: a pound of CO₂ per megawatt-hour, the unit of US grid emission factors. */
+  poundPerMegawattHourInKilogramsPerKilowattHour: POUND / 1000,
   /** mm²/m, the unit vent openings per length are stored in: a square inch per foot of length. */
   squareInchPerFootInSquareMillimetresPerMetre: (INCH ** 2 * MM2_PER_M2) / FOOT,
   /** mm²/m², the unit vent openings per area are stored in: a square inch per square foot of area (1/144). */

@@ -90,7 +90,7 @@ describe('the unit systems', () => {
   });
 
   it('times, humidity and dimensionless numbers read alike in both systems', () => {
-    const alike: QuantityName[] = ['relativeHumidity', 'temperatureFactor', 'emissivity', 'relativeResidual', 'count', 'time', 'hours', 'timeMinutes', 'timeHours'];
+    const alike: QuantityName[] = ['relativeHumidity', 'temperatureFactor', 'emissivity', 'relativeResidual', 'count', 'time', 'hours', 'timeMinutes', 'timeHours', 'money', 'moneyPerYear', 'pricePerEnergy', 'factor'];
     for (const quantity of alike) {
       expect(unitLabel(quantity, 'IP')).toBe(unitLabel(quantity, 'SI'));
       expect(toDisplay(0.85, quantity, 'IP')).toBe(toDisplay(0.85, quantity, 'SI'));
@@ -132,6 +132,10 @@ describe('the unit systems', () => {
       specificHeat: 'Btu/(lb·°F)',
       ventOpeningPerLength: 'in²/ft',
       ventOpeningPerArea: 'in²/ft²',
+      emissionsPerYear: 'lb/yr',
+      emissionFactor: 'lb/MWh',
+      massFlow: 'lb/h',
+      ratePerYear: '%/yr',
     });
   });
 

@@ -47,6 +47,12 @@ describe('US customary factors against NIST SP 811 (2008), Appendix B', () => {
     expect(printed(oneUnit('density'), 7)).toBe(16.01846);
     // NIST SP 811 B.9: pound per square foot (lb/ft²) → kg/m² 4.882 428 E+00 (from memory)
     expect(printed(oneUnit('massPerArea'), 7)).toBe(4.882428);
+    // NIST SP 811 B.8: pound (avoirdupois) → kg 4.535 924 E-01 (exact 0.453 592 37); pound per
+    // hour → kg/s 1.259 979 E-04 (from memory).
+    expect(oneUnit('emissionsPerYear')).toBe(0.45359237);
+    expect(printed(oneUnit('massFlow'), 7)).toBe(1.259979e-4);
+    // lb/MWh → kg/kWh: a pound per thousand kWh, no entry of its own in SP 811.
+    expect(oneUnit('emissionFactor')).toBeCloseTo(0.45359237 / 1000, 15);
   });
 
   it('lengths, areas, energy and speed', () => {
