@@ -85,6 +85,15 @@ export const QUANTITIES = {
   ratePerYear: { unit: '%/a', precision: { significant: 3 } },
   /** A dimensionless multiplier (present-value and annuity factors, an efficiency or COP). */
   factor: { unit: '', precision: { significant: 4 } },
+  /**
+   * Dynamic thermal characteristics (ISO 13786): a periodic thermal transmittance or admittance
+   * (complex amplitude ratio, shown as its modulus), the decrement factor |Y_ie|/U, and an areal
+   * heat capacity, stored in J/(m²·K) and read in kJ/(m²·K) as the standard states it. Their time
+   * shifts are timeHours.
+   */
+  thermalAdmittance: { unit: 'W/(m²·K)', precision: { significant: 3 } },
+  decrementFactor: { unit: '', precision: { decimals: 3 } },
+  arealHeatCapacity: { unit: 'kJ/(m²·K)', precision: { significant: 3 } },
 } as const satisfies Record<string, QuantityKind>;
 
 export type QuantityName = keyof typeof QUANTITIES;
@@ -107,4 +116,5 @@ export const DISPLAY_SCALE: Partial<Record<QuantityName, number>> = {
   energyPerArea: 1e-3,
   energyPerLength: 1e-3,
   ratePerYear: 100,
+  arealHeatCapacity: 1e-3,
 };

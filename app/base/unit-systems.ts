@@ -27,6 +27,8 @@
  *   (horizontal layer), the US way of stating net free vent area per length or area of a cavity;
  * - CO₂ in lb/yr, and its emission factor in lb/MWh, the unit US grid emission figures are
  *   published in; mass flow in lb/h; yearly rates in %/yr;
+ * - periodic thermal transmittance and admittances (ISO 13786) in Btu/(h·ft²·°F) like a U-value, and
+ *   areal heat capacity in Btu/(ft²·°F), the heat-capacity-per-area unit of US envelope data;
  * - times, relative humidity, money (never converted: its currency is the case's) and
  *   dimensionless numbers as in SI.
  * Every factor comes from app/base/us-customary-units, derived there from the exact definitions.
@@ -106,6 +108,9 @@ const US_CUSTOMARY = {
   massFlow: { unit: 'lb/h', precision: sig(3), storedPerShown: U.poundPerHour },
   ratePerYear: { unit: '%/yr', precision: sig(3), storedPerShown: 0.01 },
   factor: AS_IN_SI,
+  thermalAdmittance: { unit: 'Btu/(h·ft²·°F)', precision: sig(3), storedPerShown: U.btuPerHourSquareFootFahrenheit },
+  decrementFactor: AS_IN_SI,
+  arealHeatCapacity: { unit: 'Btu/(ft²·°F)', precision: sig(3), storedPerShown: U.btuPerSquareFootFahrenheit },
 } as const satisfies Record<QuantityName, UsCustomaryUnit | typeof AS_IN_SI>;
 
 /** The US unit of a kind, or null where the kind shows as in SI. */

@@ -63,6 +63,8 @@ export const US_UNITS = {
   btuPerSquareFoot: BTU / SQUARE_FOOT,
   /** J/m */
   btuPerFoot: BTU / FOOT,
+  /** J/(m²·K): an areal heat capacity, Btu/(ft²·°F). */
+  btuPerSquareFootFahrenheit: BTU / (SQUARE_FOOT * FAHRENHEIT_DEGREE),
   /** kWh: a thousand Btu in the kilowatt-hours annual energy is stored in. */
   kiloBtuInKilowattHours: (1000 * BTU) / (1000 * HOUR),
   /** Pa */

@@ -90,7 +90,7 @@ describe('the unit systems', () => {
   });
 
   it('times, humidity and dimensionless numbers read alike in both systems', () => {
-    const alike: QuantityName[] = ['relativeHumidity', 'temperatureFactor', 'emissivity', 'relativeResidual', 'count', 'time', 'hours', 'timeMinutes', 'timeHours', 'money', 'moneyPerYear', 'pricePerEnergy', 'factor'];
+    const alike: QuantityName[] = ['relativeHumidity', 'temperatureFactor', 'emissivity', 'relativeResidual', 'count', 'time', 'hours', 'timeMinutes', 'timeHours', 'money', 'moneyPerYear', 'pricePerEnergy', 'factor', 'decrementFactor'];
     for (const quantity of alike) {
       expect(unitLabel(quantity, 'IP')).toBe(unitLabel(quantity, 'SI'));
       expect(toDisplay(0.85, quantity, 'IP')).toBe(toDisplay(0.85, quantity, 'SI'));
@@ -136,6 +136,8 @@ describe('the unit systems', () => {
       emissionFactor: 'lb/MWh',
       massFlow: 'lb/h',
       ratePerYear: '%/yr',
+      thermalAdmittance: 'Btu/(h·ft²·°F)',
+      arealHeatCapacity: 'Btu/(ft²·°F)',
     });
   });
 

@@ -20,6 +20,7 @@ describe('US customary factors against NIST SP 811 (2008), Appendix B', () => {
     expect(printed(oneUnit('uValue'), 7)).toBe(5.678263);
     expect(printed(oneUnit('uValueUnrounded'), 7)).toBe(5.678263);
     expect(printed(oneUnit('filmCoefficient'), 7)).toBe(5.678263);
+    expect(printed(oneUnit('thermalAdmittance'), 7)).toBe(5.678263);
     // NIST SP 811 B.9: Btu_IT·in/(h·ft²·°F) → W/(m·K) 1.442 279 E-01
     expect(printed(oneUnit('conductivity'), 7)).toBe(0.1442279);
     // NIST SP 811 B.9: Btu_IT/h → W 2.930 711 E-01
@@ -104,5 +105,9 @@ describe('US customary factors against NIST SP 811 (2008), Appendix B', () => {
     // A condensation rate is stored in kg/(m²·s) and read per day of 86 400 s.
     close(oneUnit('condensationRate'), pound / foot ** 2 / 86_400);
     close(oneUnit('conductivity'), (btu * inch) / (hour * foot ** 2 * fahrenheit));
+    // An areal heat capacity is stored in J/(m²·K) and read in Btu/(ft²·°F); NIST SP 811 B.8 lists
+    // Btu_IT/ft² → J/m² 1.135 653 E+04 (from memory), and a °F is 5/9 K.
+    close(oneUnit('arealHeatCapacity'), btu / (foot ** 2 * fahrenheit));
+    expect(printed(oneUnit('arealHeatCapacity') * fahrenheit, 7)).toBe(11356.53);
   });
 });
