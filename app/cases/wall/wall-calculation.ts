@@ -7,6 +7,7 @@ import { conductivityAt, isConstantConductivity } from '../../fe/conductivity.js
 import { solveSteady } from '../../fe/steady-solve.js';
 import type { SteadyResult } from '../../fe/result.js';
 import { roundToSignificantFigures, U_VALUE_SIGNIFICANT_FIGURES } from '../../base/significant-figures.js';
+import { wallDynamicCharacteristics } from './wall-dynamic.js';
 import { wallEngineProblem } from './wall-engine-problem.js';
 import type { WallInput } from './wall-input.js';
 import type { WallLayerResult, WallResult } from './wall-result.js';
@@ -104,5 +105,6 @@ export function wallResultOf(input: WallInput, stack: ThermalStack, steady: Stea
     energyBalance: { residual: steady.balance.residual, relativeResidual: steady.balance.relativeResidual },
     ventilation: stack.ventilation,
     profile: { positions: steady.positions, temperatures: steady.temperatures },
+    dynamic: wallDynamicCharacteristics(input, layers, stack.insideSurfaceResistance, stack.outsideSurfaceResistance),
   };
 }

@@ -14,6 +14,7 @@ import { asSentence } from '../../report/as-sentence.js';
 import type { CaseReport, ReportBlock, ReportCell, ReportCrossSection, ReportFigure, ReportSection, ReportTable } from '../../report/report-model.js';
 import { distinctCautions } from '../../report/report-verdicts.js';
 import type { WallAnalysis } from './wall-analysis.js';
+import { dynamicAssumptions, dynamicSections, dynamicSources } from './wall-dynamic-report.js';
 import { isAirLayer, type WallInput } from './wall-input.js';
 import { ventOpeningQuantity } from './vent-opening.js';
 import { conditionPhrase, insideHumidityWords, interstitialSection, monthlySection, mouldSection, wallVerdicts } from './wall-moisture-report.js';
@@ -38,7 +39,7 @@ export function wallReport(input: WallInput, analysis: WallAnalysis, text: Quant
       { label: 'Heat flow through the whole area', value: w.heatFlow, quantity: 'heatFlow' },
     ],
     verdicts,
-    sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis, text), mouldSection(analysis, text), interstitialSection(analysis), ...(monthly ? [monthly] : [])],
+    sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis, text), mouldSection(analysis, text), interstitialSection(analysis), ...(monthly ? [monthly] : []), ...dynamicSections(w, text)],
     energyBalance: withFields(w.energyBalance, { quantity: 'heatFlux' as const }),
     assumptions: assumptionsOf(input, analysis),
     warnings: analysis.warnings.map(asSentence),
@@ -204,6 +205,7 @@ function assumptionsOf(input: WallInput, a: WallAnalysis): string[] {
     'Vapour moves by diffusion only: no air leakage, rain or built-in moisture.',
     ...ventilated,
     ...(input.moisture?.insideHumidity?.kind === 'class' ? [] : ['The inside relative humidity as given holds in every month.']),
+    ...dynamicAssumptions(input, a.wall),
   ].map(asSentence);
 }
 
@@ -224,6 +226,7 @@ function sourcesOf(input: WallInput, a: WallAnalysis, text: QuantityText): strin
     `Saturation pressure: ${iso.source} formulas (${iso.label}).`,
     ...(humidity?.kind === 'class' ? [`Internal humidity classes: ${humidityClasses.source} (${humidityClasses.label}).`] : []),
     ...(input.moisture?.climate ? [`Climate ${input.moisture.climate.name}: ${input.moisture.climate.label}.`] : []),
+    ...dynamicSources(a.wall),
     ...materials,
   ];
 }

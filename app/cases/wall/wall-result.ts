@@ -1,4 +1,5 @@
 /** Results of a wall or roof calculation, as plain data (SI; per m² unless stated). */
+import type { WallDynamicCharacteristics } from './wall-dynamic.js';
 import type { VentilationApplied } from './wall-thermal-stack.js';
 
 export interface WallLayerResult {
@@ -54,4 +55,6 @@ export interface WallResult {
   readonly ventilation: VentilationApplied;
   /** Positions (m from the inside face) and temperatures (°C) of the engine's nodes. */
   readonly profile: { readonly positions: readonly number[]; readonly temperatures: readonly number[] };
+  /** ISO 13786 characteristics for a 24 h cycle; null when a counted layer lacks density or specific heat. */
+  readonly dynamic: WallDynamicCharacteristics | null;
 }
