@@ -85,6 +85,8 @@ export const QUANTITIES = {
   ratePerYear: { unit: '%/a', precision: { significant: 3 } },
   /** A dimensionless multiplier (present-value and annuity factors, an efficiency or COP). */
   factor: { unit: '', precision: { significant: 4 } },
+  /** A part of a whole (the frozen fraction of a pipe's water), stored as a fraction, read in per cent. */
+  fraction: { unit: '%', precision: { decimals: 0 } },
   /**
    * Dynamic thermal characteristics (ISO 13786): a periodic thermal transmittance or admittance
    * (complex amplitude ratio, shown as its modulus), the decrement factor |Y_ie|/U, and an areal
@@ -116,5 +118,6 @@ export const DISPLAY_SCALE: Partial<Record<QuantityName, number>> = {
   energyPerArea: 1e-3,
   energyPerLength: 1e-3,
   ratePerYear: 100,
+  fraction: 100,
   arealHeatCapacity: 1e-3,
 };

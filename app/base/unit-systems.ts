@@ -108,6 +108,7 @@ const US_CUSTOMARY = {
   massFlow: { unit: 'lb/h', precision: sig(3), storedPerShown: U.poundPerHour },
   ratePerYear: { unit: '%/yr', precision: sig(3), storedPerShown: 0.01 },
   factor: AS_IN_SI,
+  fraction: AS_IN_SI,
   thermalAdmittance: { unit: 'Btu/(h·ft²·°F)', precision: sig(3), storedPerShown: U.btuPerHourSquareFootFahrenheit },
   decrementFactor: AS_IN_SI,
   arealHeatCapacity: { unit: 'Btu/(ft²·°F)', precision: sig(3), storedPerShown: U.btuPerSquareFootFahrenheit },
