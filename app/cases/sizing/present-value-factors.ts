@@ -17,11 +17,12 @@
  */
 
 /**
- * x^n − 1 for x = (1 + e)/(1 + i), without the cancellation of `x ** n - 1` when x is near 1:
- * through log1p and expm1, so PV and a stay smooth (and exact in the limit) as e → i or i → 0.
+ * x^n − 1 from x − 1, without the cancellation of `x ** n - 1` when x is near 1: through log1p
+ * and expm1, so PV stays smooth (and exact in the limit) as e → i. x − 1 is written from the
+ * rates, (e − i)/(1 + i), so it keeps its digits where ln(1 + e) − ln(1 + i) would lose them.
  */
-function growthMinusOne(escalation: number, discountRate: number, years: number): number {
-  return Math.expm1(years * (Math.log1p(escalation) - Math.log1p(discountRate)));
+function growthMinusOne(xMinusOne: number, years: number): number {
+  return Math.expm1(years * Math.log1p(xMinusOne));
 }
 
 /**
@@ -31,10 +32,8 @@ function growthMinusOne(escalation: number, discountRate: number, years: number)
  */
 export function presentValueFactor(escalation: number, discountRate: number, years: number): number {
   if (escalation === discountRate) return years;
-  const x = (1 + escalation) / (1 + discountRate);
-  // x − 1 written from the rates, so it keeps its digits when x is close to 1.
   const xMinusOne = (escalation - discountRate) / (1 + discountRate);
-  return (x * growthMinusOne(escalation, discountRate, years)) / xMinusOne;
+  return ((1 + xMinusOne) * growthMinusOne(xMinusOne, years)) / xMinusOne;
 }
 
 /** Capital recovery factor a = i/(1 − (1 + i)^−n); 1/n at i = 0 (the limit). Years > 0. */

@@ -49,7 +49,7 @@ export interface SizingCriteria {
 
 /** The money side, for the cost, CO₂ and lifecycle columns and the economic criterion. */
 export interface SizingEconomics {
-  /** Price of delivered heat (or cooling) energy per kWh at the meter, in the currency unit. */
+  /** Today's price per kWh of purchased energy (the fuel or electricity the efficiency turns into delivered heat or cooling), in the currency unit. */
   readonly energyPrice: number;
   /** Yearly escalation of the energy price, a fraction (0.03 = 3 %/a). */
   readonly priceEscalation: number;
