@@ -63,6 +63,8 @@ export function elementMatrices(
   const xEnd = mesh.positions[firstNode + n - 1]!;
   // Nodes are equally spaced in each element, so the map from ξ to x is affine: d/dx = (1/J)·d/dξ.
   const jacobian = (xEnd - xStart) / 2;
+  // A layer with a phase change stores heat as ρH(T), not ρcT: its steps take their storage term
+  // from phase-change-integrals.ts (see latent-step.ts), never from this capacity.
   const volumetricCapacity = withCapacity ? (layer.density ?? 0) * (layer.specificHeat ?? 0) : 0;
   const generation = layer.heatGeneration ?? 0;
   const variable = layer.conductivity.kind !== 'constant';

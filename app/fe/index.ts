@@ -8,10 +8,12 @@ export type {
   FilmExchange,
   Geometry,
   Layer,
+  PhaseChange,
   SolverOptions,
   SteadyProblem,
   TimeScheme,
   TransientProblem,
+  TransientState,
 } from './problem.js';
 export type {
   EnergyBalance,
@@ -26,5 +28,7 @@ export type {
 export { ConvergenceError, InputError, SingularProblemError } from './errors.js';
 export { solveSteady } from './steady-solve.js';
 export { solveTransient } from './transient-solve.js';
+export type { EnthalpyCurve } from './phase-change.js';
+export { enthalpyCurve, liquidAtMeltingPointTemperature, liquidFraction, specificEnthalpy } from './phase-change.js';
 export { BandedMatrix, solveBanded } from './banded-matrix.js';
 export { ABSOLUTE_ZERO_CELSIUS } from './validate.js';

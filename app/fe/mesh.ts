@@ -4,7 +4,8 @@
  * Each layer is meshed on its own, so every interface is a node. Planar layers are divided
  * evenly; axisymmetric layers are graded geometrically (every element spans the same ratio of
  * radii), which is the spacing that makes the logarithmic temperature profile equally well
- * resolved everywhere. Where two layers have a contact resistance between them, the interface
+ * resolved everywhere. A layer that starts at the axis (r = 0, a solid cylinder) has no logarithmic
+ * part, and no ratio of radii to grade by: its field is smooth and even in r, so it is divided evenly. Where two layers have a contact resistance between them, the interface
  * carries two nodes at the same position joined by a contact conductance.
  */
 import { isConstantConductivity } from './conductivity.js';
@@ -51,6 +52,11 @@ const AXISYMMETRIC_LOG_SPAN = 0.02;
 const CURVED_PROFILE_ELEMENTS = 16;
 /** Fewest elements in a layer of a transient problem, where heat is stored along the layer. */
 const TRANSIENT_MINIMUM_ELEMENTS = 8;
+/**
+ * Elements of a layer from the axis: as many as a curved profile gets; linear elements, which
+ * converge as h² rather than h⁴, four times as many.
+ */
+const AXIS_LAYER_ELEMENTS = { 1: 4 * CURVED_PROFILE_ELEMENTS, 2: CURVED_PROFILE_ELEMENTS } as const;
 
 export type MeshPurpose = 'steady' | 'transient';
 
@@ -70,7 +76,9 @@ export function defaultElementCount(
   const curved = !isConstantConductivity(layer.conductivity) || (layer.heatGeneration ?? 0) !== 0;
   let count = curved ? CURVED_PROFILE_ELEMENTS : 1;
   if (purpose === 'transient') count = Math.max(count, TRANSIENT_MINIMUM_ELEMENTS);
-  if (geometry.kind === 'axisymmetric') {
+  if (geometry.kind === 'axisymmetric' && innerPosition === 0) {
+    count = Math.max(count, AXIS_LAYER_ELEMENTS[order]);
+  } else if (geometry.kind === 'axisymmetric') {
     const logSpan = Math.log((innerPosition + layer.thickness) / innerPosition);
     // Linear elements converge as h², quadratic ones as h⁴: linear ones need a much finer default.
     const perElement = order === 1 ? AXISYMMETRIC_LOG_SPAN / 25 : AXISYMMETRIC_LOG_SPAN;
@@ -148,7 +156,7 @@ function layerVertices(geometry: Geometry, start: number, end: number, count: nu
   const vertices: number[] = [];
   for (let i = 0; i <= count; i++) {
     const s = i / count;
-    vertices.push(geometry.kind === 'planar' ? start + s * (end - start) : start * Math.pow(end / start, s));
+    vertices.push(geometry.kind === 'planar' || start === 0 ? start + s * (end - start) : start * Math.pow(end / start, s));
   }
   vertices[count] = end;
   return vertices;

@@ -10,7 +10,11 @@
  */
 import type { ConductivityModel } from './conductivity.js';
 
-/** Planar: per m² of wall. Axisymmetric: per metre of pipe, inner radius > 0. */
+/**
+ * Planar: per m² of wall. Axisymmetric: per metre of pipe, inner radius > 0; or 0 for a solid
+ * cylinder (a pipe's contents) in a transient problem, whose inner face is then the axis: see
+ * validate.ts.
+ */
 export type Geometry =
   | { readonly kind: 'planar' }
   | { readonly kind: 'axisymmetric'; readonly innerRadius: number };
@@ -30,6 +34,23 @@ export interface Layer {
   readonly contactResistanceToNext?: number;
   /** Override of the number of elements in this layer. */
   readonly elements?: number;
+  /** Latent heat taken up or given off over a narrow temperature range (transient problems; a steady solve stores no heat). */
+  readonly phaseChange?: PhaseChange;
+}
+
+/**
+ * A phase change of a layer's material (water freezing): the latent heat is spread evenly over
+ * `temperature` ± `range`/2, and the layer's `specificHeat` holds above the range (see phase-change.ts).
+ */
+export interface PhaseChange {
+  /** °C, the middle of the range: the freezing (melting) point. */
+  readonly temperature: number;
+  /** J/kg, ≥ 0 (0 leaves only the change of specific heat). */
+  readonly latentHeat: number;
+  /** K, > 0: the width of the range over which the latent heat is released. */
+  readonly range: number;
+  /** J/(kg·K) below the range (the solid); default the layer's specificHeat. */
+  readonly solidSpecificHeat?: number;
 }
 
 /** Coefficient and sink temperature of a film (convection, or convection plus linearised radiation). */
@@ -93,4 +114,20 @@ export interface TransientProblem extends SteadyProblem {
   readonly scheme?: TimeScheme;
   /** Face conditions that change with time (s); when given they replace inner/outer at each step. */
   readonly facesAt?: (time: number) => { readonly inner: FaceCondition; readonly outer: FaceCondition };
+  /**
+   * Checked after every step; returning true ends the run there, before `duration` (which is then
+   * the longest time simulated). For a run that lasts until something happens (a pipe's water has
+   * frozen), so the caller need not guess the duration.
+   */
+  readonly stopWhen?: (state: TransientState) => boolean;
+}
+
+/** The state after a step, as stopWhen sees it. */
+export interface TransientState {
+  /** s */
+  readonly time: number;
+  /** Nodal temperatures, °C. */
+  readonly temperatures: readonly number[];
+  /** Per layer: the mass fraction below its phase change (solid), or null for a layer without one. */
+  readonly solidFraction: readonly (number | null)[];
 }

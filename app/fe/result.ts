@@ -95,7 +95,10 @@ export interface SteadyResult {
 }
 
 export interface TransientEnergyBalance {
-  /** Heat stored in the body between the initial condition and the end, ∫ρc(T_end − T_initial)dV. */
+  /**
+   * Heat stored in the body between the initial condition and the end, ∫ρc(T_end − T_initial)dV, or
+   * ∫ρ(H(T_end) − H(T_initial))dV with the enthalpy H of a layer with a phase change (latent heat included).
+   */
   readonly stored: number;
   /** Net heat in through both faces plus heat generated, integrated over time (including the heat a fixed face puts in at t = 0⁺ when it differs from the initial temperature). */
   readonly netIn: number;
@@ -113,6 +116,11 @@ export interface TransientResult {
   /** Heat entering through each face during each step (step average), W/m² or W/m; one entry per step. */
   readonly heatIn: { readonly inner: readonly number[]; readonly outer: readonly number[] };
   readonly balance: TransientEnergyBalance;
+  /**
+   * Only when a layer has a phase change: at each time, per layer, the mass fraction below the
+   * phase change (solid), or null for a layer without one.
+   */
+  readonly solidFraction?: readonly (readonly (number | null)[])[];
   /** Largest number of nonlinear iterations any step needed. */
   readonly maxIterations: number;
   readonly mesh: MeshSummary;

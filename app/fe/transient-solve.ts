@@ -5,6 +5,11 @@
  * reduced band system solved, and the heat entering each face recovered from the rows set aside,
  * so that the energy balance (heat stored = net heat in) can be reported over the whole run.
  * Temperature-dependent properties are iterated within each step (Picard) with λ taken at Tⁿ⁺θ.
+ *
+ * A layer with a phase change stores heat as ρH(T) (phase-change.ts): its steps are solved in
+ * enthalpy form by Newton's method (latent-step.ts), and the heat stored over the run is taken as
+ * ∫ρ(H(T_end) − H(T_start))dμ, which equals the net heat in to within the iteration tolerance.
+ * Problems without one take the fixed-point path below, unchanged.
  */
 import { assembleSystem } from './assembly.js';
 import { BandedMatrix } from './banded-matrix.js';
@@ -12,6 +17,9 @@ import { discretise, summariseMesh, withFaceConditions, type Discretisation } fr
 import { ConvergenceError } from './errors.js';
 import { applyFaceConditions, naturalHeatIn } from './face-conditions.js';
 import { flowBasisFor } from './measure.js';
+import { latentStep } from './latent-step.js';
+import { hasPhaseChange } from './phase-change.js';
+import { enthalpyChange, solidFractions } from './phase-change-integrals.js';
 import type { TransientProblem } from './problem.js';
 import { solveWithEssentialConditions } from './reduced-solve.js';
 import type { TransientResult } from './result.js';
@@ -33,7 +41,8 @@ export function solveTransient(problem: TransientProblem): TransientResult {
   const theta = (problem.scheme ?? 'crank-nicolson') === 'crank-nicolson' ? 0.5 : 1;
   const tolerance = problem.options?.temperatureTolerance ?? DEFAULT_TEMPERATURE_TOLERANCE;
   const maxIterations = problem.options?.maxIterations ?? DEFAULT_MAX_ITERATIONS;
-  const nonlinear = base.nonlinear || problem.facesAt !== undefined;
+  const latent = base.layers.some(hasPhaseChange);
+  const nonlinear = base.nonlinear || problem.facesAt !== undefined || latent;
   const steps = Math.max(1, Math.ceil(problem.duration / problem.timeStep - 1e-9));
 
   const conditionsAt = (t: number): Discretisation =>
@@ -44,8 +53,10 @@ export function solveTransient(problem: TransientProblem): TransientResult {
   imposeEssential(conditionsAt(0), current);
   const absolute = (excess: Float64Array) => Array.from(excess, (v) => v + base.reference);
 
+  const fractions = (excess: Float64Array) => solidFractions(base.mesh, base.layers, base.measure, excess, base.reference);
   const times = [0];
   const temperatures: number[][] = [absolute(current)];
+  const solidFraction: (number | null)[][] | undefined = latent ? [fractions(current)] : undefined;
   const heatInInner: number[] = [];
   const heatInOuter: number[] = [];
   // A fixed face that differs from the initial temperature jumps at t = 0⁺; the heat that jump
@@ -58,8 +69,8 @@ export function solveTransient(problem: TransientProblem): TransientResult {
     const dt = s === steps - 1 ? problem.duration - time : problem.timeStep;
     const outcome =
       s === 0 && theta < 1
-        ? startupStep(conditionsAt, time, current, dt, nonlinear, tolerance, maxIterations)
-        : step(conditionsAt(time + theta * dt), current, dt, theta, nonlinear, tolerance, maxIterations);
+        ? startupStep(conditionsAt, time, current, dt, nonlinear, latent, tolerance, maxIterations)
+        : step(conditionsAt(time + theta * dt), current, dt, theta, nonlinear, latent, tolerance, maxIterations);
     current = outcome.temperatures;
     time = s === steps - 1 ? problem.duration : time + dt;
     times.push(time);
@@ -68,6 +79,8 @@ export function solveTransient(problem: TransientProblem): TransientResult {
     heatInOuter.push(outcome.heatInOuter);
     netIn += dt * (outcome.heatInInner + outcome.heatInOuter + outcome.generated);
     worstIterations = Math.max(worstIterations, outcome.iterations);
+    if (solidFraction) solidFraction.push(fractions(current));
+    if (problem.stopWhen?.({ time, temperatures: temperatures.at(-1)!, solidFraction: solidFraction?.at(-1) ?? base.layers.map(() => null) })) break;
   }
 
   const stored = storedHeat(base, initial, current);
@@ -80,6 +93,7 @@ export function solveTransient(problem: TransientProblem): TransientResult {
     temperatures,
     heatIn: { inner: heatInInner, outer: heatInOuter },
     balance: { stored, netIn, residual, relativeResidual: scale > 0 ? Math.abs(residual) / scale : 0 },
+    ...(solidFraction ? { solidFraction } : {}),
     maxIterations: worstIterations,
     mesh: summariseMesh(base.mesh),
   };
@@ -113,6 +127,7 @@ function startupStep(
   start: Float64Array,
   dt: number,
   nonlinear: boolean,
+  latent: boolean,
   tolerance: number,
   maxIterations: number,
 ): StepOutcome {
@@ -123,7 +138,7 @@ function startupStep(
   let generated = 0;
   let iterations = 0;
   for (let k = 0; k < STARTUP_SUBSTEPS; k++) {
-    const o = step(conditionsAt(time + (k + 1) * h), temperatures, h, 1, nonlinear, tolerance, maxIterations);
+    const o = step(conditionsAt(time + (k + 1) * h), temperatures, h, 1, nonlinear, latent, tolerance, maxIterations);
     temperatures = o.temperatures;
     inner += o.heatInInner / STARTUP_SUBSTEPS;
     outer += o.heatInOuter / STARTUP_SUBSTEPS;
@@ -139,9 +154,11 @@ function step(
   dt: number,
   theta: number,
   nonlinear: boolean,
+  latent: boolean,
   tolerance: number,
   maxIterations: number,
 ): StepOutcome {
+  if (latent) return latentStep(d, previous, dt, theta, tolerance, maxIterations);
   const n = previous.length;
   let guess: Float64Array = Float64Array.from(previous);
   let lastChange = Infinity;
@@ -188,8 +205,12 @@ function step(
   );
 }
 
-/** ∫ρc (T_end − T_start) dμ, with the consistent capacity matrix (exact for the interpolated fields). */
+/**
+ * ∫ρc (T_end − T_start) dμ, with the consistent capacity matrix (exact for the interpolated fields);
+ * ∫ρ(H(T_end) − H(T_start))dμ when a layer has a phase change.
+ */
 function storedHeat(d: Discretisation, start: Float64Array, end: Float64Array): number {
+  if (d.layers.some(hasPhaseChange)) return enthalpyChange(d.mesh, d.layers, d.measure, start, end, d.reference);
   const system = assembleSystem(d.mesh, d.layers, d.measure, end, d.reference);
   const delta = new Float64Array(start.length);
   for (let i = 0; i < delta.length; i++) delta[i] = end[i]! - start[i]!;

@@ -7,7 +7,7 @@
 import { InputError } from './errors.js';
 import { ABSOLUTE_ZERO_CELSIUS, requireFinite, requireNonNegative, requirePositive, requireWholeNumber } from '../base/field-checks.js';
 import type { ConductivityModel } from './conductivity.js';
-import type { FaceCondition, Layer, SteadyProblem, TransientProblem } from './problem.js';
+import type { FaceCondition, Layer, PhaseChange, SteadyProblem, TransientProblem } from './problem.js';
 
 const MAX_LAYERS = 100;
 const MAX_ELEMENTS_PER_LAYER = 2_000_000;
@@ -83,6 +83,17 @@ function validateLayer(layer: Layer, i: number, count: number, transient: boolea
     }
   }
   if (layer.elements !== undefined) requireWholeNumber(`${f}.elements`, layer.elements, 1, MAX_ELEMENTS_PER_LAYER);
+  if (layer.phaseChange !== undefined) validatePhaseChange(layer.phaseChange, `${f}.phaseChange`);
+}
+
+function validatePhaseChange(p: PhaseChange, field: string): void {
+  if (!p || typeof p !== 'object') {
+    throw new InputError(field, `${field} must be an object with temperature (°C), latentHeat (J/kg) and range (K).`);
+  }
+  requireTemperature(`${field}.temperature`, p.temperature);
+  requireNonNegative(`${field}.latentHeat`, p.latentHeat, 'J/kg');
+  requirePositive(`${field}.range`, p.range, 'K');
+  if (p.solidSpecificHeat !== undefined) requirePositive(`${field}.solidSpecificHeat`, p.solidSpecificHeat, 'J/(kg·K)');
 }
 
 export function validateFaceCondition(condition: FaceCondition | undefined, field: string): void {
@@ -111,13 +122,21 @@ export function validateSteadyProblem(problem: SteadyProblem, transient = false)
   if (!g || (g.kind !== 'planar' && g.kind !== 'axisymmetric')) {
     throw new InputError('geometry.kind', `geometry.kind must be "planar" or "axisymmetric"; got ${show((g as { kind?: unknown } | undefined)?.kind)}.`);
   }
-  if (g.kind === 'axisymmetric') requirePositive('geometry.innerRadius', g.innerRadius, 'm');
+  // A transient problem may start at the axis (a pipe's contents): innerRadius 0, checked below.
+  const solidCylinder = transient && g.kind === 'axisymmetric' && g.innerRadius === 0;
+  if (g.kind === 'axisymmetric' && !solidCylinder) requirePositive('geometry.innerRadius', g.innerRadius, 'm');
   if (!Array.isArray(problem.layers) || problem.layers.length < 1 || problem.layers.length > MAX_LAYERS) {
     throw new InputError('layers', `layers must list 1 to ${MAX_LAYERS} layers; got ${Array.isArray(problem.layers) ? problem.layers.length : show(problem.layers)}.`);
   }
   problem.layers.forEach((layer, i) => validateLayer(layer, i, problem.layers.length, transient));
   validateFaceCondition(problem.inner, 'inner');
   validateFaceCondition(problem.outer, 'outer');
+  // At r = 0 the face has no area (its measure 2πr is 0) and the axis is a line of symmetry: no
+  // heat crosses it. Only a zero flux says that; a fixed temperature on a line would be a line
+  // source whose heat flow the mesh cannot converge to, so it is refused rather than ignored.
+  if (solidCylinder && !(problem.inner.kind === 'flux' && problem.inner.flux === 0)) {
+    throw new InputError('inner', `inner must be a heat flux of 0 W/m² when geometry.innerRadius is 0: the inner face is then the axis of a solid cylinder, across which no heat flows.`);
+  }
   if (!transient && problem.inner.kind === 'flux' && problem.outer.kind === 'flux') {
     throw new InputError('outer', 'outer must be a fixed temperature or a film when inner is a heat flux: with heat fluxes on both faces the temperature level is undetermined.');
   }
