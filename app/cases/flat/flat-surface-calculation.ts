@@ -5,6 +5,7 @@
  * Heat flows are positive outwards (heat lost); a cold surface gives negative values.
  */
 import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
+import type { SteadyStart } from '../../fe/steady-solve.js';
 import type { OuterSurfaceShape } from '../../physics/outer-surface-exchange.js';
 import { methodNeedsEmissivity, outerSurfaceEmissivity, type ResolvedEmissivity } from '../insulated/insulated-inputs.js';
 import { insulatedStack, reportedStackSolution, solveStack, type StackSolution, surfaceExchangeFor } from '../insulated/insulated-solve.js';
@@ -33,9 +34,10 @@ export function calculateFlatSurface(input: FlatSurfaceInput, text: QuantityText
 
 /**
  * The calculation of an input that has passed validateFlatSurfaceInput already: the flat kind's
- * parse validates the whole case, so its solve does not check every field a second time.
+ * parse validates the whole case, so its solve does not check every field a second time. `start`,
+ * from a neighbouring solve (a sizing sweep), only shortens the iteration; the result is the same.
  */
-export function calculateValidatedFlatSurface(input: FlatSurfaceInput, text: QuantityText): FlatSurfaceResult {
+export function calculateValidatedFlatSurface(input: FlatSurfaceInput, text: QuantityText, start?: SteadyStart): FlatSurfaceResult {
   const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
   const assumptions: string[] = [];
   const stack = insulatedStack(input.wall ? { role: 'wall', label: 'wall', layer: input.wall } : null, input.layers, input.jacket);
@@ -60,6 +62,7 @@ export function calculateValidatedFlatSurface(input: FlatSurfaceInput, text: Qua
     exchange,
     ambient: input.ambient,
     ...(input.touchLimit !== undefined ? { touchLimit: input.touchLimit } : {}),
+    ...(start !== undefined ? { start } : {}),
   }, text);
   const heatOut = solved.heatOut;
   const solution = reportedStackSolution(solved);

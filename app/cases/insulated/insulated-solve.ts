@@ -10,7 +10,7 @@ import { writeSentence } from '../../base/quantity-sentence.js';
 import type { QuantityText } from '../../base/quantity-text.js';
 import type { FaceCondition, Geometry } from '../../fe/problem.js';
 import type { SteadyResult } from '../../fe/result.js';
-import { solveSteady } from '../../fe/steady-solve.js';
+import { solveSteady, type SteadyStart } from '../../fe/steady-solve.js';
 import type { MaterialProperties } from '../../materials/material-properties.js';
 import { outerSurfaceExchange, type OuterSurfaceExchangeFunction, type OuterSurfaceShape, type SurfaceMethod } from '../../physics/outer-surface-exchange.js';
 import { personnelProtectionCheck, type PersonnelProtectionResult } from '../../checks/personnel-protection.js';
@@ -141,6 +141,8 @@ export interface StackProblem {
   readonly exchange: OuterSurfaceExchangeFunction;
   readonly ambient: AmbientConditions;
   readonly touchLimit?: number;
+  /** Face and interface temperatures of a neighbouring solve (a sizing sweep) to start the iteration from. */
+  readonly start?: SteadyStart;
 }
 
 function innerFace(inner: InnerCondition): FaceCondition {
@@ -158,12 +160,15 @@ export function solveStack(problem: StackProblem, text: QuantityText): StackSolu
 /** The engine solve of the stack and what is read back from it, before any check. */
 function solveStackOnly(problem: StackProblem, text: QuantityText): Omit<StackSolution, 'dewPoint' | 'checks'> {
   const { stack, exchange, ambient } = problem;
-  const engine = solveSteady({
-    geometry: problem.geometry,
-    layers: toEngineLayers(stack).map((layer, i) => withFields(layer, { name: stack[i]!.name })),
-    inner: innerFace(problem.inner),
-    outer: { kind: 'film', coefficient: exchange, ambient: ambient.airTemperature },
-  });
+  const engine = solveSteady(
+    {
+      geometry: problem.geometry,
+      layers: toEngineLayers(stack).map((layer, i) => withFields(layer, { name: stack[i]!.name })),
+      inner: innerFace(problem.inner),
+      outer: { kind: 'film', coefficient: exchange, ambient: ambient.airTemperature },
+    },
+    problem.start,
+  );
 
   const surfaceTemperature = engine.faces.outer.temperature;
   const converged = exchange(surfaceTemperature);

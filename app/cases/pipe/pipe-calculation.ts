@@ -9,6 +9,7 @@
  * Heat flows are positive outwards (heat lost by the pipe); a chilled line gives negative values.
  */
 import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
+import type { SteadyStart } from '../../fe/steady-solve.js';
 import { geometryPlausibilityWarnings } from '../../checks/plausibility-warnings.js';
 import type { OuterSurfaceShape } from '../../physics/outer-surface-exchange.js';
 import {
@@ -49,9 +50,10 @@ export function calculatePipe(input: PipeInput, text: QuantityText = SI_TEXT): P
 
 /**
  * The calculation of an input that has passed validatePipeInput already: the pipe kind's parse
- * validates the whole case, so its solve does not check every field a second time.
+ * validates the whole case, so its solve does not check every field a second time. `start`, from a
+ * neighbouring solve (a sizing sweep), only shortens the iteration; the result is the same.
  */
-export function calculateValidatedPipe(input: PipeInput, text: QuantityText): PipeResult {
+export function calculateValidatedPipe(input: PipeInput, text: QuantityText, start?: SteadyStart): PipeResult {
   const method = input.surfaceMethod ?? DEFAULT_SURFACE_METHOD;
   const assumptions: string[] = [];
 
@@ -87,6 +89,7 @@ export function calculateValidatedPipe(input: PipeInput, text: QuantityText): Pi
     exchange,
     ambient: input.ambient,
     ...(input.touchLimit !== undefined ? { touchLimit: input.touchLimit } : {}),
+    ...(start !== undefined ? { start } : {}),
   }, text);
   const heatOut = solved.heatOut;
   const solution = reportedStackSolution(solved);
