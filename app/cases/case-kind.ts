@@ -10,12 +10,20 @@ import type { CheckResult } from '../checks/check-result.js';
 import type { CaseReport } from '../report/report-model.js';
 import type { MaterialResolver } from './case-material.js';
 import type { PipeSize } from './pipe/pipe-sizes.js';
+import type { InstalledCostTable } from './sizing/sizing-model.js';
 
-/** What a case needs from outside the engine: library materials, and the pipe-size tables. */
+/** What a case needs from outside the engine: library materials, the pipe-size tables and the sizing data. */
 export interface CaseContext {
   readonly resolveMaterial: MaterialResolver;
   /** The pipe and tube size tables (data/pipe-sizes), for pipe cases that name a size. */
   readonly pipeSizes?: readonly PipeSize[];
+  /**
+   * Product family -> thicknesses (m, rising) of data/insulation-thickness-series.csv, for a sizing
+   * series of the sized material's family or of a named one (app/cases/sizing/thickness-series.ts).
+   */
+  readonly thicknessSeries?: ReadonlyMap<string, readonly number[]>;
+  /** The installed-cost tables a sizing's economics may name (data/sizing/installed-costs.csv and the user's own). */
+  readonly installedCostTables?: readonly InstalledCostTable[];
   /**
    * The project's units, in which every sentence of the report reads (reasons, margins, subject,
    * notes, assumptions, warnings); default 'SI'. Inputs and result figures stay SI either way.
