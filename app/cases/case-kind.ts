@@ -10,7 +10,7 @@ import type { CheckResult } from '../checks/check-result.js';
 import type { CaseReport } from '../report/report-model.js';
 import type { MaterialResolver } from './case-material.js';
 import type { PipeSize } from './pipe/pipe-sizes.js';
-import type { InstalledCostTable } from './sizing/sizing-model.js';
+import type { InstalledCostTable, SizingResult } from './sizing/sizing-model.js';
 
 /** What a case needs from outside the engine: library materials, the pipe-size tables and the sizing data. */
 export interface CaseContext {
@@ -43,6 +43,8 @@ export interface SolvedParts<Result> {
   readonly checks: readonly CheckResult[];
   readonly warnings: readonly string[];
   readonly assumptions: readonly string[];
+  /** The table across the thickness series and the choice, for a pipe or flat case with a "sizing" block. */
+  readonly sizing?: SizingResult;
 }
 
 export interface CaseKind<Input = unknown, Result = unknown> {

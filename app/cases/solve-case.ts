@@ -10,6 +10,7 @@ import { isObject } from '../base/field-checks.js';
 import { quantityText } from '../base/quantity-text.js';
 import type { CheckResult } from '../checks/check-result.js';
 import type { CaseReport } from '../report/report-model.js';
+import type { SizingResult } from './sizing/sizing-model.js';
 import type { CaseContext, CaseKind, ParsedCase } from './case-kind.js';
 import { CASE_KINDS } from './registry.js';
 
@@ -23,6 +24,8 @@ export interface SolvedCase {
   readonly warnings: readonly string[];
   readonly assumptions: readonly string[];
   readonly report: CaseReport;
+  /** For a pipe or flat case with a "sizing" block: the table across the thickness series and the choice (also a section of the report). */
+  readonly sizing?: SizingResult;
 }
 
 /** The kind a case file declares, or an InputError naming "kind". */
@@ -63,6 +66,7 @@ export function solveCase(json: unknown, context: CaseContext): SolvedCase {
       warnings: solved.warnings,
       assumptions: solved.assumptions,
       report: kind.report(parsed, solved, text),
+      ...(solved.sizing !== undefined ? { sizing: solved.sizing } : {}),
     };
   } catch (error) {
     // A refusal reads in the project's units, as the rest of the case does; the input stays as given.

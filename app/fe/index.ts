@@ -29,6 +29,6 @@ export { ConvergenceError, InputError, SingularProblemError } from './errors.js'
 export { solveSteady } from './steady-solve.js';
 export { solveTransient } from './transient-solve.js';
 export type { EnthalpyCurve } from './phase-change.js';
-export { enthalpyCurve, liquidAtMeltingPointTemperature, liquidFraction, specificEnthalpy } from './phase-change.js';
+export { enthalpyCurve, liquidFraction, specificEnthalpy } from './phase-change.js';
 export { BandedMatrix, solveBanded } from './banded-matrix.js';
 export { ABSOLUTE_ZERO_CELSIUS } from './validate.js';

@@ -81,23 +81,6 @@ export function liquidFraction(curve: EnthalpyCurve, temperature: number): numbe
   return Math.min(1, Math.max(0, (temperature - curve.solidus) / curve.width));
 }
 
-/**
- * °C: the temperature at which the enthalpy equals that of the liquid at the phase-change
- * temperature (H = L), just below the top of the range. A point of the body that has cooled to it
- * has given up all its heat above the sharp freezing point: in the sharp model it has just reached
- * T_m. Solves the quadratic of the range for s = T − T_s.
- */
-export function liquidAtMeltingPointTemperature(curve: EnthalpyCurve): number {
-  const { width, latentHeat, solidSpecificHeat: cs, liquidSpecificHeat: cl } = curve;
-  // (cl − cs)/(2w)·s² + (cs + L/w)·s − (L + cs·w/2) = 0, root in [0, w].
-  const a = (cl - cs) / (2 * width);
-  const b = cs + latentHeat / width;
-  const c = -(latentHeat + (cs * width) / 2);
-  // The stable form of the positive root, also right when a = 0.
-  const s = (2 * -c) / (b + Math.sqrt(b * b - 4 * a * c));
-  return curve.solidus + s;
-}
-
 /** True when the layer carries latent heat (any phase change, even with L = 0, takes this path). */
 export function hasPhaseChange(layer: Layer): layer is Layer & { readonly phaseChange: PhaseChange } {
   return layer.phaseChange !== undefined;

@@ -9,7 +9,7 @@
  */
 import type { CheckVerdict } from '../checks/check-result.js';
 import { formatQuantity, quantityUnit, tableCellTexts } from './format-quantity.js';
-import type { CaseReport, ReportBlock, ReportCell, ReportChart, ReportCrossSection, ReportFigure, ReportTable, ReportVerdict } from './report-model.js';
+import type { CaseReport, ReportBlock, ReportCell, ReportChart, ReportCrossSection, ReportFigure, ReportSection, ReportTable, ReportVerdict } from './report-model.js';
 
 export const TEXT_WIDTH = 100;
 
@@ -42,6 +42,11 @@ export function renderReportText(report: CaseReport): string {
   ];
   for (const [heading, items] of lists) if (items.length > 0) parts.push([heading, ...items.flatMap((item) => wrap(item, '  • ', '    '))]);
   return parts.map((lines) => lines.join('\n')).join('\n\n') + '\n';
+}
+
+/** One section alone, as the whole report prints it (`lamina size --format text` prints the sizing section). */
+export function renderSectionText(section: ReportSection): string {
+  return [section.heading, ...blocksLines(section.blocks)].join('\n') + '\n';
 }
 
 function verdictLines(v: ReportVerdict): string[] {

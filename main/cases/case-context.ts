@@ -1,12 +1,15 @@
 /**
  * What the engine's case pipeline needs from the Node side: library materials by id (a missing id
  * gives undefined, so that the case parser names the field; any other storage failure is not
- * hidden) and the pipe-size tables read from data/pipe-sizes.
+ * hidden), the pipe-size tables read from data/pipe-sizes, and for a sizing the thickness series
+ * and the shipped installed-cost tables (data/insulation-thickness-series.csv, data/sizing).
  */
 import type { CaseContext } from '../../app/index.js';
 import type { MaterialsService } from '../services/materials-service.js';
 import { NotFoundError } from '../services/service-errors.js';
 import { pipeSizeCatalogue } from '../pipe-sizes/pipe-size-catalogue.js';
+import { installedCostCatalogue } from '../sizing/installed-cost-catalogue.js';
+import { thicknessSeriesCatalogue } from '../sizing/thickness-series-catalogue.js';
 
 export function caseContext(materials: MaterialsService | null): CaseContext {
   return {
@@ -20,6 +23,8 @@ export function caseContext(materials: MaterialsService | null): CaseContext {
       }
     },
     pipeSizes: pipeSizeCatalogue(),
+    thicknessSeries: thicknessSeriesCatalogue(),
+    installedCostTables: installedCostCatalogue(),
   };
 }
 

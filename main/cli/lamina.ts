@@ -10,10 +10,12 @@ import type { CliCommand, CliIO } from './command.js';
 import { EXIT_BAD_INPUT, EXIT_DONE } from './exit-code.js';
 import { materialsCommand } from './commands/materials.js';
 import { projectsCommand } from './commands/projects.js';
+import { sizeCommand } from './commands/size.js';
 import { solveCommand } from './commands/solve.js';
 
 const COMMANDS: Record<string, CliCommand> = {
   solve: solveCommand,
+  size: sizeCommand,
   materials: materialsCommand,
   projects: projectsCommand,
 };
@@ -22,6 +24,7 @@ const HELP = `lamina — heat loss, surface temperatures and condensation checks
 
 usage:
   lamina solve CASE.json [--format json|text] [--db PATH]   solve a case file and print the result
+  lamina size CASE.json [--format json|text] [--db PATH]    choose the insulation thickness of a case with a "sizing" block
   lamina materials list|show|import|export ...              the materials library (see lamina materials --help)
   lamina projects list|export|import|add-demo ...           projects (see lamina projects --help)
   lamina projects report ID --out FILE.pdf|FILE.html        print a project's report (PDF through Electron or Chromium)
@@ -48,7 +51,7 @@ export async function runCli(args: readonly string[], io: CliIO): Promise<number
   }
   const command = COMMANDS[name];
   if (!command) {
-    io.stderr(`lamina: unknown command "${name}"; use solve, materials or projects (lamina --help).\n`);
+    io.stderr(`lamina: unknown command "${name}"; use solve, size, materials or projects (lamina --help).\n`);
     return EXIT_BAD_INPUT;
   }
   return command(rest, io);

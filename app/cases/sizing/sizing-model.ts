@@ -87,7 +87,10 @@ export interface SizingOptions {
 
 export type SizingCriterionName = keyof SizingCriteria;
 
-/** One criterion at one thickness. `margin` > 0 is met, in the criterion's own quantity (K, W/m, s, …). */
+/**
+ * One criterion at one thickness. `margin` ≥ 0 is met, in the criterion's own quantity (K, W/m, s,
+ * …; for the economic criterion the least lifecycle cost less this row's, 0 at the least).
+ */
 export interface CriterionOutcome {
   readonly criterion: SizingCriterionName;
   readonly met: boolean;
@@ -147,5 +150,7 @@ export interface SizingResult {
   readonly factors: { readonly presentValue: number; readonly annuity: number } | null;
   /** The thickness of least lifecycle cost (null without economics). */
   readonly economicThickness: number | null;
+  /** m, the sized layer's thickness in the case as given: always one of the rows. */
+  readonly caseThickness?: number;
   readonly assumptions: readonly string[];
 }

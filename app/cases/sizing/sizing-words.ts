@@ -87,14 +87,16 @@ export function outcomeCell(outcome: CriterionOutcome | undefined, row: SizingRo
   }
   if (outcome.met) return 'met';
   const quantity = marginQuantity(outcome.criterion, basis)!;
-  return `fails by ${text.figure(Math.abs(outcome.margin), quantity)}`;
+  const shortfall = text.figure(Math.abs(outcome.margin), quantity);
+  // A shortfall that rounds to nothing still fails: say so rather than "fails by 0.0 K".
+  return /^0([.,]0*)?(\s|$)/.test(shortfall) ? 'fails, narrowly' : `fails by ${shortfall}`;
 }
 
-/** The mark of a row in the table: "chosen", "least lifecycle cost", both, or nothing. */
+/** The mark of a row in the table: "chosen", "least lifecycle cost", "as given" (the case's own thickness), joined, or nothing. */
 export function choiceMark(row: SizingRow, result: SizingResult): string {
-  const chosen = result.choice.kind === 'chosen' && sameThickness(row.thickness, result.choice.thickness);
-  const economic = result.economicThickness !== null && sameThickness(row.thickness, result.economicThickness);
-  if (chosen && economic) return 'chosen, least lifecycle cost';
-  if (chosen) return 'chosen';
-  return economic ? 'least lifecycle cost' : '';
+  const marks: string[] = [];
+  if (result.choice.kind === 'chosen' && sameThickness(row.thickness, result.choice.thickness)) marks.push('chosen');
+  if (result.economicThickness !== null && sameThickness(row.thickness, result.economicThickness)) marks.push('least lifecycle cost');
+  if (result.caseThickness !== undefined && sameThickness(row.thickness, result.caseThickness)) marks.push('as given');
+  return marks.join(', ');
 }

@@ -13,6 +13,8 @@ import type { WallInput } from './wall-input.js';
 import type { WallLayerResult, WallResult } from './wall-result.js';
 import { buildThermalStack, type StackOptions, type ThermalStack } from './wall-thermal-stack.js';
 import { validateWallInput } from './wall-validation.js';
+import { isAirLayer } from './wall-input.js';
+import { uCorrections, type CorrectedLayer, type UCorrections } from './wall-u-corrections.js';
 
 export interface WallSolution {
   readonly stack: ThermalStack;
@@ -53,6 +55,7 @@ export function wallResultOf(input: WallInput, stack: ThermalStack, steady: Stea
         nominalThermalResistance: l.nominalResistance,
         resistanceScale: l.resistanceScale,
         ...(l.airLayer ? { airLayer: l.airLayer } : {}),
+        ...(l.bridged ? { bridged: l.bridged } : {}),
         effectiveConductivity: null,
         innerTemperature: null,
         outerTemperature: null,
@@ -74,6 +77,7 @@ export function wallResultOf(input: WallInput, stack: ThermalStack, steady: Stea
       nominalThermalResistance: l.nominalResistance,
       resistanceScale: l.resistanceScale,
       ...(l.airLayer ? { airLayer: l.airLayer } : {}),
+      ...(l.bridged ? { bridged: l.bridged } : {}),
       effectiveConductivity: lambda,
       innerTemperature: r.innerTemperature,
       outerTemperature: r.outerTemperature,
@@ -85,12 +89,18 @@ export function wallResultOf(input: WallInput, stack: ThermalStack, steady: Stea
     layers.reduce((s, l) => s + (l.thermalResistance ?? 0), 0) +
     stack.outsideSurfaceResistance;
   const uValue = 1 / totalResistance;
+  const corrections = correctionsOf(input, stack);
+  const correctedUValue = uValue + (corrections?.total ?? 0);
   const q = steady.faces.inner.heatFluxDensityIn;
   const dT = input.inside.temperature - input.outside.temperature;
   const area = input.area ?? 1;
   return {
     uValue,
     uValueRounded: roundToSignificantFigures(uValue, U_VALUE_SIGNIFICANT_FIGURES),
+    correctedUValue,
+    correctedUValueRounded: roundToSignificantFigures(correctedUValue, U_VALUE_SIGNIFICANT_FIGURES),
+    corrections,
+    combinedMethod: stack.combined,
     uValueFromHeatFlow: dT === 0 ? null : q / dT,
     totalResistance,
     insideSurfaceResistance: stack.insideSurfaceResistance,
@@ -107,4 +117,23 @@ export function wallResultOf(input: WallInput, stack: ThermalStack, steady: Stea
     profile: { positions: steady.positions, temperatures: steady.temperatures },
     dynamic: wallDynamicCharacteristics(input, layers, stack.insideSurfaceResistance, stack.outsideSurfaceResistance),
   };
+}
+
+/** The Annex F corrections of the counted material layers that carry air gaps or fasteners, or null when none does. */
+export function correctionsOf(input: WallInput, stack: ThermalStack): UCorrections | null {
+  const layers = stack.layers.flatMap((l): CorrectedLayer[] => {
+    const given = input.layers[l.index]!;
+    if (!l.included || isAirLayer(given) || (given.airGapLevel === undefined && given.fasteners === undefined)) return [];
+    return [
+      {
+        index: l.index,
+        name: l.name,
+        thickness: l.thickness,
+        resistance: l.resistanceIgnoringBridges,
+        ...(given.airGapLevel !== undefined ? { airGapLevel: given.airGapLevel } : {}),
+        ...(given.fasteners !== undefined ? { fasteners: given.fasteners } : {}),
+      },
+    ];
+  });
+  return layers.length === 0 ? null : uCorrections(layers, stack.resistanceIgnoringBridges);
 }

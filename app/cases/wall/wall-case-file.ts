@@ -7,8 +7,11 @@
  */
 import { demoClimateByName, DEMO_CLIMATES } from './wall-demo-climates.js';
 import type { MonthlyClimate } from '../../checks/monthly-climate.js';
-import type { InsideHumiditySource, WallInput, WallLayer } from './wall-input.js';
-import { validateWallInput } from './wall-validation.js';
+import { isAirLayer, type AirGapLevel, type InsideHumiditySource, type WallBridge, type WallFasteners, type WallInput, type WallLayer, type WallTargetU } from './wall-input.js';
+import { MAXIMUM_BRIDGES_PER_LAYER, MAXIMUM_TARGET_THICKNESSES, validateWallInput } from './wall-validation.js';
+import { requireNumberIn } from '../../base/field-checks.js';
+import { enteredPart } from '../../base/quantity-sentence.js';
+import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
 import type { MaterialProperties } from '../../materials/material-properties.js';
 import { resolveCaseMaterial } from '../case-material.js';
@@ -42,15 +45,84 @@ function parseLayer(value: unknown, field: string, resolveMaterial: (id: number)
   if (value.kind !== undefined && value.kind !== 'material') {
     throw new InputError(`${field}.kind`, `${field}.kind must be "material" or "air-layer" (got ${shown(value.kind)}).`);
   }
-  onlyKeys(value, field, ['kind', 'name', 'material', 'materialId', 'thickness']);
+  onlyKeys(value, field, ['kind', 'name', 'material', 'materialId', 'thickness', 'bridges', 'airGapLevel', 'fasteners']);
   const name = optionalText(value.name, `${field}.name`);
   const material = resolveCaseMaterial(value, field, resolveMaterial, 'building');
+  const bridges = value.bridges === undefined ? undefined : parseBridges(value.bridges, `${field}.bridges`, resolveMaterial);
+  if (isObject(value.fasteners)) onlyKeys(value.fasteners, `${field}.fasteners`, ['conductivity', 'perSquareMetre', 'crossSectionArea', 'lengthInLayer']);
   return {
     kind: 'material',
     ...(name !== undefined ? { name } : {}),
     material,
     thickness: value.thickness as number,
+    ...(bridges !== undefined ? { bridges } : {}),
+    ...(value.airGapLevel !== undefined ? { airGapLevel: value.airGapLevel as AirGapLevel } : {}),
+    ...(value.fasteners !== undefined ? { fasteners: value.fasteners as unknown as WallFasteners } : {}),
   };
+}
+
+/** The sections side by side with a layer's own material: each { name?, material or materialId, fraction }; numbers checked by validateWallInput. */
+function parseBridges(value: unknown, field: string, resolveMaterial: (id: number) => MaterialProperties | undefined): WallBridge[] {
+  if (!Array.isArray(value) || value.length < 1 || value.length > MAXIMUM_BRIDGES_PER_LAYER) {
+    throw new InputError(field, `${field} must list 1 to ${MAXIMUM_BRIDGES_PER_LAYER} bridging sections { material or materialId, fraction } (or be left out for a homogeneous layer).`);
+  }
+  return value.map((b, k) => {
+    const g = `${field}[${k}]`;
+    if (!isObject(b)) throw new InputError(g, `${g} must be an object { name, material or materialId, fraction }.`);
+    onlyKeys(b, g, ['name', 'material', 'materialId', 'fraction']);
+    const name = optionalText(b.name, `${g}.name`);
+    const material = resolveCaseMaterial(b, g, resolveMaterial, 'building');
+    return { ...(name !== undefined ? { name } : {}), material, fraction: b.fraction as number };
+  });
+}
+
+/**
+ * The target-U block: the layer by its name (the layer's own name, or its material's name when it
+ * has none), the thicknesses as a list (any order; used rising, each once) or as { from, to, step }.
+ */
+function parseTargetU(value: unknown, layers: readonly WallLayer[]): WallTargetU {
+  if (!isObject(value)) throw new InputError('targetU', 'targetU must be an object { layer, thicknesses, value }.');
+  onlyKeys(value, 'targetU', ['layer', 'thicknesses', 'value']);
+  if (typeof value.layer !== 'string') {
+    throw new InputError('targetU.layer', 'targetU.layer must be the name of a material layer (its "name", or its material\'s name when it has none).');
+  }
+  const named = layers.flatMap((l, i) => (!isAirLayer(l) && (l.name ?? l.material.name) === value.layer ? [i] : []));
+  if (named.length !== 1) {
+    const names = layers.flatMap((l) => (isAirLayer(l) ? [] : [`"${l.name ?? l.material.name}"`]));
+    throw new InputError(
+      'targetU.layer',
+      named.length === 0
+        ? `targetU.layer must be the name of one material layer, one of ${names.join(', ')} (got ${shown(value.layer)}).`
+        : `targetU.layer must name one layer, but ${named.length} layers are called ${shown(value.layer)}; give the insulation layer a name of its own.`,
+    );
+  }
+  return { layer: named[0]!, thicknesses: parseThicknesses(value.thicknesses), value: value.value as number };
+}
+
+function parseThicknesses(value: unknown): number[] {
+  const field = 'targetU.thicknesses';
+  if (Array.isArray(value)) {
+    if (value.length < 1 || value.length > MAXIMUM_TARGET_THICKNESSES) {
+      throw new InputError(field, `${field} must list 1 to ${MAXIMUM_TARGET_THICKNESSES} thicknesses in m, or give { from, to, step }.`);
+    }
+    value.forEach((d, k) => requireNumberIn(`${field}[${k}]`, d, QUANTITY_RANGES.wallLayerThickness));
+    return [...new Set(value as number[])].sort((a, b) => a - b);
+  }
+  if (!isObject(value)) throw new InputError(field, `${field} must be a list of thicknesses in m or a range { from, to, step } in m.`);
+  onlyKeys(value, field, ['from', 'to', 'step']);
+  const from = requireNumberIn(`${field}.from`, value.from, QUANTITY_RANGES.wallLayerThickness);
+  const to = requireNumberIn(`${field}.to`, value.to, QUANTITY_RANGES.wallLayerThickness);
+  const step = requireNumberIn(`${field}.step`, value.step, { ...QUANTITY_RANGES.wallLayerThickness, min: 0, minExclusive: true });
+  if (to < from) {
+    const t = (v: number, si: string) => enteredPart(v, 'thickness', si);
+    throw new InputError(`${field}.to`, [`${field}.to must be at least ${field}.from (`, t(from, `${from} m`), ') (got ', t(to, String(to)), ').']);
+  }
+  // Thicknesses to the nanometre, so that 0.1 + 2·0.02 reads 0.14 and the last step reaches `to`.
+  const count = Math.floor((to - from) / step + 1e-9) + 1;
+  if (count > MAXIMUM_TARGET_THICKNESSES) {
+    throw new InputError(`${field}.step`, `${field}.step must give at most ${MAXIMUM_TARGET_THICKNESSES} thicknesses from ${field}.from to ${field}.to (got ${count}).`);
+  }
+  return Array.from({ length: count }, (_, k) => Math.round((from + k * step) * 1e9) / 1e9);
 }
 
 function parseClimate(value: unknown): MonthlyClimate {
@@ -108,7 +180,7 @@ export function parseWallCaseFile(json: unknown, resolveMaterial: (id: number) =
   if (json.schemaVersion !== WALL_CASE_SCHEMA_VERSION) {
     throw new InputError('schemaVersion', `schemaVersion must be ${WALL_CASE_SCHEMA_VERSION} (got ${shown(json.schemaVersion)}).`);
   }
-  onlyKeys(json, '', ['$schema', 'kind', 'schemaVersion', 'title', 'notes', 'layers', 'heatFlowDirection', 'inside', 'outside', 'surfaceResistances', 'area', 'moisture']);
+  onlyKeys(json, '', ['$schema', 'kind', 'schemaVersion', 'title', 'notes', 'layers', 'heatFlowDirection', 'inside', 'outside', 'surfaceResistances', 'area', 'moisture', 'targetU']);
   const title = optionalText(json.title, 'title');
   optionalText(json.notes, 'notes', 5000);
   checkAirKeys(json.inside, 'inside');
@@ -136,6 +208,7 @@ export function parseWallCaseFile(json: unknown, resolveMaterial: (id: number) =
     ...(json.surfaceResistances !== undefined ? { surfaceResistances: json.surfaceResistances as WallInput['surfaceResistances'] } : {}),
     ...(json.area !== undefined ? { area: json.area as number } : {}),
     ...(moisture ? { moisture } : {}),
+    ...(json.targetU !== undefined ? { targetU: parseTargetU(json.targetU, layers) } : {}),
   };
   validateWallInput(input);
   return input;

@@ -34,9 +34,14 @@ export const wallKind: CaseKind<WallInput, WallAnalysis> = {
 /** Every material layer over the span of the inside and outside temperatures, at design and in every climate month. */
 function requireWallConductivities(json: unknown, input: WallInput): void {
   const raw = isObject(json) && Array.isArray(json['layers']) ? json['layers'] : [];
-  const uses = input.layers.flatMap((layer, i): CaseMaterialUse[] =>
-    isAirLayer(layer) ? [] : [{ entry: `layers[${i}]`, raw: raw[i], material: layer.material }],
-  );
+  const uses = input.layers.flatMap((layer, i): CaseMaterialUse[] => {
+    if (isAirLayer(layer)) return [];
+    const rawBridges = isObject(raw[i]) && Array.isArray(raw[i]['bridges']) ? (raw[i]['bridges'] as unknown[]) : [];
+    return [
+      { entry: `layers[${i}]`, raw: raw[i], material: layer.material },
+      ...(layer.bridges ?? []).map((b, k) => ({ entry: `layers[${i}].bridges[${k}]`, raw: rawBridges[k], material: b.material })),
+    ];
+  });
   const months = input.moisture?.climate?.months ?? [];
   const temperatures = [input.inside, input.outside, ...months.flatMap((m) => [m.inside, m.outside])].map((c) => c.temperature);
   requireConductivitiesOver(uses, temperatures);

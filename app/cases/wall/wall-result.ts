@@ -1,6 +1,8 @@
 /** Results of a wall or roof calculation, as plain data (SI; per m² unless stated). */
 import type { WallDynamicCharacteristics } from './wall-dynamic.js';
-import type { VentilationApplied } from './wall-thermal-stack.js';
+import type { CombinedMethodResult } from './wall-combined-method.js';
+import type { StackBridgedLayer, VentilationApplied } from './wall-thermal-stack.js';
+import type { UCorrections } from './wall-u-corrections.js';
 
 export interface WallLayerResult {
   /** Index in the input's layer list. */
@@ -19,6 +21,8 @@ export interface WallLayerResult {
   readonly resistanceScale: number;
   /** For an air layer: R_g in m²·K/W and whether the table or the annex formula gave it. */
   readonly airLayer?: { readonly resistance: number; readonly method: 'table' | 'formula' };
+  /** For a bridged layer: its sections, λ''_j and the resistance it carries (its share of the combined method's R_T). */
+  readonly bridged?: StackBridgedLayer;
   /** Conductivity that carries the layer's heat flow (integral mean of λ(T)), W/(m·K); null when not included. */
   readonly effectiveConductivity: number | null;
   /** Face temperatures, °C; null when not included. */
@@ -31,6 +35,16 @@ export interface WallResult {
   readonly uValue: number;
   /** U rounded to 2 significant figures, as ISO 6946 asks for the final value (from memory). */
   readonly uValueRounded: number;
+  /**
+   * U_c = U + ΔU with the ISO 6946 Annex F corrections for air gaps and fasteners, W/(m²·K); equal
+   * to uValue when no layer carries either. A target U is checked against this value.
+   */
+  readonly correctedUValue: number;
+  readonly correctedUValueRounded: number;
+  /** The Annex F corrections; null when no counted layer has air gaps or fasteners. */
+  readonly corrections: UCorrections | null;
+  /** The ISO 6946 combined method (R'_T, R''_T, R_T, e) of the counted element; null when no counted layer is bridged. */
+  readonly combinedMethod: CombinedMethodResult | null;
   /** q/(θ_i − θ_e) from the engine's heat flow: agrees with uValue; null when θ_i = θ_e. */
   readonly uValueFromHeatFlow: number | null;
   /** R_T = R_si + Σ R_j + R_se, m²·K/W. */

@@ -12,6 +12,14 @@
  *   The standard gives only R_T. To keep a temperature profile through every layer, the part of the
  *   element from the air layer outwards (R_g, outer layers, R_se) is scaled by one factor so that the
  *   total equals that R_T (our modelling choice, no source); the inner layers keep their resistance.
+ *
+ * A bridged layer (a material with bridges side by side, wall-combined-method.ts) enters the
+ * engine as one layer of constant conductivity d/R_eq, where R_eq is its share of the combined
+ * method's R_T for the counted element (our modelling choice): the series sum of the stack is then
+ * R_T, so the solved heat flow gives the combined-method U and the temperatures lie on that one
+ * profile. The combined method reads every conductivity at 10 °C (declared values). With a slightly
+ * ventilated air layer the combined method is taken for the element with that layer unventilated,
+ * and the ventilation weighting then applies to the equivalent resistances.
  */
 import type { ConductivityModel } from '../../fe/conductivity.js';
 import { conductivityAt } from '../../fe/conductivity.js';
@@ -23,7 +31,8 @@ import {
   standardSurfaceResistances,
   wellVentilatedOutsideResistance,
 } from '../../physics/index.js';
-import { isAirLayer, type WallInput, type WallLayer } from './wall-input.js';
+import { combinedMethod, type CombinedMethodResult, type CombinedPart, type CombinedSection } from './wall-combined-method.js';
+import { isAirLayer, type WallInput, type WallLayer, type WallMaterialLayer } from './wall-input.js';
 
 /** Faces with emissivity at or above this use the ISO 6946 table (high-emissivity faces), from memory. */
 const TABLE_EMISSIVITY_MINIMUM = 0.8;
@@ -48,6 +57,22 @@ export interface StackLayer {
   readonly resistanceScale: number;
   /** For an air layer: R_g and where it came from. */
   readonly airLayer?: { readonly resistance: number; readonly method: 'table' | 'formula' };
+  /** For a bridged layer: its sections and the combined method's figures for it. */
+  readonly bridged?: StackBridgedLayer;
+  /** d/λ(10 °C) of the layer's own material (the infill of a bridged layer), or R_g: the layer ignoring thermal bridging, m²·K/W. */
+  readonly resistanceIgnoringBridges: number;
+}
+
+/** A bridged layer as the combined method treats it. */
+export interface StackBridgedLayer {
+  /** The layer's own material first (the rest of the area), then each bridge; λ at 10 °C. */
+  readonly sections: readonly CombinedSection[];
+  /** λ''_j = Σ f_m·λ_mj, W/(m·K). */
+  readonly lowerLimitConductivity: number;
+  /** d/λ''_j, m²·K/W. */
+  readonly lowerLimitResistance: number;
+  /** The resistance the layer carries in the engine (its share of R_T), m²·K/W; the lower-limit value when the layer is not counted. */
+  readonly equivalentResistance: number;
 }
 
 export interface ThermalStack {
@@ -56,6 +81,10 @@ export interface ThermalStack {
   readonly outsideSurfaceResistance: number;
   readonly layers: readonly StackLayer[];
   readonly ventilation: VentilationApplied;
+  /** ISO 6946 combined method of the counted element; null when no counted layer is bridged. */
+  readonly combined: CombinedMethodResult | null;
+  /** R_T,h: R_si + the counted layers ignoring thermal bridging + R_se, m²·K/W (after the ventilation rules). */
+  readonly resistanceIgnoringBridges: number;
 }
 
 /** Which ISO 6946 ventilation rule was applied, to which air layer, with its totals. */
@@ -117,6 +146,7 @@ export function buildThermalStack(input: WallInput, options: StackOptions = {}):
       return { index, name: layerName(layer, index), kind: 'air-layer' as const, thickness: layer.thickness, nominalResistance: air.resistance, air };
     }
     const lambda = conductivityAt(layer.material.conductivity, DECLARED_TEMPERATURE);
+    const sections = bridgedSections(layer, lambda);
     return {
       index,
       name: layerName(layer, index),
@@ -124,6 +154,7 @@ export function buildThermalStack(input: WallInput, options: StackOptions = {}):
       thickness: layer.thickness,
       nominalResistance: layer.thickness / lambda,
       model: layer.material.conductivity,
+      ...(sections ? { sections } : {}),
     };
   });
 
@@ -143,6 +174,33 @@ export function buildThermalStack(input: WallInput, options: StackOptions = {}):
 
   if (rule === 'well-ventilated' && ventilatedIndex === 0) {
     throw new InputError('layers[0].ventilation', `layers[0].ventilation must not be 'well-ventilated': a well ventilated air layer needs at least one layer inside it.`);
+  }
+
+  // The combined method on the counted element, before the slightly-ventilated weighting.
+  const countedOutsideResistance = rule === 'well-ventilated' ? wellVentilatedOutsideResistance(standard.inside) : rse;
+  const counted = base.filter((l) => !(rule === 'well-ventilated' && l.index >= ventilatedIndex));
+  const combined = counted.some((l) => 'sections' in l)
+    ? combinedMethod(
+        counted.map((l): CombinedPart => ('sections' in l && l.sections ? { kind: 'bridged', thickness: l.thickness, sections: l.sections } : { kind: 'homogeneous', resistance: l.nominalResistance })),
+        rsi,
+        countedOutsideResistance,
+      )
+    : null;
+  const bridgedOf = new Map<number, StackBridgedLayer>();
+  for (const l of base) {
+    if (!('sections' in l) || !l.sections) continue;
+    const k = counted.indexOf(l);
+    const figures = combined?.bridgedLayers.find((b) => b.part === k);
+    const lambda = l.sections.reduce((s, m) => s + m.fraction * m.conductivity, 0);
+    const lowerLimitResistance = l.thickness / lambda;
+    bridgedOf.set(l.index, {
+      sections: l.sections,
+      lowerLimitConductivity: lambda,
+      lowerLimitResistance,
+      equivalentResistance: figures ? figures.equivalentResistance : lowerLimitResistance,
+    });
+    // The layer's resistance from here on (ventilation weighting, engine) is its share of R_T.
+    l.nominalResistance = bridgedOf.get(l.index)!.equivalentResistance;
   }
 
   let scale = 1;
@@ -167,8 +225,10 @@ export function buildThermalStack(input: WallInput, options: StackOptions = {}):
     const resistanceScale = rule === 'slightly-ventilated' && l.index >= ventilatedIndex ? scale : 1;
     // An air layer enters the engine as a layer of equivalent conductivity λ_eq = d/R_g, which
     // gives it exactly the resistance R_g in the series sum.
+    // A bridged layer likewise enters as λ_eq = d/R_eq, its share of the combined method's R_T.
+    const bridged = bridgedOf.get(l.index);
     const model: ConductivityModel =
-      'air' in l ? { kind: 'constant', value: l.thickness / l.nominalResistance } : (l.model as ConductivityModel);
+      'air' in l || bridged ? { kind: 'constant', value: l.thickness / l.nominalResistance } : (l.model as ConductivityModel);
     return {
       index: l.index,
       name: l.name,
@@ -179,8 +239,26 @@ export function buildThermalStack(input: WallInput, options: StackOptions = {}):
       nominalResistance: l.nominalResistance,
       resistanceScale,
       ...('air' in l ? { airLayer: l.air } : {}),
+      ...(bridged ? { bridged } : {}),
+      resistanceIgnoringBridges: bridged ? l.thickness / bridged.sections[0]!.conductivity : l.nominalResistance,
     };
   });
 
-  return { insideSurfaceResistance: rsi, outsideSurfaceResistance: outsideResistance, layers, ventilation };
+  const resistanceIgnoringBridges =
+    rsi + layers.filter((l) => l.included).reduce((s, l) => s + l.resistanceIgnoringBridges * l.resistanceScale, 0) + outsideResistance;
+  return { insideSurfaceResistance: rsi, outsideSurfaceResistance: outsideResistance, layers, ventilation, combined, resistanceIgnoringBridges };
+}
+
+/**
+ * The sections of a bridged layer, its own material first with the rest of the area, each λ at
+ * 10 °C; undefined for a homogeneous layer (no bridges, or an empty list).
+ */
+function bridgedSections(layer: WallMaterialLayer, lambda: number): CombinedSection[] | undefined {
+  const bridges = layer.bridges ?? [];
+  if (bridges.length === 0) return undefined;
+  const bridged = bridges.reduce((s, b) => s + b.fraction, 0);
+  return [
+    { name: layer.material.name, fraction: 1 - bridged, conductivity: lambda },
+    ...bridges.map((b, k) => ({ name: b.name ?? b.material.name ?? `bridge ${k + 1}`, fraction: b.fraction, conductivity: conductivityAt(b.material.conductivity, DECLARED_TEMPERATURE) })),
+  ];
 }

@@ -10,7 +10,9 @@ import { QUANTITY_RANGES } from '../../base/quantity-ranges.js';
 import { InputError } from '../../fe/errors.js';
 import { airLayerVentilation, HEAT_FLOW_DIRECTIONS } from '../../physics/index.js';
 import type { MonthlyClimate } from '../../checks/monthly-climate.js';
-import { isAirLayer, type AirCondition, type WallInput } from './wall-input.js';
+import type { NumberRange } from '../../base/number-range.js';
+import { combinedPathCount, MAXIMUM_COMBINED_PATHS } from './wall-combined-method.js';
+import { isAirLayer, type AirCondition, type WallInput, type WallMaterialLayer } from './wall-input.js';
 import { ventOpeningQuantity } from './vent-opening.js';
 
 const VENTILATIONS = ['unventilated', 'slightly-ventilated', 'well-ventilated'] as const;
@@ -120,7 +122,9 @@ export function validateWallInput(input: WallInput): void {
     if (!layer.material || typeof layer.material !== 'object' || !layer.material.conductivity) {
       throw new InputError(`${f}.material`, `${f}.material must give the material's properties, at least its conductivity in W/(m·K).`);
     }
+    validateLayerBridgesAndCorrections(layer, f);
   });
+  requireFewEnoughPaths(input);
   requireAirCondition('inside', input.inside);
   requireAirCondition('outside', input.outside);
   const rs = input.surfaceResistances ?? 'standard';
@@ -149,4 +153,98 @@ export function validateWallInput(input: WallInput): void {
     }
   }
   if (input.moisture?.climate !== undefined) validateClimate('moisture.climate', input.moisture.climate);
+  if (input.targetU !== undefined) validateTargetU(input);
+}
+
+/** Most bridges one layer may carry. */
+export const MAXIMUM_BRIDGES_PER_LAYER = 8;
+/** Area fraction of a bridge: 0 (none) up to but not including the whole face. */
+export const BRIDGE_FRACTION_RANGE: NumberRange = { min: 0, max: 1, maxExclusive: true, unit: '(a share of the face area)' };
+/** Fastener figures (ISO 6946 Annex F): conductivity, number per m², cross-section of one fastener. */
+export const FASTENER_RANGES = {
+  conductivity: QUANTITY_RANGES.conductivity,
+  perSquareMetre: { min: 0, minExclusive: true, max: 1000, unit: 'per m²' },
+  crossSectionArea: { min: 0, minExclusive: true, max: 0.01, unit: 'm²' },
+} as const satisfies Record<string, NumberRange>;
+/** A target U-value, W/(m²·K). */
+export const TARGET_U_RANGE: NumberRange = { min: 0, minExclusive: true, max: 10, unit: 'W/(m²·K)' };
+/** Most thicknesses a target-U series may list. */
+export const MAXIMUM_TARGET_THICKNESSES = 100;
+
+/** The bridges of a material layer, its air-gap level and its fasteners. */
+function validateLayerBridgesAndCorrections(layer: WallMaterialLayer, f: string): void {
+  if (layer.bridges !== undefined) {
+    if (!Array.isArray(layer.bridges) || layer.bridges.length < 1 || layer.bridges.length > MAXIMUM_BRIDGES_PER_LAYER) {
+      throw new InputError(`${f}.bridges`, `${f}.bridges must list 1 to ${MAXIMUM_BRIDGES_PER_LAYER} bridging sections (or be left out for a homogeneous layer).`);
+    }
+    layer.bridges.forEach((b, k) => {
+      const g = `${f}.bridges[${k}]`;
+      if (!b || typeof b !== 'object') throw new InputError(g, `${g} must be an object { material or materialId, fraction }.`);
+      if (!b.material || typeof b.material !== 'object' || !b.material.conductivity) {
+        throw new InputError(`${g}.material`, `${g}.material must give the bridge's properties, at least its conductivity in W/(m·K).`);
+      }
+      requireNumberIn(`${g}.fraction`, b.fraction, BRIDGE_FRACTION_RANGE);
+    });
+    const bridged = layer.bridges.reduce((s, b) => s + b.fraction, 0);
+    if (!(bridged < 1)) {
+      throw new InputError(
+        `${f}.bridges`,
+        `${f}.bridges: the fractions add up to ${Number(bridged.toPrecision(6))}, but they must add up to less than 1, the rest of the area being the layer's own material.`,
+      );
+    }
+  }
+  if (layer.airGapLevel !== undefined && !([0, 1, 2] as unknown[]).includes(layer.airGapLevel)) {
+    throw new InputError(`${f}.airGapLevel`, `${f}.airGapLevel must be 0, 1 or 2 (the ISO 6946 levels of air gaps) (got ${shown(layer.airGapLevel)}).`);
+  }
+  const fasteners = layer.fasteners;
+  if (fasteners !== undefined) {
+    if (!fasteners || typeof fasteners !== 'object') {
+      throw new InputError(`${f}.fasteners`, `${f}.fasteners must be an object { conductivity, perSquareMetre, crossSectionArea, lengthInLayer }.`);
+    }
+    requireNumberIn(`${f}.fasteners.conductivity`, fasteners.conductivity, FASTENER_RANGES.conductivity);
+    requireNumberIn(`${f}.fasteners.perSquareMetre`, fasteners.perSquareMetre, FASTENER_RANGES.perSquareMetre);
+    requireNumberIn(`${f}.fasteners.crossSectionArea`, fasteners.crossSectionArea, FASTENER_RANGES.crossSectionArea);
+    if (fasteners.lengthInLayer !== undefined) {
+      const thickness = (v: number, si: string, bare = true) => enteredPart(v, 'thickness', si, bare);
+      const d1 = requireFinite(`${f}.fasteners.lengthInLayer`, fasteners.lengthInLayer, 'm', 'thickness');
+      if (!(d1 > 0 && d1 <= layer.thickness)) {
+        throw new InputError(`${f}.fasteners.lengthInLayer`, [
+          `${f}.fasteners.lengthInLayer must be greater than `,
+          thickness(0, '0'),
+          ' and at most the layer thickness ',
+          thickness(layer.thickness, `${layer.thickness} m`, false),
+          ' (got ',
+          thickness(d1, String(d1)),
+          ').',
+        ]);
+      }
+    }
+  }
+}
+
+/** The upper limit of the combined method takes every combination of sections: their number is bounded. */
+function requireFewEnoughPaths(input: WallInput): void {
+  const counts = input.layers.flatMap((l) => (!isAirLayer(l) && l.bridges && l.bridges.length > 0 ? [l.bridges.length + 1] : []));
+  const paths = combinedPathCount(counts);
+  if (paths > MAXIMUM_COMBINED_PATHS) {
+    throw new InputError('layers', `layers: the bridged layers make ${paths} parallel paths through the element (the product of their sections), but at most ${MAXIMUM_COMBINED_PATHS} are supported.`);
+  }
+}
+
+function validateTargetU(input: WallInput): void {
+  const t = input.targetU!;
+  if (!t || typeof t !== 'object') throw new InputError('targetU', 'targetU must be an object { layer, thicknesses, value }.');
+  const layer = input.layers[t.layer];
+  if (typeof t.layer !== 'number' || !Number.isInteger(t.layer) || !layer || isAirLayer(layer)) {
+    throw new InputError('targetU.layer', `targetU.layer must name one of the material layers (got ${shown(t.layer)}).`);
+  }
+  const ventilated = input.layers.findIndex((l) => isAirLayer(l) && l.ventilation === 'well-ventilated');
+  if (ventilated >= 0 && t.layer > ventilated) {
+    throw new InputError('targetU.layer', `targetU.layer must name a layer that counts in the U-value, not one outside the well ventilated air layer layers[${ventilated}] (got layers[${t.layer}]).`);
+  }
+  if (!Array.isArray(t.thicknesses) || t.thicknesses.length < 1 || t.thicknesses.length > MAXIMUM_TARGET_THICKNESSES) {
+    throw new InputError('targetU.thicknesses', `targetU.thicknesses must list 1 to ${MAXIMUM_TARGET_THICKNESSES} thicknesses in m, or give { from, to, step }.`);
+  }
+  t.thicknesses.forEach((d, k) => requireNumberIn(`targetU.thicknesses[${k}]`, d, QUANTITY_RANGES.wallLayerThickness));
+  requireNumberIn('targetU.value', t.value, TARGET_U_RANGE);
 }

@@ -18,6 +18,8 @@ import { EditHistory } from './edit-history.js';
 import { storedValueFor } from './field-text.js';
 import { refusalText } from './refusal-text.js';
 import { SolveClient, type TimedAnswer } from './solve-client.js';
+import { shownSizingPaths } from './sizing-fields.js';
+import type { SizingResult } from '../../../app/cases/sizing/sizing-model.js';
 
 /** Pause after the last edit before saving (as the project details wait). */
 export const CASE_SAVE_DELAY_MS = 400;
@@ -37,6 +39,8 @@ export class CaseEditorState {
   /** The engine's refusal of the current document, if any. */
   refusal = $state.raw<{ readonly field: string | null; readonly message: string } | null>(null);
   report = $state.raw<CaseReport | null>(null);
+  /** The last good sizing of a case with a "sizing" block (it stays, out of date, while the input is refused). */
+  sizing = $state.raw<SizingResult | null>(null);
   layerMeans = $state.raw<Readonly<Record<string, number>>>({});
   solveMs = $state<number | null>(null);
   roundTripMs = $state<number | null>(null);
@@ -98,7 +102,7 @@ export class CaseEditorState {
   /** Where the engine's complaint shows: the field's path, or null for the case as a whole. */
   readonly refusalField = $derived.by(() => {
     if (!this.refusal) return null;
-    const shown = new Set([...shownFields(this.kind, this.doc).map((f) => f.path), ...buildUpPaths(this.kind, this.doc)]);
+    const shown = new Set([...shownFields(this.kind, this.doc).map((f) => f.path), ...buildUpPaths(this.kind, this.doc), ...shownSizingPaths(this.kind, this.doc)]);
     return fieldForError(this.refusal.field === null ? undefined : normaliseMaterialPath(this.refusal.field), shown);
   });
 
@@ -206,6 +210,7 @@ export class CaseEditorState {
     }
     this.refusal = null;
     this.report = answer.report;
+    this.sizing = answer.sizing;
     this.layerMeans = answer.layerMeans;
     this.goodDoc = this.doc;
     if (this.goodDoc !== this.stored) this.scheduleSave();

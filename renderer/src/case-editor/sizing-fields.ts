@@ -11,7 +11,8 @@ import { QUANTITY_RANGES as R } from '../../../app/base/quantity-ranges.js';
 import type { SizingCriterionName } from '../../../app/cases/sizing/sizing-model.js';
 import type { CaseKindName, FormField, NumberField, TextField } from './case-form-fields.js';
 import { hintValue } from './field-text.js';
-import { ECONOMICS_START } from './sizing-block.js';
+import type { Json } from './case-paths.js';
+import { criterionOn, ECONOMICS_START, economicsOn, seriesChoice, sizingBlock } from './sizing-block.js';
 
 const S = 'sizing';
 const range = (min: number, max: number, unit: string, open: 'min' | 'none' = 'none'): NumberRange => ({ min, max, unit, ...(open === 'min' ? { minExclusive: true } : {}) });
@@ -97,4 +98,10 @@ export function sizingPaths(kind: CaseKindName, on: (criterion: SizingCriterionN
     ...criteria.filter(on).flatMap((c) => [`${S}.criteria.${c}`, ...criterionFields(c, kind).map((f) => f.path)]),
     ...(economics ? [`${S}.economics`, `${S}.economics.costTable`, ...ECONOMICS_FIELDS.map((f) => f.path)] : []),
   ];
+}
+
+/** The paths of the sizing panel's boxes for the case as it is now (none when sizing is off, or for a wall). */
+export function shownSizingPaths(kind: CaseKindName, doc: Json): string[] {
+  if (kind === 'wall' || sizingBlock(doc) === undefined) return [];
+  return sizingPaths(kind, (c) => criterionOn(doc, c), economicsOn(doc), seriesChoice(doc) === 'range');
 }

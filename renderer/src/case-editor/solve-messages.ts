@@ -4,6 +4,7 @@ import type { UnitSystem } from '../../../app/base/unit-systems.js';
 import type { Sentence } from '../../../app/base/quantity-sentence.js';
 import type { CaseReport } from '../../../app/report/report-model.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
+import type { SizingResult } from '../../../app/cases/sizing/sizing-model.js';
 
 export interface SolveRequest {
   readonly id: number;
@@ -23,6 +24,8 @@ export type SolveAnswer =
       readonly report: CaseReport;
       /** Mean temperature (°C) of each material slot's layer, by slot path ("layers[1]", "jacket"). */
       readonly layerMeans: Readonly<Record<string, number>>;
+      /** The table across the thickness series and the choice, for a case with a "sizing" block. */
+      readonly sizing: SizingResult | null;
       /** Time the solve took inside the worker, ms. */
       readonly solveMs: number;
     }
