@@ -19,6 +19,8 @@ export interface QuantityKind {
 export const QUANTITIES = {
   temperature: { unit: '°C', precision: { decimals: 1 } },
   temperatureDifference: { unit: 'K', precision: { decimals: 1 } },
+  /** A fluid's change of temperature along a run: often a few tenths of a kelvin, against a limit of as little. */
+  fluidTemperatureChange: { unit: 'K', precision: { decimals: 2 } },
   heatFlowPerLength: { unit: 'W/m', precision: { significant: 3 } },
   heatFlux: { unit: 'W/m²', precision: { significant: 3 } },
   heatFlow: { unit: 'W', precision: { significant: 3 } },

@@ -62,6 +62,7 @@ const dec = (decimals: number): Precision => ({ decimals });
 const US_CUSTOMARY = {
   temperature: { unit: '°F', precision: dec(1), storedPerShown: U.fahrenheitDegree, shownAtStoredZero: FAHRENHEIT_AT_ZERO_CELSIUS },
   temperatureDifference: { unit: '°F', precision: dec(1), storedPerShown: U.fahrenheitDegree },
+  fluidTemperatureChange: { unit: '°F', precision: dec(2), storedPerShown: U.fahrenheitDegree },
   heatFlowPerLength: { unit: 'Btu/(h·ft)', precision: sig(3), storedPerShown: U.btuPerHourFoot },
   heatFlux: { unit: 'Btu/(h·ft²)', precision: sig(3), storedPerShown: U.btuPerHourSquareFoot },
   heatFlow: { unit: 'Btu/h', precision: sig(3), storedPerShown: U.btuPerHour },

@@ -103,6 +103,7 @@ describe('the unit systems', () => {
     expect(labels).toEqual({
       temperature: '°F',
       temperatureDifference: '°F',
+      fluidTemperatureChange: '°F',
       heatFlowPerLength: 'Btu/(h·ft)',
       heatFlux: 'Btu/(h·ft²)',
       heatFlow: 'Btu/h',

@@ -62,10 +62,10 @@ describe('sizingSection of a hot pipe sized to a surface limit, with economics',
     const criteria = tables(section).find((t) => t.title === 'Each criterion switched on, at each thickness')!;
     expect(criteria.columns.map((c) => c.label)).toEqual(['Thickness', 'Surface temperature limit', 'Least lifecycle cost', 'Choice']);
     expect(tableCellTexts(criteria).map((r) => r.slice(1, 3))).toEqual([
-      ['fails by 7.5 K', 'costs 200.0 more'],
+      ['fails by 7.5 K', 'costs 200.0 EUR more'],
       ['fails by 2.1 K', 'least cost'],
-      ['met', 'costs 20.00 more'],
-      ['met', 'costs 60.00 more'],
+      ['met', 'costs 20.00 EUR more'],
+      ['met', 'costs 60.00 EUR more'],
     ]);
   });
 

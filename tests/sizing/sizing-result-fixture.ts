@@ -45,6 +45,7 @@ export const HOT: SizingResult = {
   choice: { kind: 'chosen', thickness: 0.04, governing: 'maxSurfaceTemperature', reason: 'The surface temperature limit is the last criterion met as the thickness grows.' },
   factors: { presentValue: 15.62, annuity: 0.06403 },
   economicThickness: 0.03,
+  currency: 'EUR',
   assumptions: ['energy price 0.08 per kWh, escalating 3 % a year'],
 };
 

@@ -97,6 +97,7 @@ export function sizeInsulated(sized: SizedCase, sizing: PreparedSizing, text: Qu
     choice: chooseThickness(judged, economicRow, economicOn, text),
     factors,
     economicThickness: least?.thickness ?? null,
+    ...(economics ? { currency: economics.currency ?? 'currency units' } : {}),
     caseThickness: sized.caseThickness,
     assumptions: sweepAssumptions(sized, sizing, text),
   };

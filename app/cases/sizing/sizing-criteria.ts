@@ -75,10 +75,11 @@ export function physicalOutcomes(criteria: SizingCriteria, f: ThicknessFigures, 
     const margin = limit - Math.abs(f.temperatureDrop);
     const change = f.temperatureDrop >= 0 ? 'cools' : 'warms';
     const run = context.runLength === null ? '' : ` over the ${text.figure(context.runLength, 'length')} run`;
-    const limitText = text.given(limit, 'temperatureDifference');
+    const limitText = text.given(limit, 'fluidTemperatureChange');
+    const dk = (v: number) => text.figure(Math.abs(v), 'fluidTemperatureChange');
     push('maxTemperatureDrop', margin, margin >= 0
-      ? `The fluid ${change} by ${k(f.temperatureDrop)}${run}, within the ${limitText} allowed.`
-      : `The fluid ${change} by ${k(f.temperatureDrop)}${run}, ${k(margin)} more than the ${limitText} allowed.`);
+      ? `The fluid ${change} by ${dk(f.temperatureDrop)}${run}, within the ${limitText} allowed.`
+      : `The fluid ${change} by ${dk(f.temperatureDrop)}${run}, ${dk(margin)} more than the ${limitText} allowed.`);
   }
   if (criteria.freezeProtection && f.timeToZero !== null) {
     const c = criteria.freezeProtection;

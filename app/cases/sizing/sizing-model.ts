@@ -150,6 +150,8 @@ export interface SizingResult {
   readonly factors: { readonly presentValue: number; readonly annuity: number } | null;
   /** The thickness of least lifecycle cost (null without economics). */
   readonly economicThickness: number | null;
+  /** The currency unit of the money columns (the economics'), absent without economics. */
+  readonly currency?: string;
   /** m, the sized layer's thickness in the case as given: always one of the rows. */
   readonly caseThickness?: number;
   readonly assumptions: readonly string[];

@@ -35,7 +35,7 @@ export const SIZING_RANGES = {
   massFlow: { min: 0, minExclusive: true, max: 1e4, unit: 'kg/s', quantity: 'massFlow' },
   specificHeat: QUANTITY_RANGES.specificHeat,
   /** The most the fluid may change temperature along the run. */
-  temperatureDropLimit: { min: 0, minExclusive: true, max: 500, unit: 'K', quantity: 'temperatureDifference' },
+  temperatureDropLimit: { min: 0, minExclusive: true, max: 500, unit: 'K', quantity: 'fluidTemperatureChange' },
   /**
    * Water when the flow stops: at least 0.5 °C, above the narrow range over which the freeze model
    * spreads the latent heat (0 °C ± 0.25 K, freeze-contents.ts), so it starts liquid; at most boiling.

@@ -48,8 +48,8 @@ export function sizingSection(result: SizingResult, text: QuantityText, basis: S
     ...(rows.some((r) => r.temperatureDrop !== null)
       ? [
           {
-            column: { label: gained ? 'Fluid temperature rise over the run' : 'Fluid temperature drop over the run', quantity: 'temperatureDifference' as const },
-            cell: (r: SizingRow): ReportCell => ({ value: r.temperatureDrop === null ? null : Math.abs(r.temperatureDrop), quantity: 'temperatureDifference' }),
+            column: { label: gained ? 'Fluid temperature rise over the run' : 'Fluid temperature drop over the run', quantity: 'fluidTemperatureChange' as const },
+            cell: (r: SizingRow): ReportCell => ({ value: r.temperatureDrop === null ? null : Math.abs(r.temperatureDrop), quantity: 'fluidTemperatureChange' }),
           },
         ]
       : []),
@@ -71,15 +71,17 @@ export function sizingSection(result: SizingResult, text: QuantityText, basis: S
     rows: rows.map((r) => [lead(r), ...heatColumns.map((c) => c.cell(r)), choiceMark(r, result)]),
   };
 
+  // Money is never converted: its unit is the economics' currency, written into the labels.
+  const currency = result.currency ?? 'currency units';
   const costTitle = `Cost and CO₂ across the thickness series, ${per}`;
   const costTable: ReportTable = {
     title: costTitle,
     columns: withLead([
-      { label: 'Energy cost per year', quantity: 'moneyPerYear' },
+      { label: `Energy cost per year (${currency}/a)`, quantity: 'moneyPerYear' },
       { label: 'CO₂ per year', quantity: 'emissionsPerYear' },
-      { label: 'Installed cost of the insulation', quantity: 'money' },
-      { label: 'Energy cost over the years, present value', quantity: 'money' },
-      { label: 'Lifecycle cost', quantity: 'money' },
+      { label: `Installed cost of the insulation (${currency})`, quantity: 'money' },
+      { label: `Energy cost over the years, present value (${currency})`, quantity: 'money' },
+      { label: `Lifecycle cost (${currency})`, quantity: 'money' },
     ]),
     rows: rows.map((r) => [
       lead(r),
@@ -135,7 +137,7 @@ export function sizingSection(result: SizingResult, text: QuantityText, basis: S
             chart: {
               title: 'Lifecycle cost against thickness',
               x,
-              y: { label: `cost ${per}`, quantity: 'money' as const },
+              y: { label: `cost ${per} (${currency})`, quantity: 'money' as const },
               series: [
                 { name: 'installed cost of the insulation', points: points(rows, (r) => r.insulationCost) },
                 { name: 'energy cost over the years, present value', points: points(rows, presentEnergyCost) },

@@ -41,8 +41,9 @@ export function marginQuantity(criterion: SizingCriterionName, basis: SizingBasi
   switch (criterion) {
     case 'maxSurfaceTemperature':
     case 'noCondensation':
-    case 'maxTemperatureDrop':
       return 'temperatureDifference';
+    case 'maxTemperatureDrop':
+      return 'fluidTemperatureChange';
     case 'maxHeatLoss':
       return heatQuantity(basis);
     case 'freezeProtection':
@@ -83,7 +84,7 @@ export function outcomeCell(outcome: CriterionOutcome | undefined, row: SizingRo
   if (outcome.criterion === 'economic') {
     const least = leastLifecycleCost(result);
     if (outcome.met) return 'least cost';
-    return least === null || row.lifecycleCost === null ? 'not the least cost' : `costs ${text.number(row.lifecycleCost - least, 'money')} more`;
+    return least === null || row.lifecycleCost === null ? 'not the least cost' : `costs ${text.number(row.lifecycleCost - least, 'money')} ${result.currency ?? 'currency units'} more`;
   }
   if (outcome.met) return 'met';
   const quantity = marginQuantity(outcome.criterion, basis)!;

@@ -55,7 +55,7 @@ export function criterionFields(criterion: SizingCriterionName, kind: CaseKindNa
       return [
         number(`${c}.massFlow`, 'Mass flow of the fluid', 'massFlow', range(0, 1e4, 'kg/s', 'min'), 0.5),
         number(`${c}.specificHeat`, 'Specific heat of the fluid', 'specificHeat', R.specificHeat, 4190),
-        number(`${c}.limit`, 'Most the fluid temperature may change along the run', 'temperatureDifference', range(0, 500, 'K', 'min'), 2),
+        number(`${c}.limit`, 'Most the fluid temperature may change along the run', 'fluidTemperatureChange', range(0, 500, 'K', 'min'), 2),
       ];
     case 'freezeProtection':
       return [

@@ -49,7 +49,7 @@ export function sizingTable(result: SizingResult, system: UnitSystem, basis: Siz
     { header: header('Above dew point', 'temperatureDifference'), cell: (r) => value(r.dewPointMargin, 'temperatureDifference') },
   ];
   if (rows.some((r) => r.temperatureDrop !== null)) {
-    columns.push({ header: header('Fluid change along the run', 'temperatureDifference'), cell: (r) => value(r.temperatureDrop === null ? null : Math.abs(r.temperatureDrop), 'temperatureDifference') });
+    columns.push({ header: header('Fluid change along the run', 'fluidTemperatureChange'), cell: (r) => value(r.temperatureDrop === null ? null : Math.abs(r.temperatureDrop), 'fluidTemperatureChange') });
   }
   if (rows.some((r) => r.timeToZero !== null)) columns.push({ header: header(`Time to ${text.given(0, 'temperature')}`, 'timeHours'), cell: (r) => value(r.timeToZero, 'timeHours') });
   if (rows.some((r) => r.timeToFraction !== null)) columns.push({ header: header('Time to the frozen part', 'timeHours'), cell: (r) => value(r.timeToFraction, 'timeHours') });
