@@ -65,7 +65,7 @@ describe('the table across the series', () => {
     expect(table.rows.map((r) => r.chosen)).toEqual([false, false, true, false]);
     const first = table.rows[0]!.cells[5]!;
     expect(first).toEqual({ text: 'fails by 7.5 K', reason: 'The surface must be at most 55 °C; it is 62.5 °C.', numeric: false });
-    expect(table.rows[2]!.cells.map((c) => c.text)).toEqual(['40.0', '38.0', '52.4', '42.4', '720.0', 'met', 'costs 20.00 more', 'chosen']);
+    expect(table.rows[2]!.cells.map((c) => c.text)).toEqual(['40.0', '38.0', '52.4', '42.4', '720.0', 'met', 'costs 20.00 EUR more', 'chosen']);
   });
 
   it('reads in US units, with freeze times and a time never reached', () => {

@@ -7,7 +7,8 @@
  */
 import type { NumberRange } from '../../../app/base/number-range.js';
 import type { QuantityName } from '../../../app/base/quantities.js';
-import { QUANTITY_RANGES as R } from '../../../app/base/quantity-ranges.js';
+import { ECONOMICS_RANGES as E, ECONOMICS_YEARS, MAX_CURRENCY_LENGTH, MAX_EMISSION_SOURCE_LENGTH } from '../../../app/cases/sizing/sizing-economics-checks.js';
+import { SIZING_RANGES as R } from '../../../app/cases/sizing/sizing-ranges.js';
 import type { SizingCriterionName } from '../../../app/cases/sizing/sizing-model.js';
 import type { CaseKindName, FormField, NumberField, TextField } from './case-form-fields.js';
 import { hintValue } from './field-text.js';
@@ -15,7 +16,6 @@ import type { Json } from './case-paths.js';
 import { criterionOn, ECONOMICS_START, economicsOn, seriesChoice, sizingBlock } from './sizing-block.js';
 
 const S = 'sizing';
-const range = (min: number, max: number, unit: string, open: 'min' | 'none' = 'none'): NumberRange => ({ min, max, unit, ...(open === 'min' ? { minExclusive: true } : {}) });
 const number = (path: string, label: string, quantity: QuantityName, r: NumberRange, initial: number, extra: Partial<NumberField> = {}): NumberField => ({
   type: 'number',
   path: `${S}.${path}`,
@@ -28,12 +28,10 @@ const number = (path: string, label: string, quantity: QuantityName, r: NumberRa
 const text = (path: string, label: string, maxLength: number): TextField => ({ type: 'text', path: `${S}.${path}`, label, maxLength });
 
 export const RANGE_FIELDS: readonly NumberField[] = [
-  number('series.from', 'Thinnest to try', 'thickness', R.insulationThickness, 0.02),
-  number('series.to', 'Thickest to try', 'thickness', R.insulationThickness, 0.2),
-  number('series.step', 'Step', 'thickness', R.insulationThickness, 0.01),
+  number('series.from', 'Thinnest to try', 'thickness', R.thickness, 0.02),
+  number('series.to', 'Thickest to try', 'thickness', R.thickness, 0.2),
+  number('series.step', 'Step', 'thickness', R.step, 0.01),
 ];
-
-const MINUTE_TO_A_YEAR = range(60, 3.2e7, 's');
 
 /** Each criterion's boxes; the heat loss limit is per metre of pipe or per m² of surface. */
 export function criterionFields(criterion: SizingCriterionName, kind: CaseKindName): readonly FormField[] {
@@ -41,30 +39,30 @@ export function criterionFields(criterion: SizingCriterionName, kind: CaseKindNa
   switch (criterion) {
     case 'maxSurfaceTemperature':
       return [
-        number(`${c}.limit`, 'Hottest the surface may be', 'temperature', range(0, 100, '°C'), 60, {
+        number(`${c}.limit`, 'Hottest the surface may be', 'temperature', R.surfaceTemperatureLimit, 60, {
           whenEmpty: (_doc, context) => `the touch limit of the case (${hintValue(60, 'temperature', context.unitSystem ?? 'SI')} unless set under Checks)`,
         }),
       ];
     case 'noCondensation':
-      return [number(`${c}.margin`, 'Surface at least this far above the dew point', 'temperatureDifference', range(0, 20, 'K'), 1)];
+      return [number(`${c}.margin`, 'Surface at least this far above the dew point', 'temperatureDifference', R.condensationMargin, 1)];
     case 'maxHeatLoss':
       return kind === 'pipe'
-        ? [number(`${c}.limit`, 'Most heat lost (or gained) per length of pipe', 'heatFlowPerLength', range(0, 1e5, 'W/m', 'min'), 30)]
-        : [number(`${c}.limit`, 'Most heat lost (or gained) per area of surface', 'heatFlux', range(0, 1e5, 'W/m²', 'min'), 50)];
+        ? [number(`${c}.limit`, 'Most heat lost (or gained) per length of pipe', 'heatFlowPerLength', R.heatLossPerMetre, 30)]
+        : [number(`${c}.limit`, 'Most heat lost (or gained) per area of surface', 'heatFlux', R.heatLossPerSquareMetre, 50)];
     case 'maxTemperatureDrop':
       return [
-        number(`${c}.massFlow`, 'Mass flow of the fluid', 'massFlow', range(0, 1e4, 'kg/s', 'min'), 0.5),
+        number(`${c}.massFlow`, 'Mass flow of the fluid', 'massFlow', R.massFlow, 0.5),
         number(`${c}.specificHeat`, 'Specific heat of the fluid', 'specificHeat', R.specificHeat, 4190),
-        number(`${c}.limit`, 'Most the fluid temperature may change along the run', 'fluidTemperatureChange', range(0, 500, 'K', 'min'), 2),
+        number(`${c}.limit`, 'Most the fluid temperature may change along the run', 'fluidTemperatureChange', R.temperatureDropLimit, 2),
       ];
     case 'freezeProtection':
       return [
-        number(`${c}.initialTemperature`, 'Water temperature when the flow stops', 'temperature', range(0, 100, '°C', 'min'), 5),
-        number(`${c}.airTemperature`, 'Air temperature while it stands', 'temperature', range(-80, 0, '°C'), -10),
-        number(`${c}.windSpeed`, 'Wind speed while it stands', 'windSpeed', range(0, 60, 'm/s'), 5),
-        number(`${c}.minTimeToZero`, 'Shortest time before the water reaches 0 °C', 'timeHours', MINUTE_TO_A_YEAR, 12 * 3600),
-        number(`${c}.fraction`, 'Part of the water that may freeze', 'fraction', range(0, 1, '', 'min'), 0.25, { whenEmpty: () => 'no limit on freezing' }),
-        number(`${c}.minTimeToFraction`, 'Shortest time before that part has frozen', 'timeHours', MINUTE_TO_A_YEAR, 24 * 3600, {
+        number(`${c}.initialTemperature`, 'Water temperature when the flow stops', 'temperature', R.freezeInitialTemperature, 5),
+        number(`${c}.airTemperature`, 'Air temperature while it stands', 'temperature', R.freezeAirTemperature, -10),
+        number(`${c}.windSpeed`, 'Wind speed while it stands', 'windSpeed', R.freezeWindSpeed, 5),
+        number(`${c}.minTimeToZero`, 'Shortest time before the water reaches 0 °C', 'timeHours', R.minTimeToZero, 12 * 3600),
+        number(`${c}.fraction`, 'Part of the water that may freeze', 'fraction', R.freezeFraction, 0.25, { whenEmpty: () => 'no limit on freezing' }),
+        number(`${c}.minTimeToFraction`, 'Shortest time before that part has frozen', 'timeHours', R.minTimeToFraction, 24 * 3600, {
           whenEmpty: () => 'no limit on freezing',
         }),
       ];
@@ -76,14 +74,14 @@ export function criterionFields(criterion: SizingCriterionName, kind: CaseKindNa
 const start = (name: string): number => ECONOMICS_START[name] as number;
 
 export const ECONOMICS_FIELDS: readonly FormField[] = [
-  number('economics.energyPrice', 'Energy price per kWh delivered', 'pricePerEnergy', range(0, 1000, '', 'min'), start('energyPrice')),
-  text('economics.currency', 'Currency', 12),
-  number('economics.priceEscalation', 'Yearly rise of the energy price', 'ratePerYear', range(-0.5, 1, ''), start('priceEscalation')),
-  number('economics.generationEfficiency', 'Efficiency of heat generation (or COP of cooling)', 'factor', range(0, 10, '', 'min'), start('generationEfficiency')),
-  number('economics.discountRate', 'Discount rate', 'ratePerYear', range(0, 1, ''), start('discountRate')),
-  number('economics.years', 'Years of service', 'count', range(1, 100, ''), start('years')),
-  number('economics.emissionFactor', 'CO₂ per kWh of fuel or electricity', 'emissionFactor', range(0, 10, 'kg/kWh'), start('emissionFactor')),
-  text('economics.emissionSource', 'Where the CO₂ figure comes from', 300),
+  number('economics.energyPrice', 'Energy price per kWh purchased (fuel or electricity)', 'pricePerEnergy', E.energyPrice, start('energyPrice')),
+  text('economics.currency', 'Currency', MAX_CURRENCY_LENGTH),
+  number('economics.priceEscalation', 'Yearly rise of the energy price', 'ratePerYear', E.priceEscalation, start('priceEscalation')),
+  number('economics.generationEfficiency', 'Efficiency of heat generation (or COP of cooling)', 'factor', E.generationEfficiency, start('generationEfficiency')),
+  number('economics.discountRate', 'Discount rate', 'ratePerYear', E.discountRate, start('discountRate')),
+  number('economics.years', 'Years of service', 'count', { ...ECONOMICS_YEARS, unit: '' }, start('years')),
+  number('economics.emissionFactor', 'CO₂ per kWh of fuel or electricity', 'emissionFactor', E.emissionFactor, start('emissionFactor')),
+  text('economics.emissionSource', 'Where the CO₂ figure comes from', MAX_EMISSION_SOURCE_LENGTH),
 ];
 
 /** The paths of every box of the panel the case shows now, for placing the engine's complaints beside them. */
