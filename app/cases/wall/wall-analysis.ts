@@ -29,6 +29,8 @@ import { wallStateSolver } from './wall-states.js';
 import { buildThermalStack } from './wall-thermal-stack.js';
 import { validateWallInput } from './wall-validation.js';
 import { wallVapourLayers } from './wall-vapour-layers.js';
+import { targetUSeries, type TargetUResult } from './wall-target-u.js';
+import { bridgingWarnings } from './wall-bridging-warnings.js';
 
 export interface WallAnalysis {
   readonly wall: WallResult;
@@ -40,8 +42,10 @@ export interface WallAnalysis {
   readonly checks: readonly CheckResult[];
   /** Engine solves this analysis made (each state once; a linear wall needs one per stack). */
   readonly solves: number;
-  /** Conductivity curves read beyond their data or service range at the design condition. */
+  /** Conductivity curves read beyond their data or service range at the design condition, and bridging the combined method handles poorly. */
   readonly warnings: readonly string[];
+  /** The thickness series for the case's target U-value; null when the case names none. */
+  readonly targetU: TargetUResult | null;
 }
 
 /**
@@ -106,7 +110,17 @@ export function analyseValidatedWall(input: WallInput, text: QuantityText): Wall
 
   const checks = [mould.mould, mould.surfaceCondensation, interstitialDesign.check, ...(interstitialMonthly ? [interstitialMonthly.check] : [])];
   const wall = wallResultOf(input, stack, design);
-  return { wall, mould, interstitialDesign, interstitialMonthly, checks, solves: 1 + states.solves() + mouldStates.solves(), warnings: wallConductivityWarnings(input, wall, text) };
+  const targetU = input.targetU ? targetUSeries(input, input.targetU) : null;
+  return {
+    wall,
+    mould,
+    interstitialDesign,
+    interstitialMonthly,
+    checks,
+    solves: 1 + states.solves() + mouldStates.solves() + (targetU?.solves ?? 0),
+    warnings: [...wallConductivityWarnings(input, wall, text), ...bridgingWarnings(input, wall, text)],
+    targetU,
+  };
 }
 
 /** Each material layer's λ(θ) against its table's points and its service range, at the design condition. */

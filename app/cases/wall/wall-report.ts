@@ -19,6 +19,7 @@ import { isAirLayer, type WallInput } from './wall-input.js';
 import { ventOpeningQuantity } from './vent-opening.js';
 import { conditionPhrase, insideHumidityWords, interstitialSection, monthlySection, mouldSection, wallVerdicts } from './wall-moisture-report.js';
 import { withFields } from '../with-fields.js';
+import { bridgingAssumptions, bridgingSources, combinedMethodSections, correctionSections, targetUSections } from './wall-bridging-report.js';
 
 const LAYER_TABLE = 'Layers, inside to outside, with the surface resistances';
 
@@ -32,16 +33,35 @@ export function wallReport(input: WallInput, analysis: WallAnalysis, text: Quant
     title: input.name ?? 'Wall or roof',
     subject: subjectOf(input, text),
     keyFigures: [
-      { label: 'U-value', value: w.uValue, quantity: 'uValue', note: `unrounded ${text.figure(w.uValue, 'uValueUnrounded')}` },
+      ...(w.corrections !== null
+        ? [{ label: 'U-value with corrections (ISO 6946 Annex F)', value: w.correctedUValue, quantity: 'uValue' as const, note: `unrounded ${text.figure(w.correctedUValue, 'uValueUnrounded')}` }]
+        : []),
+      {
+        label: w.corrections !== null ? 'U-value before corrections' : 'U-value',
+        value: w.uValue,
+        quantity: 'uValue',
+        note: `unrounded ${text.figure(w.uValue, 'uValueUnrounded')}${w.combinedMethod !== null ? `; combined method, within ±${text.figure(w.combinedMethod.relativeError, 'fraction')}` : ''}`,
+      },
       { label: 'Total thermal resistance R_T', value: w.totalResistance, quantity: 'thermalResistance', note: 'surface to surface plus R_si and R_se' },
       { label: 'Inside surface temperature', value: w.insideSurfaceTemperature, quantity: 'temperature', note: `at the design condition, with R_si = ${text.figure(w.insideSurfaceResistance, 'thermalResistance')}` },
       { label: 'Heat flow density', value: w.heatFlowDensity, quantity: 'heatFlux', note: 'from the inside to the outside' },
       { label: 'Heat flow through the whole area', value: w.heatFlow, quantity: 'heatFlow' },
     ],
     verdicts,
-    sections: [conditionsSection(input, analysis), layersSection(input, analysis), surfaceResistanceSection(input, analysis, text), mouldSection(analysis, text), interstitialSection(analysis), ...(monthly ? [monthly] : []), ...dynamicSections(w, text)],
+    sections: [
+      conditionsSection(input, analysis),
+      layersSection(input, analysis),
+      ...combinedMethodSections(w, text),
+      ...correctionSections(w, text),
+      ...targetUSections(analysis, text),
+      surfaceResistanceSection(input, analysis, text),
+      mouldSection(analysis, text),
+      interstitialSection(analysis),
+      ...(monthly ? [monthly] : []),
+      ...dynamicSections(w, text),
+    ],
     energyBalance: withFields(w.energyBalance, { quantity: 'heatFlux' as const }),
-    assumptions: assumptionsOf(input, analysis),
+    assumptions: assumptionsOf(input, analysis, text),
     warnings: analysis.warnings.map(asSentence),
     sources: sourcesOf(input, analysis, text),
     cautions: distinctCautions(verdicts),
@@ -98,7 +118,13 @@ function layersSection(input: WallInput, a: WallAnalysis): ReportSection {
     rows: [
       ['inside surface resistance R_si', blank('thickness'), blank('conductivity'), r(w.insideSurfaceResistance), blank('temperature'), blank('temperature')],
       ...w.layers.map((l): ReportCell[] => [
-        l.included ? (l.kind === 'air-layer' ? `${l.name} (air layer)` : l.name) : `${l.name} (not counted: outside a well ventilated air layer)`,
+        l.included
+          ? l.kind === 'air-layer'
+            ? `${l.name} (air layer)`
+            : l.bridged
+              ? `${l.name} (bridged: equivalent λ of the combined method)`
+              : l.name
+          : `${l.name} (not counted: outside a well ventilated air layer)`,
         { value: l.thickness, quantity: 'thickness' },
         { value: l.kind === 'air-layer' ? null : l.effectiveConductivity, quantity: 'conductivity' },
         r(l.thermalResistance),
@@ -191,7 +217,7 @@ function surfaceResistanceSection(input: WallInput, a: WallAnalysis, text: Quant
   };
 }
 
-function assumptionsOf(input: WallInput, a: WallAnalysis): string[] {
+function assumptionsOf(input: WallInput, a: WallAnalysis, text: QuantityText): string[] {
   const v = a.wall.ventilation;
   const ventilated =
     v.rule === 'well-ventilated'
@@ -201,10 +227,13 @@ function assumptionsOf(input: WallInput, a: WallAnalysis): string[] {
         : [];
   return [
     'Steady state at each condition: no heat or moisture storage in the layers.',
-    'One-dimensional: no thermal bridges, fixings or joints.',
+    a.wall.combinedMethod !== null || a.wall.corrections !== null
+      ? 'One-dimensional apart from the bridged layers and corrections stated: no other thermal bridges, fixings or joints.'
+      : 'One-dimensional: no thermal bridges, fixings or joints.',
     'Vapour moves by diffusion only: no air leakage, rain or built-in moisture.',
     ...ventilated,
     ...(input.moisture?.insideHumidity?.kind === 'class' ? [] : ['The inside relative humidity as given holds in every month.']),
+    ...bridgingAssumptions(input, a.wall, text),
     ...dynamicAssumptions(input, a.wall),
   ].map(asSentence);
 }
@@ -216,7 +245,9 @@ function sourcesOf(input: WallInput, a: WallAnalysis, text: QuantityText): strin
   const materials = new Set<string>();
   for (const l of input.layers) {
     if (isAirLayer(l)) continue;
-    materials.add(asSentence(`${l.material.name}: ${l.material.source && l.material.source.trim() !== '' ? l.material.source : 'no source given with the material'}`));
+    for (const m of [l.material, ...(l.bridges ?? []).map((b) => b.material)]) {
+      materials.add(asSentence(`${m.name}: ${m.source && m.source.trim() !== '' ? m.source : 'no source given with the material'}`));
+    }
   }
   return [
     `U-value and temperatures: ISO 6946 method, solved as a one-dimensional finite-element problem (${a.solves === 1 ? 'one engine solve' : `${a.solves} engine solves`} for the whole analysis); the U-value rounded to ${moistureParameters.uValueSignificantFigures.value} significant figures as the standard presents it (${moistureParameters.uValueSignificantFigures.label}).`,
@@ -226,6 +257,7 @@ function sourcesOf(input: WallInput, a: WallAnalysis, text: QuantityText): strin
     `Saturation pressure: ${iso.source} formulas (${iso.label}).`,
     ...(humidity?.kind === 'class' ? [`Internal humidity classes: ${humidityClasses.source} (${humidityClasses.label}).`] : []),
     ...(input.moisture?.climate ? [`Climate ${input.moisture.climate.name}: ${input.moisture.climate.label}.`] : []),
+    ...bridgingSources(a.wall, a),
     ...dynamicSources(a.wall),
     ...materials,
   ];
