@@ -6,7 +6,8 @@
  *     conductivity and a surface-temperature-dependent film (convection + radiation);
  *  2. time per unknown from 1e3 to 1e6 nodes (linear growth shows as a flat column);
  *  3. the band solver against ml-matrix's dense LU on the same tridiagonal systems (n = 250, 500, 1000);
- *  4. a 40-case project's report to PDF in Chromium (report-bench.ts).
+ *  4. a 40-case project's report to PDF in Chromium (report-bench.ts);
+ *  5. a pipe case sized across 12 thicknesses against one solveCase of it (sizing-bench.ts).
  */
 import { execFileSync } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
@@ -18,6 +19,7 @@ import { caseContext } from '../../main/cases/case-context.js';
 import { BandedMatrix, solveBanded, solveSteady, type SteadyProblem } from '../../app/fe/index.js';
 import { outerSurfaceExchange } from '../../app/physics/index.js';
 import { reportBench } from './report-bench.js';
+import { sizingBench } from './sizing-bench.js';
 
 function median(values: number[]): number {
   const s = [...values].sort((a, b) => a - b);
@@ -150,3 +152,4 @@ for (const n of [250, 500, 1000]) {
 
 console.log('');
 await reportBench();
+sizingBench();
