@@ -88,6 +88,7 @@ export function pipeSizedCase(input: PipeInput, caseResult: PipeResult, sizing: 
       temperatureDrop: drop ? runDrop(variant, drop, text, start).drop : null,
       timeToZero: frozen ? frozen.timeToZero : null,
       timeToFraction: frozen ? frozen.timeToFraction : null,
+      timeToFirstIce: frozen ? frozen.timeToFirstIce : null,
       start,
     };
   };

@@ -74,6 +74,7 @@ export function sizeInsulated(sized: SizedCase, sizing: PreparedSizing, text: Qu
       temperatureDrop: figures.temperatureDrop,
       timeToZero: figures.timeToZero,
       timeToFraction: figures.timeToFraction,
+      timeToFirstIce: figures.timeToFirstIce ?? null,
       annualEnergy,
       annualEnergyCost: money?.annualEnergyCost ?? null,
       annualEmissions: money?.annualEmissions ?? null,

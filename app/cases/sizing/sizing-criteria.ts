@@ -23,6 +23,8 @@ export interface ThicknessFigures {
   /** s; Infinity when never reached in the simulated time; null when not computed. */
   readonly timeToZero: number | null;
   readonly timeToFraction: number | null;
+  /** s, until ice first forms at the pipe wall (shown beside the time to 0 °C, not judged); absent when not computed. */
+  readonly timeToFirstIce?: number | null;
 }
 
 export interface CriteriaContext {

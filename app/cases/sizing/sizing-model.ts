@@ -113,6 +113,8 @@ export interface SizingRow {
   /** s (null when off, Infinity when never within the simulated time). */
   readonly timeToZero: number | null;
   readonly timeToFraction: number | null;
+  /** s, until ice first forms, at the pipe wall: earlier than the centre reaches 0 °C (null when off). */
+  readonly timeToFirstIce?: number | null;
   /** kWh/a of delivered heat lost (or gained). */
   readonly annualEnergy: number;
   /** Per year, at the first year's price (null without economics). */

@@ -45,6 +45,13 @@ export function sizingSection(result: SizingResult, text: QuantityText, basis: S
     { column: { label: gained ? 'Heat gain' : 'Heat loss', quantity: heat }, cell: (r) => ({ value: Math.abs(r.heatLoss), quantity: heat }) },
     { column: { label: 'Surface temperature', quantity: 'temperature' }, cell: (r) => ({ value: r.surfaceTemperature, quantity: 'temperature' }) },
     { column: { label: 'Above the dew point', quantity: 'temperatureDifference' }, cell: (r) => ({ value: r.dewPointMargin, quantity: 'temperatureDifference' }) },
+    {
+      column: { label: gained ? 'Energy gained per year' : 'Energy lost per year', quantity: 'energyPerYear' },
+      cell: (r) => ({ value: Math.abs(r.annualEnergy), quantity: 'energyPerYear' }),
+    },
+  ];
+  // Along the run and after the flow stops: a table of its own, so that neither outgrows a page.
+  const runColumns: { column: ReportColumn; cell: (r: SizingRow) => ReportCell }[] = [
     ...(rows.some((r) => r.temperatureDrop !== null)
       ? [
           {
@@ -56,14 +63,18 @@ export function sizingSection(result: SizingResult, text: QuantityText, basis: S
     ...(rows.some((r) => r.timeToZero !== null)
       ? [{ column: { label: `Time until the water reaches ${text.given(0, 'temperature')}`, quantity: 'timeHours' as const }, cell: (r: SizingRow) => timeCell(r.timeToZero) }]
       : []),
+    ...(rows.some((r) => r.timeToFirstIce !== undefined && r.timeToFirstIce !== null)
+      ? [{ column: { label: 'Time until ice first forms at the pipe wall', quantity: 'timeHours' as const }, cell: (r: SizingRow) => timeCell(r.timeToFirstIce ?? null) }]
+      : []),
     ...(rows.some((r) => r.timeToFraction !== null)
       ? [{ column: { label: 'Time until the given fraction has frozen', quantity: 'timeHours' as const }, cell: (r: SizingRow) => timeCell(r.timeToFraction) }]
       : []),
-    {
-      column: { label: gained ? 'Energy gained per year' : 'Energy lost per year', quantity: 'energyPerYear' },
-      cell: (r) => ({ value: Math.abs(r.annualEnergy), quantity: 'energyPerYear' }),
-    },
   ];
+  const runTable: ReportTable = {
+    title: runTitle(rows.some((r) => r.temperatureDrop !== null), rows.some((r) => r.timeToZero !== null)),
+    columns: withLead(runColumns.map((c) => c.column)),
+    rows: rows.map((r) => [lead(r), ...runColumns.map((c) => c.cell(r)), choiceMark(r, result)]),
+  };
   const heatTitle = `${result.material} across the thickness series, ${per}`;
   const heatTable: ReportTable = {
     title: heatTitle,
@@ -117,6 +128,7 @@ export function sizingSection(result: SizingResult, text: QuantityText, basis: S
   const blocks: ReportBlock[] = [
     { kind: 'paragraphs', paragraphs: choiceParagraphs(result, text, basis) },
     { kind: 'table', table: heatTable },
+    ...(runColumns.length > 0 ? [{ kind: 'table' as const, table: runTable }] : []),
     ...(criteria.length > 0 ? [{ kind: 'table' as const, table: criteriaTable }] : []),
     {
       kind: 'chart',
@@ -203,6 +215,11 @@ function choiceParagraphs(result: SizingResult, text: QuantityText, basis: Sizin
   });
   const at = thickest ? ` At the thickest, ${of(thickest.thickness)}, ${failures.join('; ')}.` : '';
   return [`No thickness of the series meets every criterion switched on.${at}`, ...choice.failures.map((f) => asSentence(f.reason)), asSentence(choice.reason)];
+}
+
+function runTitle(drop: boolean, freeze: boolean): string {
+  const what = [drop ? 'the fluid along the run' : null, freeze ? 'the water standing still after the flow stops' : null].filter((w) => w !== null).join(', and ');
+  return `${capitalise(what)}, across the thickness series`;
 }
 
 function capitalise(words: string): string {
