@@ -6,13 +6,10 @@
  * full precision) or, with --format text, the sizing section of the case's report as a terminal
  * shows it. The sizing itself is solveCase's (SolvedCase.sizing); this only moves it to the screen.
  */
-import { renderSectionText, solveCase, type CaseContext, type SolvedCase } from '../../../app/index.js';
+import { renderSectionText } from '../../../app/index.js';
 import { isObject } from '../../../app/base/field-checks.js';
-import { caseContext, refersToLibrary } from '../../cases/case-context.js';
-import type { CliCommand, CliIO } from '../command.js';
-import { EXIT_BAD_INPUT, exitCodeOf, isInputProblem } from '../exit-code.js';
-import { parseArgs, withServices } from './materials.js';
-import { readCaseJson } from '../read-case-file.js';
+import { EXIT_BAD_INPUT } from '../exit-code.js';
+import { caseFileCommand } from './case-file-command.js';
 
 const SIZE_HELP = `lamina size CASE.json [--format json|text] [--db PATH]
 
@@ -37,40 +34,15 @@ function withoutInfinity(_key: string, value: unknown): unknown {
   return typeof value === 'number' && !Number.isFinite(value) ? 'never' : value;
 }
 
-export const sizeCommand: CliCommand = async (args, io) => {
-  const parsed = parseArgs(args, ['format', 'db'], ['help']);
-  if (typeof parsed === 'string') return usage(io, parsed);
-  if (parsed.flags.has('help')) {
-    io.stdout(SIZE_HELP);
-    return 0;
-  }
-  const format = parsed.options.get('format') ?? 'json';
-  if (format !== 'json' && format !== 'text') return usage(io, `--format must be json or text, not "${format}".`);
-  if (parsed.positional.length !== 1) return usage(io, 'give exactly one case file (or - for standard input).');
-
-  let json: unknown;
-  try {
-    json = readCaseJson(parsed.positional[0]!, io.cwd);
-  } catch (error) {
-    if (!isInputProblem(error)) throw error;
-    io.stderr(`lamina size: ${error.message}\n`);
-    return exitCodeOf(error);
-  }
+export const sizeCommand = caseFileCommand({
+  name: 'size',
+  help: SIZE_HELP,
   // Refused before solving: without the block there is nothing to size, and a plain solve is `lamina solve`.
-  if (isObject(json) && json['sizing'] === undefined) {
-    io.stderr('lamina size: sizing: the case has no "sizing" block; add one naming the layer, its thickness series and the criteria (see data/examples/sizing-*.json), or use lamina solve.\n');
-    return EXIT_BAD_INPUT;
-  }
-
-  const sizeWith = (context: CaseContext): number => {
-    let solved: SolvedCase;
-    try {
-      solved = solveCase(json, context);
-    } catch (error) {
-      // A bad field (of the case or of its "sizing" block) exits 2; a failure while solving exits 1.
-      io.stderr(`lamina size: ${(error as Error).message}\n`);
-      return exitCodeOf(error);
-    }
+  refuse: (json) =>
+    isObject(json) && json['sizing'] === undefined
+      ? 'sizing: the case has no "sizing" block; add one naming the layer, its thickness series and the criteria (see data/examples/sizing-*.json), or use lamina solve.'
+      : null,
+  print(solved, format, io) {
     const sizing = solved.sizing;
     const section = solved.report.sections.find((s) => s.id === 'sizing');
     if (!sizing || !section) {
@@ -83,12 +55,5 @@ export const sizeCommand: CliCommand = async (args, io) => {
         : `${solved.title}\n\n${renderSectionText(section)}`,
     );
     return 0;
-  };
-  if (!refersToLibrary(json)) return sizeWith(caseContext(null));
-  return withServices(io, parsed.options.get('db'), (services) => sizeWith(caseContext(services.materials)));
-};
-
-function usage(io: CliIO, message: string): number {
-  io.stderr(`lamina size: ${message} (lamina size --help)\n`);
-  return EXIT_BAD_INPUT;
-}
+  },
+});
