@@ -249,13 +249,13 @@ describe('corrections to U (ISO 6946 Annex F), by hand', () => {
     expect(r.correctedUValue).toBe(r.uValue);
   });
 
-  it('the warm-deck example reports its fastener correction and the corrected U first', () => {
+  it('the warm-deck example reports its fastener correction and the corrected U as a key figure', () => {
     const solved = solveCase(readJson('data/examples/wall-flat-roof-warm-deck.json'), caseContext(null));
     const w = (solved.result as { wall: ReturnType<typeof calculateWall> }).wall;
     // R_1 = 0.12/0.022 = 5.454545; ΔU_f = 0.8·50·6·1.81e-5/0.12·(5.454545/R_T,h)².
     const expected = ((0.8 * 50 * 6 * 1.81e-5) / 0.12) * (5.454545454545 / w.corrections!.resistanceIgnoringBridges) ** 2;
     expect(w.corrections!.total).toBeCloseTo(expected, 9);
-    expect(solved.report.keyFigures[0]!.value).toBeCloseTo(w.uValue + expected, 9);
+    expect(solved.report.keyFigures.find((f) => f.label.startsWith('U-value with corrections'))!.value).toBeCloseTo(w.uValue + expected, 9);
     expect(solved.report.sections.map((s) => s.id)).toContain('u-corrections');
   });
 });
@@ -371,7 +371,7 @@ describe('refusals: one sentence naming the field and the allowed range', () => 
       studs(j)['fasteners'] = { conductivity: 50, perSquareMetre: 4, crossSectionArea: 1e-5, ...f };
       return refusal(parse(j));
     };
-    expect(fastener({ perSquareMetre: 0 }).message).toBe('layers[2].fasteners.perSquareMetre must be more than 0 and at most 1000 per m² (got 0).');
+    expect(fastener({ perSquareMetre: 0 }).message).toBe('layers[2].fasteners.perSquareMetre must be more than 0 and at most 1000 fasteners per square metre of element (got 0).');
     expect(fastener({ crossSectionArea: 0.5 }).field).toBe('layers[2].fasteners.crossSectionArea');
     expect(fastener({ conductivity: 5000 }).field).toBe('layers[2].fasteners.conductivity');
     expect(fastener({ lengthInLayer: 0.2 }).message).toBe('layers[2].fasteners.lengthInLayer must be greater than 0 and at most the layer thickness 0.14 m (got 0.2).');

@@ -33,15 +33,13 @@ export function wallReport(input: WallInput, analysis: WallAnalysis, text: Quant
     title: input.name ?? 'Wall or roof',
     subject: subjectOf(input, text),
     keyFigures: [
+      { label: 'U-value', value: w.uValue, quantity: 'uValue', note: `unrounded ${text.figure(w.uValue, 'uValueUnrounded')}` },
       ...(w.corrections !== null
-        ? [{ label: 'U-value with corrections (ISO 6946 Annex F)', value: w.correctedUValue, quantity: 'uValue' as const, note: `unrounded ${text.figure(w.correctedUValue, 'uValueUnrounded')}` }]
+        ? [{ label: 'U-value with corrections U_c (ISO 6946 Annex F)', value: w.correctedUValue, quantity: 'uValue' as const, note: `unrounded ${text.figure(w.correctedUValue, 'uValueUnrounded')}; air gaps and fasteners added` }]
         : []),
-      {
-        label: w.corrections !== null ? 'U-value before corrections' : 'U-value',
-        value: w.uValue,
-        quantity: 'uValue',
-        note: `unrounded ${text.figure(w.uValue, 'uValueUnrounded')}${w.combinedMethod !== null ? `; combined method, within ±${text.figure(w.combinedMethod.relativeError, 'fraction')}` : ''}`,
-      },
+      ...(w.combinedMethod !== null
+        ? [{ label: 'Largest relative error e of the combined method', value: w.combinedMethod.relativeError, quantity: 'fraction' as const, note: 'bridged layers, ISO 6946' }]
+        : []),
       { label: 'Total thermal resistance R_T', value: w.totalResistance, quantity: 'thermalResistance', note: 'surface to surface plus R_si and R_se' },
       { label: 'Inside surface temperature', value: w.insideSurfaceTemperature, quantity: 'temperature', note: `at the design condition, with R_si = ${text.figure(w.insideSurfaceResistance, 'thermalResistance')}` },
       { label: 'Heat flow density', value: w.heatFlowDensity, quantity: 'heatFlux', note: 'from the inside to the outside' },

@@ -163,11 +163,11 @@ export const BRIDGE_FRACTION_RANGE: NumberRange = { min: 0, max: 1, maxExclusive
 /** Fastener figures (ISO 6946 Annex F): conductivity, number per m², cross-section of one fastener. */
 export const FASTENER_RANGES = {
   conductivity: QUANTITY_RANGES.conductivity,
-  perSquareMetre: { min: 0, minExclusive: true, max: 1000, unit: 'per m²' },
-  crossSectionArea: { min: 0, minExclusive: true, max: 0.01, unit: 'm²' },
+  perSquareMetre: { min: 0, minExclusive: true, max: 1000, unit: 'fasteners per square metre of element' },
+  crossSectionArea: { min: 0, minExclusive: true, max: 0.01, unit: 'm²', quantity: 'area' },
 } as const satisfies Record<string, NumberRange>;
 /** A target U-value, W/(m²·K). */
-export const TARGET_U_RANGE: NumberRange = { min: 0, minExclusive: true, max: 10, unit: 'W/(m²·K)' };
+export const TARGET_U_RANGE: NumberRange = { min: 0, minExclusive: true, max: 10, unit: 'W/(m²·K)', quantity: 'uValue' };
 /** Most thicknesses a target-U series may list. */
 export const MAXIMUM_TARGET_THICKNESSES = 100;
 
