@@ -412,6 +412,43 @@ describe('refusals: one sentence naming the field and the allowed range', () => 
   });
 });
 
+describe('bridged layers with the other parts of the wall method', () => {
+  it('a slightly ventilated air layer: the weighting applies to the equivalent resistance, and the engine agrees with U', () => {
+    const brick = material('brick', 0.77, 10);
+    const input = wall([
+      { material: plasterboard, thickness: 0.0125 },
+      studLayer(),
+      { kind: 'air-layer', thickness: 0.05, ventilation: 'slightly-ventilated', openingArea: 1000 },
+      { material: brick, thickness: 0.1 },
+    ]);
+    const r = calculateWall(input);
+    // ISO 6946 rule: R_T = (1500 − A_v)/1000·R_T,u + (A_v − 500)/1000·R_T,v = 0.5·R_T,u + 0.5·R_T,v (reference notes §2).
+    expect(r.totalResistance).toBeCloseTo(0.5 * r.ventilation.unventilatedTotal! + 0.5 * r.ventilation.wellVentilatedTotal!, 10);
+    // R_T,u is the combined method of the element with the air layer unventilated.
+    expect(r.ventilation.unventilatedTotal!).toBeCloseTo(r.combinedMethod!.totalResistance, 10);
+    expect(r.uValueFromHeatFlow!).toBeCloseTo(r.uValue, 10);
+  });
+
+  it('the dynamic characteristics: sections of one material match the homogeneous layer; a section without a density gives none', () => {
+    const heavy = { ...material('block', 0.5, 10), density: 1200, specificHeat: 1000 };
+    const one = calculateWall(wall([{ material: heavy, thickness: 0.2 }]));
+    const split = calculateWall(wall([{ material: heavy, thickness: 0.2, bridges: [{ material: { ...heavy, name: 'block again' }, fraction: 0.3 }] }]));
+    expect(split.dynamic!.decrementFactor).toBeCloseTo(one.dynamic!.decrementFactor, 10);
+    expect(split.dynamic!.insideArealHeatCapacity).toBeCloseTo(one.dynamic!.insideArealHeatCapacity, 6);
+    const light = calculateWall(wall([{ material: heavy, thickness: 0.2, bridges: [{ material: material('no density', 0.13), fraction: 0.1 }] }]));
+    expect(light.dynamic).toBeNull();
+  });
+
+  it('the mould check uses the combined method with its own R_si = 0.25: the inside surface is colder than with 0.13', () => {
+    const a = analyseWall(workedWall());
+    // θ_si with R_si = 0.25 from the combined R_T of that element: 20 − 25·0.25/R_T(0.25), R_T(0.25) by the formulas with 0.25 for 0.13.
+    const homogeneous = 0.25 + 0.05 + 0.1 + 0.04;
+    const upper = 1 / (0.9 / (homogeneous + 2.5) + 0.1 / (homogeneous + 0.1 / 0.13));
+    const total = (upper + homogeneous + 0.1 / 0.049) / 2;
+    expect(a.mould.insideSurfaceTemperature!).toBeCloseTo(20 - (25 * 0.25) / total, 6);
+  });
+});
+
 describe('warnings where the combined method is out of its depth', () => {
   it('a metal bridge and limits far apart', () => {
     const steel: WallBridge = { material: material('steel studs', 50, Number.POSITIVE_INFINITY), fraction: 0.01 };

@@ -194,7 +194,7 @@ export function bridgingAssumptions(input: WallInput, w: WallResult, text: Quant
           'A bridged layer stores heat as its sections do side by side (area-weighted density and heat capacity) in the dynamic characteristics (our choice).',
         ]
       : []),
-    ...(corrected ? ['Air-gap and fastener corrections (ISO 6946 Annex F) raise the U-value only; the temperatures and moisture checks are those of the element without them.'] : []),
+    ...(corrected ? ['Air-gap and fastener corrections (ISO 6946 Annex F) raise the U-value only; the heat flows, temperatures and moisture checks are those of the element without them.'] : []),
     ...(recessedClamp ? ['A recessed fastener longer than the layer is taken as crossing the whole layer.'] : []),
   ];
 }
