@@ -37,6 +37,7 @@ import { combinedMethod } from '../../app/cases/wall/wall-combined-method.js';
 import type { WallBridge, WallInput, WallMaterialLayer } from '../../app/cases/wall/wall-input.js';
 import { calculateWall } from '../../app/cases/wall/wall.js';
 import { targetUSeries } from '../../app/cases/wall/wall-target-u.js';
+import { uCorrections } from '../../app/cases/wall/wall-u-corrections.js';
 import { InputError } from '../../app/fe/index.js';
 import { caseContext } from '../../main/cases/case-context.js';
 import { material, thrownBy, wall } from './wall-fixtures.js';
@@ -247,6 +248,21 @@ describe('corrections to U (ISO 6946 Annex F), by hand', () => {
     const r = fixed({ conductivity: 0.5, perSquareMetre: 8, crossSectionArea: 1.2e-5 });
     expect(r.corrections!.fasteners[0]!.applies).toBe(false);
     expect(r.correctedUValue).toBe(r.uValue);
+  });
+
+  it('plausibility: near the χ-values of steel anchors through 30 cm of wall insulation found by 3D calculation', () => {
+    // Passivhaus Institut, Protokollband 35, Appendix A (passipedia.org, "Punctiform penetrations of
+    // thermally insulated exterior walls"), Table A1: masonry wall, 30 cm insulation, U = 0.127 W/(m²·K),
+    // four steel anchors of 6 mm per m², χ = 0.0035 W/K each → ΔU = 4·0.0035 = 0.014 W/(m²·K).
+    // The Annex F formula with λ_f = 50 W/(m·K) (structural steel, from memory), A_f = π·0.003² m²,
+    // d_0 = 0.30 m, R_T,h = 1/0.127 = 7.874 and R_1 = R_T,h − 0.5 (masonry and surfaces taken as
+    // 0.5 m²·K/W, our assumption): ΔU_f = 0.8·50·4·2.827e-5/0.30·(7.374/7.874)² = 0.015080·0.87703 = 0.013225.
+    // A different method (3D against a simplified formula), so only agreement within 15 % is asked.
+    const rTotal = 1 / 0.127;
+    const layer = { index: 0, name: 'insulation', thickness: 0.3, resistance: rTotal - 0.5, fasteners: { conductivity: 50, perSquareMetre: 4, crossSectionArea: Math.PI * 0.003 ** 2 } };
+    const deltaU = uCorrections([layer], rTotal).total;
+    expect(deltaU).toBeCloseTo(0.013225, 6);
+    expect(Math.abs(deltaU / 0.014 - 1)).toBeLessThan(0.15);
   });
 
   it('the warm-deck example reports its fastener correction and the corrected U as a key figure', () => {
