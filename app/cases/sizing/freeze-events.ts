@@ -1,5 +1,5 @@
 /**
- * The moments a freeze simulation reports, read off the run step by step (TransientProblem.stopWhen).
+ * The moments a freeze simulation reports, read off the run step by step.
  */
 import type { EnthalpyCurve } from '../../fe/phase-change.js';
 import type { TransientState } from '../../fe/problem.js';
@@ -42,8 +42,9 @@ function parabolaCrossing(t0: number, v0: number, t1: number, v1: number, t2: nu
 }
 
 /**
- * Watches the run for the events and ends it once the centre's time and the fraction's (if asked)
- * are known. Each is timed within the step where it happens, second order in the step:
+ * Watches the run, sample by sample (TransientProblem.stopWhen), for the events; the caller ends
+ * the run once those it needs are known. Each is timed within the step where it happens, second
+ * order in the step:
  * - first ice: the water at the wall reaches the top of the freezing range, where the model starts
  *   to release latent heat. Up to that moment nothing in the water has begun to freeze and the
  *   wall's temperature is a smooth function of time; in the step that crosses it the temperature
@@ -53,7 +54,9 @@ function parabolaCrossing(t0: number, v0: number, t1: number, v1: number, t2: nu
  * - the centre within CENTRE_TOLERANCE of the top of the freezing range: on the parabola through
  *   the last three samples (the centre's temperature curves strongly as it nears the range);
  * - the solid mass fraction reaching `fraction`, on the straight line between two samples (the
- *   mass-weighted fraction grows smoothly).
+ *   mass-weighted fraction grows smoothly), except when the step ends with all the water frozen:
+ *   the fraction stops at 1 within that step, so the crossing is extrapolated along the last two
+ *   samples, as for the first ice.
  * Until two earlier samples exist, each is interpolated on a straight line.
  */
 export function eventWatcher(curve: EnthalpyCurve, t0: number, fraction: number | null, wallNode: number) {
@@ -66,7 +69,7 @@ export function eventWatcher(curve: EnthalpyCurve, t0: number, fraction: number 
   let firstIce = Infinity;
   let frozen = Infinity;
   return {
-    update(state: TransientState): boolean {
+    update(state: TransientState): void {
       const now: Sample = { time: state.time, centre: state.temperatures[0]!, wall: state.temperatures[wallNode]!, solid: state.solidFraction[0]! };
       if (firstIce === Infinity && now.wall <= iceLimit) {
         const slope = earlier === null ? 0 : (last.wall - earlier.wall) / (last.time - earlier.time);
@@ -81,10 +84,15 @@ export function eventWatcher(curve: EnthalpyCurve, t0: number, fraction: number 
             ? lineCrossing(last.time, last.centre, now.time, now.centre, centreLimit)
             : parabolaCrossing(earlier.time, earlier.centre, last.time, last.centre, now.time, now.centre, centreLimit);
       }
-      if (fraction !== null && frozen === Infinity && now.solid >= fraction) frozen = lineCrossing(last.time, -last.solid, now.time, -now.solid, -fraction);
+      if (fraction !== null && frozen === Infinity && now.solid >= fraction) {
+        const rate = earlier === null ? 0 : (last.solid - earlier.solid) / (last.time - earlier.time);
+        frozen =
+          now.solid >= 1 && rate > 0
+            ? Math.min(now.time, Math.max(last.time, last.time + (fraction - last.solid) / rate))
+            : lineCrossing(last.time, -last.solid, now.time, -now.solid, -fraction);
+      }
       earlier = last;
       last = now;
-      return zero < Infinity && (fraction === null || frozen < Infinity);
     },
     timeToZero: () => zero,
     timeToFirstIce: () => firstIce,

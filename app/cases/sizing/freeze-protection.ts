@@ -4,9 +4,11 @@
  *
  * In still water the centre is the last place to cool: ice grows inwards from the pipe wall, and
  * the liquid inside it approaches 0 °C only as the ice front comes nearer. So the centre counts as
- * at 0 °C once within CENTRE_TOLERANCE (freeze-events.ts) of it, and the time ice first forms, at the wall, is
- * reported beside it as the earlier, conservative figure (in the lumped limit, high-conductivity
- * contents, all the water reaches 0 °C together and the two coincide).
+ * at 0 °C once within CENTRE_TOLERANCE (freeze-events.ts) of it, and the time ice first forms, at the
+ * wall, is reported beside it, usually the earlier, conservative figure. (In the lumped limit,
+ * high-conductivity contents, all the water cools together and the order reverses: the centre is
+ * within the tolerance of the range a little before the wall reaches it; the first ice is then the
+ * time to 0 °C of the lumped model, see the tests.)
  *
  * A transient axisymmetric finite-element model from the axis outwards: the water (a solid cylinder
  * whose latent heat is spread over a narrow range at 0 °C, conduction only), the pipe wall, the
@@ -18,8 +20,10 @@
  *
  * Time step: Crank–Nicolson (second order; the engine damps its start-up) at a fixed step of
  * 1/STEPS_PER_TIME_SCALE of the case's own time scale (see timeScale), so that the times carry the
- * same relative accuracy on a bare DN15 pipe as on a heavily insulated DN300 one; the tests show the
- * times at the default step within 0.1 % of the step-converged ones, converging as Δt².
+ * same relative accuracy on a bare DN15 pipe as on a heavily insulated DN300 one: a first run up to
+ * the centre's time and the first ice, at the step of their time scale, and then, for a fraction,
+ * a second run from that state at the step of the fraction's (much longer) time scale. The tests
+ * show the times at the default steps within 0.1 % of the step-converged ones.
  */
 import { SI_TEXT, type QuantityText } from '../../base/quantity-text.js';
 import { InputError } from '../../fe/errors.js';
