@@ -36,6 +36,7 @@ const FLAT_TOP_KEYS = [
   'area',
   'operatingHours',
   'touchLimit',
+  'sizing',
 ];
 
 /** Parses and validates a flat-surface case file; throws InputError naming the field. */

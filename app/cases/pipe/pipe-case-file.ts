@@ -73,6 +73,7 @@ const PIPE_TOP_KEYS = [
   'length',
   'operatingHours',
   'touchLimit',
+  'sizing',
 ];
 
 /** Parses and validates a pipe case file; throws InputError naming the field. */
@@ -91,7 +92,8 @@ export function parsePipeCaseFile(json: unknown, resolveMaterial: MaterialResolv
   return fields;
 }
 
-const ENVELOPE_KEYS: readonly string[] = ['$schema', 'schemaVersion', 'kind', 'notes'];
+/** Not the calculation's: the file's own keys, and the "sizing" block, which the kind parses apart (app/cases/sizing). */
+const ENVELOPE_KEYS: readonly string[] = ['$schema', 'schemaVersion', 'kind', 'notes', 'sizing'];
 
 /**
  * The calculation's fields of a case file object, without the file's envelope, in the file's

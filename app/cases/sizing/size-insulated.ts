@@ -19,7 +19,7 @@ import { economicFactors } from './present-value-factors.js';
 import { chooseThickness } from './sizing-choice.js';
 import { economicOutcome, physicalOutcomes, type ThicknessFigures } from './sizing-criteria.js';
 import type { SizingResult, SizingRow } from './sizing-model.js';
-import { sameThickness, type SizingBasis } from './sizing-words.js';
+import { basisWords, sameThickness, type SizingBasis } from './sizing-words.js';
 
 /** What one solve at one thickness gives the sweep, and where the next solve may start from. */
 export interface SolvedThickness extends ThicknessFigures {
@@ -105,7 +105,7 @@ export function sizeInsulated(sized: SizedCase, sizing: PreparedSizing, text: Qu
 }
 
 function sweepAssumptions(sized: SizedCase, sizing: PreparedSizing, text: QuantityText): string[] {
-  const per = sized.basis === 'per-metre' ? 'per metre of pipe' : 'per m² of surface';
+  const per = basisWords(sized.basis, text);
   const out = [
     `each thickness is solved as the case is, with only layer ${sizing.layer + 1} (${sized.material}) changed; the case's own ${text.figure(sized.caseThickness, 'thickness')} is a row of the table`,
     `${sizing.economics ? 'heat flows, yearly energy, costs and CO₂' : 'heat flows and yearly energy'} are ${per}, the energy over the case's ${text.figure(sized.operatingHours, 'hours')} of operation a year`,

@@ -22,8 +22,8 @@ from standard input.
 
 The "sizing" block names the layer to size ("layer", 0 for the first insulation layer), the
 thicknesses to try ("series"), the criteria switched on ("criteria") and, for costs, CO₂ and the
-economic thickness, "economics". Its JSON Schema is part of data/schemas/; examples are
-data/examples/sizing-*.json.
+economic thickness, "economics". Its JSON Schema is the "sizing" property of
+data/schemas/pipe-case.schema.json and data/schemas/flat-case.schema.json.
 
 Exit codes: 0 sized (whether or not a thickness meets every criterion); 1 the solve failed;
 2 invalid input, or a case with no "sizing" block, reported in one line that names the field.
@@ -40,7 +40,7 @@ export const sizeCommand = caseFileCommand({
   // Refused before solving: without the block there is nothing to size, and a plain solve is `lamina solve`.
   refuse: (json) =>
     isObject(json) && json['sizing'] === undefined
-      ? 'sizing: the case has no "sizing" block; add one naming the layer, its thickness series and the criteria (see data/examples/sizing-*.json), or use lamina solve.'
+      ? 'sizing: the case has no "sizing" block; add one naming the layer, its thickness series and the criteria (see the "sizing" property of data/schemas/pipe-case.schema.json), or use lamina solve.'
       : null,
   print(solved, format, io) {
     const sizing = solved.sizing;
