@@ -56,10 +56,13 @@ export class CaseEditorState {
 
   /** Out of date: what is on screen is not the result of what the form holds. */
   readonly stale = $derived(Object.keys(this.typingErrors).length > 0 || this.refusal !== null);
+  /** An edit is on its way to the store: being solved (it is saved once solved), waiting, or being written. */
+  readonly pending = $derived(this.phase === 'waiting' || this.phase === 'saving' || (this.solving && !this.stale && this.doc !== this.stored));
 
   /** The project's units: the report's sentences read in them, so a change solves again. */
   private unitSystem: UnitSystem;
-  private stored: Json;
+  /** The document as last stored; reactive so the status can tell an edit still being solved from a saved one. */
+  private stored = $state.raw<Json>(null);
   private goodDoc: Json | null = null;
   private readonly history = new EditHistory<Json>();
   private solver: SolveClient | null = null;
