@@ -54,6 +54,9 @@ export class CaseEditorState {
   library = $state.raw<ReadonlyMap<number, MaterialProperties>>(new Map());
   pipeSizes = $state.raw<readonly PipeSize[]>([]);
 
+  /** The document as last stored; reactive so the status can tell an edit still being solved from a saved one. */
+  private stored = $state.raw<Json>(null);
+
   /** Out of date: what is on screen is not the result of what the form holds. */
   readonly stale = $derived(Object.keys(this.typingErrors).length > 0 || this.refusal !== null);
   /** An edit is on its way to the store: being solved (it is saved once solved), waiting, or being written. */
@@ -61,8 +64,6 @@ export class CaseEditorState {
 
   /** The project's units: the report's sentences read in them, so a change solves again. */
   private unitSystem: UnitSystem;
-  /** The document as last stored; reactive so the status can tell an edit still being solved from a saved one. */
-  private stored = $state.raw<Json>(null);
   private goodDoc: Json | null = null;
   private readonly history = new EditHistory<Json>();
   private solver: SolveClient | null = null;
