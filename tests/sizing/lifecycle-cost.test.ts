@@ -317,6 +317,18 @@ describe('installed cost by interpolation', () => {
     );
   });
 
+  it('writes a thickness a range series makes to six significant figures, not its binary noise', () => {
+    // 0.1 + 0.2239 is 0.32389999999999997 in binary floating point (IEEE 754 doubles); the sentence says 0.3239 m.
+    const fromRange = 0.1 + 0.2239;
+    expect(String(fromRange)).toBe('0.32389999999999997');
+    expect(refusal(() => installedCost(pipe, 0.1, fromRange)).message).toBe(
+      "sizing.economics.costTable 'Pipe test' covers thicknesses from 0.02 m to 0.06 m at an outer diameter of 0.1 m, so it gives no cost for 0.3239 m (it does not extrapolate).",
+    );
+    expect(refusal(() => installedCost(flat, null, fromRange)).message).toBe(
+      "sizing.economics.costTable 'Flat test' covers thicknesses from 0.05 m to 0.1 m, so it gives no cost for 0.3239 m (it does not extrapolate).",
+    );
+  });
+
   it('states the refusal in a project’s units', () => {
     // 1 in = 25.4 mm exactly (NIST SP 811): 0.08 m reads 3.14961 in; the form's text in its own units.
     const error = refusal(() => installedCost(pipe, 0.1, 0.08));

@@ -46,7 +46,14 @@ function within(value: number, low: number, high: number): number | null {
   return Math.min(Math.max(value, low), high);
 }
 
-const metres = (value: number, quantity: 'thickness' | 'diameter'): SentencePart => enteredPart(value, quantity, `${value} m`);
+/**
+ * Significant figures of a thickness or diameter in the SI sentence, as a field hint writes a value
+ * (quantity-text's entered form): a range series' from + k·step (0.32389999999999997) reads 0.3239 m.
+ */
+const SENTENCE_DIGITS = 6;
+
+const metres = (value: number, quantity: 'thickness' | 'diameter'): SentencePart =>
+  enteredPart(value, quantity, `${shownValue(Number(value.toPrecision(SENTENCE_DIGITS)))} m`);
 
 /** Linear between the two points either side of `x`, exact at a point. Assumes x within the row. */
 function linear(points: readonly (readonly [number, number])[], x: number): number {
