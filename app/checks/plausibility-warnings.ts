@@ -4,6 +4,7 @@
  * temperature no insulated construction meets, or an extreme geometry. They never stop a result;
  * they travel with it (JSON, text, screen and report), so nothing is silently extrapolated.
  */
+import { numberText } from '../base/number-text.js';
 import { SI_TEXT, type QuantityText } from '../base/quantity-text.js';
 import type { ConductivityModel } from '../fe/conductivity.js';
 
@@ -23,11 +24,14 @@ export interface LayerTemperatureSpan {
   readonly maxServiceTemperature?: number | null;
 }
 
+/** A value as entered, with the true minus sign. */
+const signed = (value: number) => String(value).replace(/^-/, '\u2212');
+
 /** One warning per layer whose λ(θ) is read where neither its data nor its service range reaches; `text` writes its figures. */
 export function conductivityUseWarnings(spans: readonly LayerTemperatureSpan[], text: QuantityText = SI_TEXT): string[] {
-  const celsius = (t: number) => text.keepingSi(`${t.toFixed(1)} °C`, t, 'temperature');
-  const given = (t: number) => text.keepingSi(`${t} °C`, t, 'temperature');
-  const span = (a: number, b: number) => (text.system === 'SI' ? `${a} to ${b} °C` : `${text.number(a, 'temperature')} to ${text.figure(b, 'temperature')}`);
+  const celsius = (t: number) => text.keepingSi(`${numberText(t, { decimals: 1 })} °C`, t, 'temperature');
+  const given = (t: number) => text.keepingSi(`${signed(t)} °C`, t, 'temperature');
+  const span = (a: number, b: number) => (text.system === 'SI' ? `${signed(a)} to ${signed(b)} °C` : `${text.number(a, 'temperature')} to ${text.figure(b, 'temperature')}`);
   const warnings: string[] = [];
   for (const s of spans) {
     const m = s.conductivity;

@@ -8,11 +8,15 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { solveCase } from '../../app/index.js';
+import { caseContext } from '../../main/cases/case-context.js';
 import { pipeSizeCatalogue } from '../../main/pipe-sizes/pipe-size-catalogue.js';
 import { applyChoice, shownFields, type CaseKindName, type FormContext } from '../../renderer/src/case-editor/case-form-fields.js';
 import { getAt, setAt, type Json } from '../../renderer/src/case-editor/case-paths.js';
 import { boxText, readBoxText, storedValueFor } from '../../renderer/src/case-editor/field-text.js';
 import { materialSlots, moveLayer } from '../../renderer/src/case-editor/build-up.js';
+import { criterionOn, economicsOn, seriesChoice, sizingBlock } from '../../renderer/src/case-editor/sizing-block.js';
+import { criterionFields, ECONOMICS_FIELDS, RANGE_FIELDS } from '../../renderer/src/case-editor/sizing-fields.js';
+import { SIZING_CRITERIA } from '../../app/cases/sizing/sizing-options.js';
 import type { UnitSystem } from '../../app/base/unit-systems.js';
 
 const examplesFolder = path.resolve(import.meta.dirname, '..', '..', 'data', 'examples');
@@ -22,11 +26,22 @@ const examples = fs
   .filter((e) => ['pipe', 'flat', 'wall'].includes(e.json.kind));
 
 const context: FormContext = { pipeSizes: pipeSizeCatalogue() };
-const solve = (doc: Json) => solveCase(doc, { resolveMaterial: () => undefined, pipeSizes: context.pipeSizes });
+// The shipped thickness series and installed-cost tables, as the app's solving worker has them.
+const solve = (doc: Json) => solveCase(doc, { ...caseContext(null), pipeSizes: context.pipeSizes });
+
+/** The sizing panel's boxes the case shows (none without a "sizing" block). */
+function sizingFields(kind: CaseKindName, doc: Json) {
+  if (kind === 'wall' || sizingBlock(doc) === undefined) return [];
+  return [
+    ...(seriesChoice(doc) === 'range' ? RANGE_FIELDS : []),
+    ...SIZING_CRITERIA.filter((c) => criterionOn(doc, c)).flatMap((c) => criterionFields(c, kind)),
+    ...(economicsOn(doc) ? ECONOMICS_FIELDS : []),
+  ];
+}
 
 /** Every path the form edits as a number: the sections' fields and the build-up's thicknesses. */
 function numberPaths(kind: CaseKindName, doc: Json) {
-  const fields = shownFields(kind, doc).filter((f) => f.type === 'number').map((f) => ({ path: f.path, quantity: f.quantity, label: f.label }));
+  const fields = [...shownFields(kind, doc), ...sizingFields(kind, doc)].filter((f) => f.type === 'number').map((f) => ({ path: f.path, quantity: f.quantity, label: f.label }));
   const thicknesses = materialSlots(kind, doc).filter((s) => s.thickness).map((s) => ({ path: `${s.entry}.thickness`, quantity: 'thickness' as const, label: 'Thickness' }));
   return [...fields, ...thicknesses];
 }
@@ -34,7 +49,7 @@ function numberPaths(kind: CaseKindName, doc: Json) {
 /** Reads every field into its box and writes the box back, as a person tabbing through the form would. */
 function passThroughForm(kind: CaseKindName, doc: Json, system: UnitSystem, retype: boolean): Json {
   let next = doc;
-  for (const field of shownFields(kind, doc)) {
+  for (const field of [...shownFields(kind, doc), ...sizingFields(kind, doc)]) {
     if (field.type === 'choice') next = applyChoice(field, next, field.read(next), context);
     if (field.type === 'text') next = setAt(next, field.path, getAt(next, field.path));
   }
@@ -51,7 +66,7 @@ function passThroughForm(kind: CaseKindName, doc: Json, system: UnitSystem, rety
 
 describe('form and case file', () => {
   it('covers the pipe, flat and wall examples', () => {
-    expect(examples.map((e) => e.json.kind).sort()).toEqual(['flat', 'flat', 'pipe', 'pipe', 'pipe', 'wall', 'wall', 'wall', 'wall']);
+    expect(examples.map((e) => e.json.kind).sort()).toEqual(['flat', 'flat', 'flat', 'pipe', 'pipe', 'pipe', 'pipe', 'pipe', 'pipe', 'wall', 'wall', 'wall', 'wall']);
   });
 
   for (const { file, json } of examples) {

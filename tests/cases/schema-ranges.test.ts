@@ -318,7 +318,41 @@ const CROSS_FIELD_RULES: readonly CrossFieldRule[] = [
       }),
     refusal: /^lamina solve: layers\[\d+\]\.ventilation is '.*' but an opening area of .* makes the layer '.*'/,
   },
+  {
+    // The schema bounds the index alone; the code by the case's own list of layers.
+    rule: 'sizing.layer must be the index of one of the case\'s layers',
+    breaks: (json) => {
+      const layer = get(json, 'sizing', 'layer');
+      const layers = get(json, 'layers');
+      return typeof layer === 'number' && Array.isArray(layers) && layer >= layers.length;
+    },
+    refusal: /^lamina solve: sizing\.layer must be a whole number from 0 to \d+, the index of an insulation layer in layers/,
+  },
+  {
+    // An installed-cost table prices the thicknesses (and pipe sizes) it lists and does not
+    // extrapolate; the schema cannot see the table, which is data (data/sizing/installed-costs.csv).
+    rule: 'every thickness sized, and the pipe, must lie within the named installed-cost table',
+    breaks: (json) => {
+      const rows = COST_ROWS.filter((r) => r.table === get(json, 'sizing', 'economics', 'costTable'));
+      if (rows.length === 0) return false;
+      const d = get(json, 'pipe', 'outerDiameter');
+      const layerIndex = get(json, 'sizing', 'layer');
+      const listed = get(json, 'sizing', 'series', 'thicknesses');
+      const thicknesses = [get(json, 'layers', typeof layerIndex === 'number' ? layerIndex : 0, 'thickness'), ...(Array.isArray(listed) ? listed : [])].filter((t): t is number => typeof t === 'number');
+      const outside = (values: readonly number[], v: number) => v < Math.min(...values) || v > Math.max(...values);
+      return (typeof d === 'number' && rows[0]!.diameter !== null && outside(rows.map((r) => r.diameter!), d)) || thicknesses.some((t) => outside(rows.map((r) => r.thickness), t));
+    },
+    refusal: /^lamina solve: sizing\.economics\.costTable '.*' covers (thicknesses|pipe outer diameters) from .* so it gives no cost for .* \(it does not extrapolate\)/,
+  },
 ];
+
+/** The shipped installed-cost rows, read here from the CSV's first columns (none of them quoted). */
+const COST_ROWS = readFileSync(path.join(root, 'data', 'sizing', 'installed-costs.csv'), 'utf8')
+  .split('\n').slice(1).filter((line) => line.trim() !== '')
+  .map((line) => {
+    const [table, , diameter, thickness] = line.split(',');
+    return { table: table!, diameter: diameter === '' ? null : Number(diameter) / 1000, thickness: Number(thickness) / 1000 };
+  });
 
 const ruleUses = new Map<string, number>(CROSS_FIELD_RULES.map((r) => [r.rule, 0]));
 

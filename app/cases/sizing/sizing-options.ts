@@ -25,7 +25,8 @@ import { MAX_FAMILY_NAME_LENGTH, MAX_SERIES_THICKNESSES, SIZING_RANGES as R } fr
 export type SizedKind = 'pipe' | 'flat';
 
 const S = 'sizing';
-const CRITERIA = ['maxSurfaceTemperature', 'noCondensation', 'maxHeatLoss', 'maxTemperatureDrop', 'freezeProtection', 'economic'] as const;
+/** Every criterion a sizing block may switch on, in the order the table and the report list them. */
+export const SIZING_CRITERIA = ['maxSurfaceTemperature', 'noCondensation', 'maxHeatLoss', 'maxTemperatureDrop', 'freezeProtection', 'economic'] as const;
 const PIPE_ONLY: readonly string[] = ['maxTemperatureDrop', 'freezeProtection'];
 
 /** The sizing block checked against a case of `kind` with `layerCount` insulation layers. */
@@ -96,9 +97,9 @@ export function rangeThicknesses(from: number, to: number, step: number): number
 
 function parseCriteria(value: unknown, field: string, kind: SizedKind): SizingCriteria {
   const criteria = requireObject(value, field);
-  rejectUnknownKeys(criteria, CRITERIA, field);
-  const on = CRITERIA.filter((c) => criteria[c] !== undefined);
-  if (on.length === 0) throw new InputError(field, `${field} must switch on at least one of ${CRITERIA.join(', ')}.`);
+  rejectUnknownKeys(criteria, SIZING_CRITERIA, field);
+  const on = SIZING_CRITERIA.filter((c) => criteria[c] !== undefined);
+  if (on.length === 0) throw new InputError(field, `${field} must switch on at least one of ${SIZING_CRITERIA.join(', ')}.`);
   const pipeOnly = on.find((c) => PIPE_ONLY.includes(c));
   if (kind === 'flat' && pipeOnly !== undefined) {
     throw new InputError(`${field}.${pipeOnly}`, `${field}.${pipeOnly} applies to a pipe run only; a flat case cannot use it.`);
