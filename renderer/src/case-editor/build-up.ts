@@ -9,6 +9,7 @@ import { QUANTITY_RANGES as R } from '../../../app/base/quantity-ranges.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 import { getAt, setAt, type Json, type JsonObject } from './case-paths.js';
 import type { CaseKindName } from './case-form-fields.js';
+import { bridgingPaths } from './layer-bridging.js';
 
 /** A place in the case that holds one material: the pipe, a flat plate, a layer, the jacket. */
 export interface MaterialSlot {
@@ -55,6 +56,7 @@ export function buildUpPaths(kind: CaseKindName, doc: Json): string[] {
   layersOf(doc).forEach((layer, i) => {
     if (isAirLayer(layer)) paths.push(`layers[${i}]`, `layers[${i}].thickness`, `layers[${i}].ventilation`, `layers[${i}].openingArea`);
   });
+  if (kind === 'wall') paths.push(...bridgingPaths(doc));
   if (getAt(doc, 'jacket') !== undefined) paths.push('jacket.emissivity');
   return paths;
 }

@@ -19,6 +19,7 @@ import { storedValueFor } from './field-text.js';
 import { refusalText } from './refusal-text.js';
 import { SolveClient, type TimedAnswer } from './solve-client.js';
 import { shownSizingPaths } from './sizing-fields.js';
+import { shownTargetUPaths } from './target-u-block.js';
 import type { SizingResult } from '../../../app/cases/sizing/sizing-model.js';
 
 /** Pause after the last edit before saving (as the project details wait). */
@@ -106,7 +107,7 @@ export class CaseEditorState {
   /** Where the engine's complaint shows: the field's path, or null for the case as a whole. */
   readonly refusalField = $derived.by(() => {
     if (!this.refusal) return null;
-    const shown = new Set([...shownFields(this.kind, this.doc).map((f) => f.path), ...buildUpPaths(this.kind, this.doc), ...shownSizingPaths(this.kind, this.doc)]);
+    const shown = new Set([...shownFields(this.kind, this.doc).map((f) => f.path), ...buildUpPaths(this.kind, this.doc), ...shownSizingPaths(this.kind, this.doc), ...shownTargetUPaths(this.kind, this.doc)]);
     return fieldForError(this.refusal.field === null ? undefined : normaliseMaterialPath(this.refusal.field), shown);
   });
 

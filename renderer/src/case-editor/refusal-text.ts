@@ -13,6 +13,8 @@ import { quantityText } from '../../../app/base/quantity-text.js';
 import type { UnitSystem } from '../../../app/base/unit-systems.js';
 import type { Json } from './case-paths.js';
 import { shownFields, type CaseKindName } from './case-form-fields.js';
+import { bridgingFieldName } from './layer-bridging.js';
+import { targetUFieldName } from './target-u-block.js';
 
 /** Words for the build-up's own controls (BuildUpEditor), by the path the engine names. */
 function buildUpName(path: string): string | undefined {
@@ -34,7 +36,7 @@ function buildUpName(path: string): string | undefined {
     'jacket.thickness': 'Jacket thickness',
     'jacket.emissivity': 'Emissivity of the jacket surface',
   };
-  return named[path];
+  return named[path] ?? bridgingFieldName(path) ?? targetUFieldName(path);
 }
 
 /** The words the form names the field at `path` by, or undefined where it has none. */
@@ -49,5 +51,7 @@ export function fieldName(kind: CaseKindName, doc: Json, path: string): string |
 export function refusalText(field: string | undefined, sentence: Sentence, system: UnitSystem, kind: CaseKindName, doc: Json): string {
   const written = writeShownSentence(sentence, quantityText(system));
   const name = field === undefined ? undefined : fieldName(kind, doc, field);
+  // Some sentences open "path: …" (the fractions of a layer's sections that add up to 1 or more).
+  if (field !== undefined && name !== undefined && written.startsWith(`${field}: `)) return boundedMessage(`${name}${written.slice(field.length)}`);
   return boundedMessage(openedWithName(written, field, name));
 }
