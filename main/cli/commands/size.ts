@@ -23,7 +23,8 @@ from standard input.
 The "sizing" block names the layer to size ("layer", 0 for the first insulation layer), the
 thicknesses to try ("series"), the criteria switched on ("criteria") and, for costs, CO₂ and the
 economic thickness, "economics". Its JSON Schema is the "sizing" property of
-data/schemas/pipe-case.schema.json and data/schemas/flat-case.schema.json.
+data/schemas/pipe-case.schema.json and data/schemas/flat-case.schema.json. Examples:
+data/examples/pipe-sizing-*.json and data/examples/flat-sizing-*.json.
 
 Exit codes: 0 sized (whether or not a thickness meets every criterion); 1 the solve failed;
 2 invalid input, or a case with no "sizing" block, reported in one line that names the field.
