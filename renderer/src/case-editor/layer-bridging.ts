@@ -127,7 +127,7 @@ export function shankDiameter(crossSectionArea: number): number {
   return Math.sqrt((4 * crossSectionArea) / Math.PI);
 }
 
-/** What a layer's "bridged by…" disclosure holds, in a few words for its closed summary. */
+/** What a layer's "studs, air gaps and fixings" disclosure holds, in a few words for its closed summary. */
 export function bridgingSummary(doc: Json, index: number): string {
   const parts: string[] = [];
   const sections = bridgesOf(doc, index);
