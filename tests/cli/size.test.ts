@@ -66,6 +66,19 @@ describe('lamina size', () => {
     expect(economicThickness).toBeGreaterThan(0);
   });
 
+  it('says so when the least lifecycle cost is at the thickest option of the series (no minimum found)', async () => {
+    // The tank shell's lifecycle cost still falls at 200 mm, the last of its list.
+    const run = await runLamina(['size', path.join(examplesDir, 'flat-sizing-tank-wall.json')], { db });
+    const { choice, economicThickness, rows } = JSON.parse(run.stdout).sizing;
+    expect(economicThickness).toBe(rows[rows.length - 1].thickness);
+    expect(choice.governing).toBe('economic');
+    expect(choice.reason).toContain('It is the thickest option: a thicker one may cost less still');
+    // The hot-water flow's least cost lies inside its series: nothing to say.
+    const inside = JSON.parse((await runLamina(['size', path.join(examplesDir, 'pipe-sizing-hot-water-economic.json')], { db })).stdout).sizing;
+    expect(inside.economicThickness).toBeLessThan(inside.rows[inside.rows.length - 1].thickness);
+    expect(inside.choice.reason).not.toContain('thickest option');
+  });
+
   it('--format text prints the choice, the governing criterion and the table', async () => {
     const run = await runLamina(['size', path.join(examplesDir, 'pipe-sizing-outdoor-freeze.json'), '--format', 'text'], { db });
     expect(run.code).toBe(0);

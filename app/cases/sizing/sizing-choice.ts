@@ -35,11 +35,15 @@ export function chooseThickness(rows: readonly SizingRow[], economicRow: number 
       const economic = rows[economicRow]!;
       const beyond = criteria.length === 0 ? '' : ` The other criteria need only ${of(rows[thinnest]!)}.`;
       const above = chosen === economicRow ? '' : ` The next option that also meets every other criterion is ${of(rows[chosen]!)}.`;
+      // A least cost at the end of the series is not a minimum found: the curve may fall further.
+      const atEnd = rows.length < 2 ? '' : economicRow === rows.length - 1
+        ? ' It is the thickest option: a thicker one may cost less still, so extend the series to find the least cost.'
+        : economicRow === 0 ? ' It is the thinnest option: a thinner one may cost less still.' : '';
       return {
         kind: 'chosen',
         thickness: rows[chosen]!.thickness,
         governing: 'economic',
-        reason: `The least lifecycle cost of the series is at ${of(economic)}.${above}${beyond}`,
+        reason: `The least lifecycle cost of the series is at ${of(economic)}.${atEnd}${above}${beyond}`,
       };
     }
   }
