@@ -103,6 +103,31 @@ describe('a wall’s bridged layer and target U-value', () => {
     await page.close();
   });
 
+  it('adds air gaps and steel fixings to the insulation layer; in US units every figure is still the engine’s', async () => {
+    const { projectName, caseId } = addWall('Fernhollow Joinery office');
+    const { page, problems } = await openCase(projectName, caseId);
+    const insulation = layer(page, 1);
+    await insulation.locator('[data-testid="layer-bridging"] summary').click();
+    await page.selectOption('#case-layers-1-airGapLevel', '1');
+    await insulation.getByRole('button', { name: 'Add fixings' }).click();
+    await saved(page);
+    const stored1 = stored(caseId)['layers'][1];
+    expect(stored1['airGapLevel']).toBe(1);
+    expect(stored1['fasteners']).toEqual({ conductivity: 50, perSquareMetre: 6, crossSectionArea: Math.PI * 0.0025 ** 2 });
+    const si = engineFigures(services(), caseId, 'SI').figures;
+    await expect.poll(() => shownFigures(page)).toEqual(si);
+    expect(Object.keys(si).some((label) => label.startsWith('U-value with corrections'))).toBe(true);
+
+    await page.selectOption('#project-unitSystem', 'IP');
+    await expect.poll(() => shownFigures(page)).toEqual(engineFigures(services(), caseId, 'IP').figures);
+    // The shank read back from its cross-section, in inches: 5 mm is 0.19685 in (1 in = 25.4 mm exactly, NIST SP 811).
+    expect(await insulation.locator('[data-testid="shank"]').textContent()).toContain('0.19685 in');
+    expect(await clippedChoices(page, '[data-layer-index="1"]')).toEqual([]);
+    await insulation.screenshot({ path: path.join(resultsFolder, 'wall-bridging-gaps-fixings-us.png') });
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+
   it('finds the thickness for a target U-value and puts it into the layer', async () => {
     const { projectName, caseId } = addWall('Fernhollow Joinery store');
     const { page, problems } = await openCase(projectName, caseId);

@@ -117,7 +117,7 @@ export function fastenerFields(index: number): NumberField[] {
     { type: 'number', path: `${f}.crossSectionArea`, label: 'Cross-section of one fixing', quantity: 'area', range: FASTENER_RANGES.crossSectionArea, initial: DEFAULT_FASTENERS.crossSectionArea },
     {
       type: 'number', path: `${f}.lengthInLayer`, label: 'Length of a fixing inside the layer', quantity: 'thickness', range: { ...R.wallLayerThickness, min: 0, minExclusive: true },
-      initial: 0.1, whenEmpty: () => 'the whole layer (the fixing goes right through)',
+      initial: 0.1, whenEmpty: () => 'the whole layer',
     },
   ];
 }
