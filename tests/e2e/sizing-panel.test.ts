@@ -67,9 +67,15 @@ const saved = (page: Page) => expect.poll(async () => (await page.locator('[data
 const panel = (page: Page) => page.locator('#case-section-sizing');
 const shot = (page: Page, name: string) => panel(page).screenshot({ path: path.join(resultsFolder, name) });
 
-/** The sizing table on screen: each row's cells as text (the hidden explanations left out), and which row is marked chosen. */
-function shownTable(page: Page): Promise<{ headers: string[]; rows: { cells: string[]; chosen: boolean }[] }> {
-  return page.locator('[data-testid="sizing-table"]').evaluate((table) => {
+/** The report section's tables, as the panel shows them; `caption` picks one (its title, or a part of it). */
+const sizingTable = (page: Page, caption: string) => page.locator('[data-testid="sizing-table"]').filter({ has: page.locator('caption', { hasText: caption }) });
+const FIGURES = 'Rock wool pipe section, typical curve across the thickness series';
+const CRITERIA = 'Each criterion switched on, at each thickness';
+const COSTS = 'Cost and CO₂ across the thickness series';
+
+/** A sizing table on screen: each row's cells as text (the hidden explanations left out), and which row is marked chosen. */
+function shownTable(page: Page, caption: string): Promise<{ headers: string[]; rows: { cells: string[]; chosen: boolean }[] }> {
+  return sizingTable(page, caption).evaluate((table) => {
     const cellText = (cell: Element) => Array.from(cell.childNodes).filter((n) => !(n instanceof HTMLElement && n.classList.contains('visually-hidden'))).map((n) => n.textContent ?? '').join('').trim();
     return {
       headers: Array.from(table.querySelectorAll('thead th'), (th) => th.textContent!.trim()),
@@ -104,15 +110,20 @@ describe('the sizing panel', () => {
     const chosen = engine.choice.kind === 'chosen' ? engine.choice.thickness : NaN;
 
     // One row per thickness the engine tried, the chosen one marked, its thickness in mm to 0.1 mm (as the report shows it).
-    await expect.poll(async () => (await shownTable(page)).rows.filter((r) => r.chosen).map((r) => r.cells[0])).toEqual([(chosen * 1000).toFixed(1)]);
-    const table = await shownTable(page);
-    expect(table.rows.map((r) => Number(r.cells[0]) / 1000)).toEqual(engine.rows.map((r) => r.thickness));
-    expect(table.rows.flatMap((r) => r.cells).join(' ')).not.toMatch(/NaN|undefined|Infinity/);
+    // Every table of the section marks the same row.
+    for (const caption of [FIGURES, CRITERIA]) {
+      await expect.poll(async () => (await shownTable(page, caption)).rows.filter((r) => r.chosen).map((r) => r.cells[0])).toEqual([(chosen * 1000).toFixed(1)]);
+      const table = await shownTable(page, caption);
+      expect(table.rows.map((r) => Number(r.cells[0]) / 1000)).toEqual(engine.rows.map((r) => r.thickness));
+      expect(table.rows.flatMap((r) => r.cells).join(' ')).not.toMatch(/NaN|undefined|Infinity/);
+      expect(table.headers.at(-1)).toBe('Choice');
+    }
+    expect(await page.locator('#case-section-sizing [data-testid="sizing-chosen-row"]').count()).toBe(2);
 
     // The thinnest fails the heat-loss limit: its cell says so on hover and to a screen reader, in the engine's words.
     const thinnestLoss = engine.rows[0]!.outcomes.find((o) => o.criterion === 'maxHeatLoss')!;
     expect(thinnestLoss.met).toBe(false);
-    const failing = page.locator('[data-testid="sizing-table"] tbody tr').first().locator('td.fails').last();
+    const failing = sizingTable(page, CRITERIA).locator('tbody tr').first().locator('td.fails').last();
     expect(await failing.getAttribute('title')).toBe(thinnestLoss.reason);
     expect(await failing.locator('.visually-hidden').textContent()).toBe(`: ${thinnestLoss.reason}`);
     await shot(page, 'sizing-panel-sized.png');
@@ -140,11 +151,46 @@ describe('the sizing panel', () => {
     expect(engine.economicThickness).not.toBeNull();
     const figure = page.locator('#case-section-sizing figure.report-chart').filter({ hasText: 'Lifecycle cost against thickness' });
     await figure.locator('canvas').waitFor();
-    expect((await shownTable(page)).headers).toContain('Lifecycle cost');
+    expect((await shownTable(page, COSTS)).headers).toContain('Lifecycle cost (EUR)');
     // The chart's table (its text alternative) has one row per thickness.
     await figure.getByRole('button', { name: 'Show as table' }).click();
     await expect.poll(() => figure.locator('tbody tr').count()).toBe(engine.rows.length);
     await shot(page, 'sizing-panel-economics.png');
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+
+  it('keeps every table inside the panel at a narrow window: the Choice column fits or its box scrolls, never the page', async () => {
+    const { projectName, caseId } = addHotPipe('Heronsgate Brewery boiler house');
+    const { page, problems } = await openCase(projectName, caseId);
+    await page.check('#case-sizing-on');
+    await page.check('#case-sizing-maxHeatLoss');
+    await page.check('#case-sizing-economics');
+    await saved(page);
+    await sizingTable(page, CRITERIA).waitFor();
+    for (const [width, height] of [[1280, 720], [1024, 700]] as const) {
+      await page.setViewportSize({ width, height });
+      await sizingTable(page, CRITERIA).scrollIntoViewIfNeeded();
+      await shot(page, `sizing-panel-${width}x${height}.png`);
+      const fit = await panel(page).evaluate((section) => {
+        const edge = section.getBoundingClientRect().right;
+        return {
+          page: { scroll: document.documentElement.scrollWidth, width: document.documentElement.clientWidth },
+          tables: Array.from(section.querySelectorAll('[data-testid="sizing-table"]'), (table) => {
+            const box = table.parentElement!;
+            return {
+              caption: table.querySelector('caption')!.textContent,
+              boxInside: box.getBoundingClientRect().right <= edge + 0.5,
+              // The whole table shows, or the rest is a sideways scroll of its own box away.
+              reachable: table.getBoundingClientRect().right <= box.getBoundingClientRect().right + 0.5 || (getComputedStyle(box).overflowX === 'auto' && box.scrollWidth > box.clientWidth),
+            };
+          }),
+        };
+      });
+      expect(fit.page.scroll, `${width}×${height}: the page scrolls sideways`).toBeLessThanOrEqual(fit.page.width);
+      expect(fit.tables.length).toBe(3);
+      for (const t of fit.tables) expect(t, `${width}×${height}: ${t.caption}`).toMatchObject({ boxInside: true, reachable: true });
+    }
     expect(problems).toEqual([]);
     await page.close();
   });

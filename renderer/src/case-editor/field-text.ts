@@ -6,6 +6,7 @@
 import type { QuantityName } from '../../../app/base/quantities.js';
 import type { NumberRange } from '../../../app/base/number-range.js';
 import { fromDisplay, toDisplay, unitLabel, type UnitSystem } from '../../../app/base/unit-systems.js';
+import { numberText } from '../../../app/base/number-text.js';
 import { quantityText } from '../../../app/base/quantity-text.js';
 
 /**
@@ -50,11 +51,24 @@ export function storedValueFor(text: string, current: number | undefined, quanti
   return readBoxText(text, quantity, system, label);
 }
 
+/** From here up a bound's entered form is "1e5"; a hint writes it out. */
+const WRITTEN_OUT_FROM = 1e5;
+
+/**
+ * A bound of a hint as a person writes it: the entered form (six significant digits, shortest,
+ * as a refusal states the bound) below 100 000, and the digits written out from there up
+ * ("100000 W/m", not "1e5 W/m"), by the project's number writer.
+ */
+function boundText(value: number, quantity: QuantityName, system: UnitSystem): string {
+  const shown = toDisplay(value, quantity, system);
+  return Math.abs(shown) >= WRITTEN_OUT_FROM ? numberText(shown, { significant: BOX_DIGITS }) : quantityText(system).enteredNumber(value, quantity);
+}
+
 /** "Allowed −100 to 200 °C" in the project's units (a range's open ends say "above" and "below"). */
 export function rangeHint(range: NumberRange, quantity: QuantityName, system: UnitSystem): string {
-  const text = quantityText(system);
-  const unit = text.unit(quantity);
-  const from = range.minExclusive ? `above ${text.enteredNumber(range.min, quantity)}` : text.enteredNumber(range.min, quantity);
-  const to = range.maxExclusive ? `below ${text.enteredNumber(range.max, quantity)}` : text.enteredNumber(range.max, quantity);
+  const unit = quantityText(system).unit(quantity);
+  const bound = (value: number) => boundText(value, quantity, system);
+  const from = range.minExclusive ? `above ${bound(range.min)}` : bound(range.min);
+  const to = range.maxExclusive ? `below ${bound(range.max)}` : bound(range.max);
   return `Allowed ${from} to ${to}${unit ? ` ${unit}` : ''}`;
 }

@@ -1,77 +1,40 @@
 /**
- * The sizing panel's table across the thickness series, as text in the project's units: the
- * figures that decide (heat loss, surface temperature, its margin over the dew point, the fluid's
- * temperature change and the freeze times where asked for, the lifecycle cost with economics),
- * the verdict of each criterion switched on and the choice mark. A failing cell carries the
- * engine's sentence of what was required and what the thickness gives, for its hover text and its
- * screen-reader text. The printed report words the same result in app/cases/sizing/sizing-report.
+ * What the sizing panel adds to the tables of the report's sizing section (app/cases/sizing/
+ * sizing-report), which it shows through the report's own table component: the chosen row marked,
+ * and each cell of a criterion a thickness fails explained by the engine's sentence of what was
+ * required and what the thickness gives (hover text and screen-reader text). The figures and
+ * their words are the report's; nothing here writes a number.
  */
-import type { QuantityName } from '../../../app/base/quantities.js';
-import { quantityText } from '../../../app/base/quantity-text.js';
-import type { UnitSystem } from '../../../app/base/unit-systems.js';
-import type { SizingResult, SizingRow } from '../../../app/cases/sizing/sizing-model.js';
-import { CRITERION_NAMES, choiceMark, criteriaOf, heatQuantity, outcomeCell, sameThickness, type SizingBasis } from '../../../app/cases/sizing/sizing-words.js';
+import type { ReportTable } from '../../../app/report/report-model.js';
+import type { SizingCriterionName, SizingResult, SizingRow } from '../../../app/cases/sizing/sizing-model.js';
+import { CRITERION_NAMES, criteriaOf, sameThickness } from '../../../app/cases/sizing/sizing-words.js';
+import type { RowMarks, TableMarks } from '../report-view/table-marks.js';
 
-export interface SizingCell {
-  readonly text: string;
-  /** The engine's sentence where this cell is a criterion the thickness fails. */
-  readonly reason?: string;
-  readonly numeric: boolean;
-}
+export const SIZING_TABLE_ID = 'sizing-table';
+export const CHOSEN_ROW_ID = 'sizing-chosen-row';
+export const ROW_ID = 'sizing-row';
 
-export interface SizingTableRow {
-  readonly thickness: number;
-  readonly chosen: boolean;
-  readonly cells: readonly SizingCell[];
-}
-
-export interface SizingTableModel {
-  readonly headers: readonly string[];
-  readonly rows: readonly SizingTableRow[];
-}
-
-const NONE = '—';
-
-export function sizingTable(result: SizingResult, system: UnitSystem, basis: SizingBasis): SizingTableModel {
-  const text = quantityText(system);
-  const header = (label: string, quantity: QuantityName) => (text.unit(quantity) === '' ? label : `${label} (${text.unit(quantity)})`);
-  const value = (v: number | null, quantity: QuantityName): SizingCell => ({
-    text: v === null ? NONE : Number.isFinite(v) ? text.number(v, quantity) : 'not reached',
-    numeric: true,
-  });
-  const rows = result.rows;
-  const gained = rows.length > 0 && rows[0]!.heatLoss < 0;
-  const heat = heatQuantity(basis);
-  const columns: { header: string; cell: (r: SizingRow) => SizingCell }[] = [
-    { header: header('Thickness', 'thickness'), cell: (r) => value(r.thickness, 'thickness') },
-    { header: header(gained ? 'Heat gain' : 'Heat loss', heat), cell: (r) => value(Math.abs(r.heatLoss), heat) },
-    { header: header('Surface', 'temperature'), cell: (r) => value(r.surfaceTemperature, 'temperature') },
-    { header: header('Above dew point', 'temperatureDifference'), cell: (r) => value(r.dewPointMargin, 'temperatureDifference') },
-  ];
-  if (rows.some((r) => r.temperatureDrop !== null)) {
-    columns.push({ header: header('Fluid change along the run', 'fluidTemperatureChange'), cell: (r) => value(r.temperatureDrop === null ? null : Math.abs(r.temperatureDrop), 'fluidTemperatureChange') });
-  }
-  if (rows.some((r) => r.timeToZero !== null)) columns.push({ header: header(`Time to ${text.given(0, 'temperature')}`, 'timeHours'), cell: (r) => value(r.timeToZero, 'timeHours') });
-  if (rows.some((r) => r.timeToFraction !== null)) columns.push({ header: header('Time to the frozen part', 'timeHours'), cell: (r) => value(r.timeToFraction, 'timeHours') });
-  if (rows.some((r) => r.lifecycleCost !== null)) columns.push({ header: 'Lifecycle cost', cell: (r) => value(r.lifecycleCost, 'money') });
-  for (const criterion of criteriaOf(result)) {
-    columns.push({
-      header: capitalise(CRITERION_NAMES[criterion]),
-      cell: (r) => {
-        const outcome = r.outcomes.find((o) => o.criterion === criterion);
-        const cell = outcomeCell(outcome, r, result, text, basis);
-        return outcome && !outcome.met ? { text: cell, reason: outcome.reason, numeric: false } : { text: cell, numeric: false };
-      },
-    });
-  }
-  columns.push({ header: 'Choice', cell: (r) => ({ text: choiceMark(r, result), numeric: false }) });
+/** The marks of one table of the sizing section: its rows are the result's rows, each led by its thickness. */
+export function sizingMarks(table: ReportTable, result: SizingResult): TableMarks {
+  // A criterion's column is headed by its name, as the report heads it.
+  const criterionOfColumn = table.columns.map((c): SizingCriterionName | undefined => criteriaOf(result).find((name) => capitalise(CRITERION_NAMES[name]) === c.label));
+  const chosen = result.choice.kind === 'chosen' ? result.choice.thickness : null;
   return {
-    headers: columns.map((c) => c.header),
-    rows: rows.map((r) => ({
-      thickness: r.thickness,
-      chosen: result.choice.kind === 'chosen' && sameThickness(r.thickness, result.choice.thickness),
-      cells: columns.map((c) => c.cell(r)),
-    })),
+    testId: SIZING_TABLE_ID,
+    rows: table.rows.map((cells): RowMarks => {
+      const lead = cells[0];
+      const thickness = lead !== undefined && typeof lead !== 'string' ? lead.value : null;
+      const row: SizingRow | undefined = thickness === null ? undefined : result.rows.find((r) => sameThickness(r.thickness, thickness));
+      const marked = row !== undefined && chosen !== null && sameThickness(row.thickness, chosen);
+      return {
+        marked,
+        testId: marked ? CHOSEN_ROW_ID : ROW_ID,
+        failures: criterionOfColumn.map((criterion) => {
+          const outcome = criterion === undefined ? undefined : row?.outcomes.find((o) => o.criterion === criterion);
+          return outcome !== undefined && !outcome.met ? outcome.reason : undefined;
+        }),
+      };
+    }),
   };
 }
 
