@@ -7,6 +7,7 @@
  * U across the series and the thickness found, which "use this thickness" puts into the layer.
  * Screenshots go to test-results/. The scenario (Fernhollow Joinery workshop) is invented.
  */
+import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -14,7 +15,7 @@ import type { WallAnalysis } from '../../app/cases/wall/wall-analysis.js';
 import { solveCase } from '../../app/index.js';
 import { caseContext } from '../../main/cases/case-context.js';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
-import { resultsFolder, useBrowserSession } from './browser-session.js';
+import { projectRoot, resultsFolder, useBrowserSession } from './browser-session.js';
 import { clippedChoices, engineFigures, shownFigures } from './case-editor-page.js';
 
 const session = useBrowserSession('lamina-wall-bridging-e2e-');
@@ -158,6 +159,30 @@ describe('a wall’s bridged layer and target U-value', () => {
     expect(analysis(caseId).wall.correctedUValue).toBeLessThanOrEqual(0.18);
     await expect.poll(() => page.locator('#case-targetU-use').isDisabled()).toBe(true);
     await panel.screenshot({ path: path.join(resultsFolder, 'wall-target-u-used.png') });
+    expect(problems).toEqual([]);
+    await page.close();
+  });
+
+  it('opens the timber-frame example as written: its studs of a material in the file, its listed series and the thickness it finds', async () => {
+    const example = JSON.parse(fs.readFileSync(path.join(projectRoot, 'data', 'examples', 'wall-timber-frame-vcl.json'), 'utf8')) as Record<string, unknown>;
+    delete example['$schema'];
+    const project = services().projects.create({ name: 'Orrin Valley staff housing' });
+    const { id: caseId } = services().projects.addCase(project.id, { name: 'Staff housing wall', inputs: example as never });
+    const { page, problems } = await openCase(project.name, caseId);
+    await expect.poll(() => shownFigures(page)).toEqual(engineFigures(services(), caseId, 'SI').figures);
+    const studs = layer(page, 2);
+    expect(await studs.locator('[data-testid="layer-bridging"] summary').textContent()).toContain('1 section over 0.0633 of the face');
+    await studs.locator('[data-testid="layer-bridging"] summary').click();
+    expect(await page.inputValue('#case-layers-2-bridges-0-fraction')).toBe('0.0633');
+    expect(await studs.locator('[data-testid="bridge"]').textContent()).toContain('softwood timber, 500 kg/m³ (in this case file)');
+
+    const panel = page.locator('#case-section-target-u');
+    expect(await page.isChecked('#case-targetU-on')).toBe(true);
+    expect(await page.inputValue('#case-targetU-thicknesses')).toBe('list');
+    expect(await page.inputValue('#case-targetU-layer')).toBe('2');
+    const chosen = analysis(caseId).targetU!.chosen!.thickness;
+    await expect.poll(() => panel.locator('#case-targetU-use').textContent()).toBe(`Use this thickness: ${chosen * 1000} mm`);
+    await page.screenshot({ path: path.join(resultsFolder, 'wall-bridging-example.png'), fullPage: true });
     expect(problems).toEqual([]);
     await page.close();
   });

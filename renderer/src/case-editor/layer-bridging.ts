@@ -138,7 +138,7 @@ export function bridgingSummary(doc: Json, index: number): string {
   const level = airGapLevelOf(doc, index);
   if (level !== '0') parts.push(`air gaps at level ${level}`);
   if (fastenersOn(doc, index)) parts.push('fixings');
-  return parts.length > 0 ? parts.join(', ') : 'none: one material across the whole face';
+  return parts.length > 0 ? parts.join(', ') : 'none';
 }
 
 /** Paths of the bridging controls of every material layer of a wall, for placing the engine's complaints beside them. */
