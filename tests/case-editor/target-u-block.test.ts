@@ -18,7 +18,7 @@ import { applyChoice, type ChoiceField } from '../../renderer/src/case-editor/ca
 import { refusalText } from '../../renderer/src/case-editor/refusal-text.js';
 import {
   chooseTargetLayer, chosenTargetThickness, listedThicknesses, shownTargetUPaths, startTargetU, stopTargetU, TARGET_U_FIELDS, targetLayerIndex, targetLayerOptions,
-  targetLayers, targetUSection, targetUTable, thicknessesKind, useTargetThickness,
+  targetLayers, targetUMarks, targetUSection, targetUTable, thicknessesKind, useTargetThickness,
 } from '../../renderer/src/case-editor/target-u-block.js';
 import { LIBRARY, analysisOf, solveWall, WALL } from './wall-editor-fixture.js';
 
@@ -76,6 +76,9 @@ describe('the thickness found', () => {
     expect(found(on)).toBeCloseTo(0.16, 9);
     const table = targetUTable(targetUSection(solveWall(on).report))!;
     expect(table.rows).toHaveLength(15);
+    // The 160 mm row, the eighth of 20, 40, …, is the one marked.
+    expect(targetUMarks(table, 0.16).rows.map((r) => r.marked).indexOf(true)).toBe(7);
+    expect(targetUMarks(table, null).rows.some((r) => r.marked)).toBe(false);
     const used = useTargetThickness(on, 1, 0.16);
     expect(getAt(used, 'layers[1].thickness')).toBe(0.16);
     const wall = analysisOf(used).wall;

@@ -148,6 +148,7 @@ describe('a wall’s bridged layer and target U-value', () => {
     const firstColumn = await table.locator('tbody tr td:first-child, tbody tr th:first-child').allTextContents();
     expect(firstColumn.map((t) => Number(t.trim()) / 1000)).toEqual(target.rows.map((r) => r.thickness));
     expect(await panel.locator('[data-testid="target-u-choice"]').textContent()).toContain(`${(chosen * 1000).toFixed(1)} mm`);
+    expect((await panel.locator('[data-testid="target-u-chosen-row"]').locator('th, td').first().textContent())?.trim()).toBe((chosen * 1000).toFixed(1));
     await panel.locator('figure.report-chart canvas').waitFor();
     expect(await clippedChoices(page, '#case-section-target-u')).toEqual([]);
     await panel.screenshot({ path: path.join(resultsFolder, 'wall-target-u.png') });

@@ -19,6 +19,7 @@ import { TARGET_TABLE } from '../../../app/cases/wall/wall-bridging-report.js';
 import { conductivityAt } from '../../../app/fe/conductivity.js';
 import type { MaterialProperties } from '../../../app/materials/material-properties.js';
 import type { CaseReport, ReportChart, ReportSection, ReportTable } from '../../../app/report/report-model.js';
+import type { TableMarks } from '../report-view/table-marks.js';
 import { getAt, setAt, type Json, type JsonObject } from './case-paths.js';
 import { isAirLayer, layersOf } from './build-up.js';
 import type { CaseKindName, ChoiceField, NumberField } from './case-form-fields.js';
@@ -205,4 +206,16 @@ export function targetUChart(section: ReportSection | undefined): ReportChart | 
 export function targetUReason(section: ReportSection | undefined): string | undefined {
   for (const block of section?.blocks ?? []) if (block.kind === 'paragraphs') return block.paragraphs[0];
   return undefined;
+}
+
+/** The chosen thickness's row marked (shaded and bold, as the sizing panel marks its choice); no failures to explain, the last column says yes or no. */
+export function targetUMarks(table: ReportTable, chosen: number | null): TableMarks {
+  return {
+    testId: 'target-u-table',
+    rows: table.rows.map((row) => {
+      const cell = row[0];
+      const marked = chosen !== null && typeof cell === 'object' && cell !== null && typeof cell.value === 'number' && Math.abs(cell.value - chosen) < 1e-9;
+      return { marked, ...(marked ? { testId: 'target-u-chosen-row' } : {}), failures: [] };
+    }),
+  };
 }
