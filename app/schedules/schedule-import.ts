@@ -8,7 +8,8 @@
  */
 import type { CaseContext } from '../cases/case-kind.js';
 import { parseCase } from '../cases/solve-case.js';
-import { SCHEDULE_COLUMNS, type ColumnKey } from './schedule-columns.js';
+import type { UnitSystem } from '../base/unit-systems.js';
+import { columnHeader, SCHEDULE_COLUMNS, type ColumnKey } from './schedule-columns.js';
 import { readScheduleCsv, MAX_PROBLEMS_LISTED, type ScheduleProblem } from './schedule-csv-read.js';
 import type { ScheduleRun, ScheduleSettings } from './schedule-model.js';
 import { asRunProblem, runCase, type MaterialIdOf } from './schedule-run-case.js';
@@ -50,10 +51,16 @@ export function importSchedule(
   const problems: ScheduleProblem[] = [];
   read.runs.forEach((run, i) => {
     const problem = runProblem(run, settings, materialIdOf, context);
-    if (problem) problems.push({ line: read.lines[i]!, column: problem.column, message: problem.message });
+    if (problem) problems.push({ line: read.lines[i]!, column: headerOf(problem.column, read.system), message: problem.message });
   });
   if (problems.length > 0) return limited(problems);
   return { ok: true, ...mergeRuns(existing, read.runs) };
+}
+
+/** A column named by its header as the file writes it ("wall thickness [mm]"). */
+function headerOf(name: string, system: UnitSystem): string {
+  const column = SCHEDULE_COLUMNS.find((c) => c.name === name);
+  return column === undefined ? name : columnHeader(column, system);
 }
 
 function limited(problems: readonly ScheduleProblem[]): ScheduleImport {

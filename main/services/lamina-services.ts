@@ -6,6 +6,7 @@ import type { DatabaseContext } from './database-context.js';
 import { LetterheadService } from './letterhead-service.js';
 import { MaterialsService } from './materials-service.js';
 import { ProjectsService } from './projects-service.js';
+import { SchedulesService } from './schedules-service.js';
 import { DEFAULT_SEED_FOLDER, seedBuiltInMaterials } from './seed-materials.js';
 
 /**
@@ -20,6 +21,8 @@ export interface LaminaServices {
   readonly preMigrationBackup?: string;
   readonly materials: MaterialsService;
   readonly projects: ProjectsService;
+  /** Each project's schedule of pipe runs, sized in one go. */
+  readonly schedules: SchedulesService;
   /** The library's letterhead for printed reports (the settings table). */
   readonly letterhead: LetterheadService;
   readonly backups: BackupsService;
@@ -62,6 +65,7 @@ export async function openLamina(databasePath: string, options: OpenLaminaOption
       ...(opened.preMigrationBackup ? { preMigrationBackup: opened.preMigrationBackup } : {}),
       materials,
       projects,
+      schedules: new SchedulesService(context, materials),
       letterhead,
       backups: new BackupsService(context, keep),
       close: () => opened.db.close(),

@@ -123,6 +123,25 @@ export const MIGRATIONS: readonly Migration[] = [
         ALTER TABLE projects ADD COLUMN letterhead TEXT NULL;
       `),
   },
+  {
+    version: 6,
+    description: "a project's schedule of pipe runs, its settings, and each run's last sizing",
+    up: (db) =>
+      db.exec(`
+        -- One row per run (JSON, SI). The sizing is kept with the pipe case it was sized from
+        -- (case_key), so a run is re-sized only when that case changes.
+        CREATE TABLE schedule_runs (
+          project_id INTEGER NOT NULL REFERENCES projects(id) ON DELETE CASCADE,
+          reference TEXT NOT NULL COLLATE NOCASE,
+          position INTEGER NOT NULL,
+          run TEXT NOT NULL,
+          sizing TEXT NULL,
+          PRIMARY KEY (project_id, reference)
+        ) WITHOUT ROWID;
+        -- The schedule's condition sets, services and economics (JSON); NULL: the shipped defaults.
+        ALTER TABLE projects ADD COLUMN schedule_settings TEXT NULL;
+      `),
+  },
 ];
 
 export const LATEST_SCHEMA_VERSION = MIGRATIONS[MIGRATIONS.length - 1]!.version;

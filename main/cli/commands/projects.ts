@@ -7,6 +7,7 @@ import { projectFileFromJson, projectFileToJson } from '../../services/project-f
 import { parseArgs, withServices } from './materials.js';
 import { solveProject } from './project-solve.js';
 import { projectsReportCommand } from './project-report.js';
+import { projectScheduleCommand } from './project-schedule.js';
 import { addDemoProject } from '../../services/demo-project.js';
 import { EXIT_BAD_INPUT, exitCodeOf, isInputProblem } from '../exit-code.js';
 
@@ -24,10 +25,11 @@ function caseTitle(inputs: unknown): string | undefined {
  * lamina projects add-demo                              (the demo project of data/demo, as the app adds it)
  * lamina projects solve ID [--format json|text]          (recomputes every case from its stored inputs)
  * lamina projects report ID --out FILE.pdf|FILE.html [--paper A4|Letter]   (the printed report)
+ * lamina projects schedule ID import FILE.csv | size [--format json|text] [--all] | export FILE.csv | template FILE.csv
  * Every form accepts --db PATH (else LAMINA_DB, else the per-system default).
  */
 const USAGE =
-  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | add-demo | solve ID [--format json|text] | report ID --out FILE.pdf|FILE.html [--paper A4|Letter] [--db PATH]';
+  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | add-demo | solve ID [--format json|text] | report ID --out FILE.pdf|FILE.html [--paper A4|Letter] | schedule ID import FILE.csv|size|export FILE.csv|template FILE.csv [--db PATH]';
 
 const CREATE_FIELDS = ['client', 'site', 'reference', 'engineer'] as const;
 
@@ -37,7 +39,7 @@ export const projectsCommand: CliCommand = async (args, io) => {
     io.stdout(`${USAGE}\n`);
     return 0;
   }
-  const parsed = parseArgs(rest, ['db', 'name', 'format', 'on-existing', 'out', 'paper', ...CREATE_FIELDS], ['json', 'deleted']);
+  const parsed = parseArgs(rest, ['db', 'name', 'format', 'on-existing', 'out', 'paper', ...CREATE_FIELDS], ['json', 'deleted', 'all']);
   if (typeof parsed === 'string') {
     io.stderr(`${parsed} ${USAGE}\n`);
     return EXIT_BAD_INPUT;
@@ -144,6 +146,8 @@ export const projectsCommand: CliCommand = async (args, io) => {
     }
     case 'report':
       return projectsReportCommand(parsed, io);
+    case 'schedule':
+      return projectScheduleCommand(parsed.positional, parsed.options, parsed.flags, io);
     default:
       io.stderr(`${sub === undefined ? 'projects needs a subcommand.' : `unknown subcommand "${sub}".`} ${USAGE}\n`);
       return EXIT_BAD_INPUT;
