@@ -16,7 +16,7 @@ import { writeScheduleCsv } from '../../app/schedules/schedule-csv-write.js';
 import { parseScheduleSettings } from '../../app/schedules/schedule-settings.js';
 import { runFromObject } from '../../app/schedules/run-object.js';
 import type { ScheduleProblem } from '../../app/schedules/schedule-csv-read.js';
-import { runsToResize, sizeSchedule, type KeyedSizedRun, type SizingProgress } from '../../app/schedules/size-schedule.js';
+import { caseKeyOf, runsToResize, sizeSchedule, type KeyedSizedRun, type SizingProgress } from '../../app/schedules/size-schedule.js';
 import type { MaterialIdOf } from '../../app/schedules/schedule-run-case.js';
 import type { UnitSystem } from '../../app/base/unit-systems.js';
 import { caseContext } from '../cases/case-context.js';
@@ -165,6 +165,33 @@ export class SchedulesService {
       for (const [reference, result] of results) update.run(JSON.stringify(result), projectId, reference);
     });
     return { sized: results.size, complete };
+  }
+
+  /**
+   * Stores sizings made elsewhere (the app sizes in its worker, off the main thread): each is kept
+   * only when it was sized from the run's current case (its caseKey); the others are dropped as
+   * out of date. Returns how many were stored.
+   */
+  storeSizing(projectId: number, results: unknown): number {
+    if (!Array.isArray(results)) throw new InputError('results', 'results must be a list of sized runs.');
+    const schedule = this.get(projectId);
+    const materialIdOf = this.materialIdOf();
+    const current = new Map(schedule.runs.map((r) => [r.reference.toLowerCase(), caseKeyOf(r, schedule.settings, materialIdOf)]));
+    const fresh = results.filter((r): r is KeyedSizedRun => {
+      if (typeof r !== 'object' || r === null) return false;
+      const { reference, caseKey, ok } = r as Record<string, unknown>;
+      return typeof reference === 'string' && typeof caseKey === 'string' && typeof ok === 'boolean' && current.get(reference.toLowerCase()) === caseKey;
+    });
+    inWriteTransaction(this.context, () => {
+      const update = this.db.prepare('UPDATE schedule_runs SET sizing = ? WHERE project_id = ? AND reference = ?');
+      for (const result of fresh) update.run(JSON.stringify(result), projectId, result.reference);
+    });
+    return fresh.length;
+  }
+
+  /** Library ids of the materials by name, as the schedule's runs name them (for sizing in the app's worker). */
+  materialIds(): Record<string, number> {
+    return Object.fromEntries(this.materials.list({}).map((m) => [m.name, m.id]));
   }
 
   bill(projectId: number): BillOfQuantities {
