@@ -15,10 +15,12 @@ import type {
 import type { PipeSize } from '../cases/pipe/pipe-sizes.js';
 import type { CaseDraft, Project, ProjectCase, ProjectFields, ProjectSummary } from './project-types.js';
 import type { Letterhead, ProjectReport } from '../report/project-report.js';
+import type { KeyedSizedRun, OpenedSchedule, ScheduleImportOutcome, ScheduleRun, ScheduleSettings } from './schedule-types.js';
 
 export type * from './backup-types.js';
 export type * from './material-types.js';
 export type * from './project-types.js';
+export type * from './schedule-types.js';
 export type { Letterhead, LetterheadLogo, PaperSize, ProjectReport } from '../report/project-report.js';
 
 /** What the running program is, for the title bar and the report footer. */
@@ -107,6 +109,21 @@ export interface ApiChannels {
    */
   'projects:save-report-pdf': { readonly request: Id; readonly response: { readonly saved: string | null } };
 
+  /** A project's schedule of pipe runs with its settings, last sizings, stale runs and the library's material ids by name. */
+  'schedules:open': { readonly request: { readonly projectId: number }; readonly response: OpenedSchedule };
+  /** A CSV schedule (units in the header): every row good and stored, or every problem listed and nothing stored. */
+  'schedules:import': { readonly request: { readonly projectId: number; readonly text: string }; readonly response: ScheduleImportOutcome };
+  /** One run edited in the grid, checked as the pipe case it becomes; refused with the column and one sentence. */
+  'schedules:update-run': { readonly request: { readonly projectId: number; readonly reference: string; readonly run: ScheduleRun }; readonly response: ScheduleRun };
+  'schedules:remove-runs': { readonly request: { readonly projectId: number; readonly references: readonly string[] }; readonly response: { readonly removed: number } };
+  /** Sizings made in the page's worker; each is kept only when sized from the run's current case. */
+  'schedules:store-sizing': { readonly request: { readonly projectId: number; readonly results: readonly KeyedSizedRun[] }; readonly response: { readonly stored: number } };
+  /** The schedule with the results of its up-to-date sizings, as CSV in the project's units. */
+  'schedules:export': { readonly request: { readonly projectId: number }; readonly response: { readonly fileName: string; readonly text: string } };
+  /** An empty schedule (header only) in the project's units. */
+  'schedules:template': { readonly request: { readonly projectId: number }; readonly response: { readonly fileName: string; readonly text: string } };
+  'schedules:set-settings': { readonly request: { readonly projectId: number; readonly settings: ScheduleSettings }; readonly response: ScheduleSettings };
+
   /** The firm's letterhead for printed reports (name, address, contact, logo, paper size). */
   'settings:letterhead': { readonly request: NoFields; readonly response: Letterhead };
   /** Stores the letterhead after checking it (texts' lengths, logo type and size, no script in an SVG). */
@@ -174,6 +191,16 @@ export interface LaminaApi {
     addDemo: ApiCall<'projects:add-demo'>;
     report: ApiCall<'projects:report'>;
     saveReportPdf: ApiCall<'projects:save-report-pdf'>;
+  };
+  schedules: {
+    open: ApiCall<'schedules:open'>;
+    importCsv: ApiCall<'schedules:import'>;
+    updateRun: ApiCall<'schedules:update-run'>;
+    removeRuns: ApiCall<'schedules:remove-runs'>;
+    storeSizing: ApiCall<'schedules:store-sizing'>;
+    exportCsv: ApiCall<'schedules:export'>;
+    template: ApiCall<'schedules:template'>;
+    setSettings: ApiCall<'schedules:set-settings'>;
   };
   settings: {
     letterhead: ApiCall<'settings:letterhead'>;

@@ -57,6 +57,16 @@ const api: LaminaApi = {
     report: (request) => invoke('projects:report', request),
     saveReportPdf: (request) => invoke('projects:save-report-pdf', request),
   },
+  schedules: {
+    open: (request) => invoke('schedules:open', request),
+    importCsv: (request) => invoke('schedules:import', request),
+    updateRun: (request) => invoke('schedules:update-run', request),
+    removeRuns: (request) => invoke('schedules:remove-runs', request),
+    storeSizing: (request) => invoke('schedules:store-sizing', request),
+    exportCsv: (request) => invoke('schedules:export', request),
+    template: (request) => invoke('schedules:template', request),
+    setSettings: (request) => invoke('schedules:set-settings', request),
+  },
   settings: {
     letterhead: (request) => invoke('settings:letterhead', request),
     saveLetterhead: (request) => invoke('settings:save-letterhead', request),

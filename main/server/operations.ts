@@ -35,7 +35,10 @@ export const API_CHANNELS = [
   'projects:list', 'projects:list-recycle-bin', 'projects:open', 'projects:create', 'projects:update', 'projects:rename',
   'projects:duplicate', 'projects:remove', 'projects:restore', 'projects:empty-recycle-bin', 'projects:add-case',
   'projects:update-case', 'projects:remove-case', 'projects:move-case', 'projects:export-file', 'projects:import-file', 'projects:add-demo',
-  'projects:report', 'projects:save-report-pdf', 'settings:letterhead', 'settings:save-letterhead',
+  'projects:report', 'projects:save-report-pdf',
+  'schedules:open', 'schedules:import', 'schedules:update-run', 'schedules:remove-runs', 'schedules:store-sizing',
+  'schedules:export', 'schedules:template', 'schedules:set-settings',
+  'settings:letterhead', 'settings:save-letterhead',
   'backups:list', 'backups:create', 'backups:restore',
 ] as const satisfies readonly ApiChannel[];
 // A channel in the contract but missing from the list above fails to compile here.
@@ -59,6 +62,9 @@ export interface OperationContext {
    */
   readonly saveReportPdf?: (report: ProjectReport) => Promise<string | null>;
 }
+
+/** Most runs (or references) one schedule request may carry. */
+const MAX_LIST_REQUEST = 100_000;
 
 /** Largest CSV or project file text accepted in one request (the HTTP body limit is set to match). */
 export const MAX_TEXT_REQUEST = 20_000_000;
@@ -216,6 +222,55 @@ export function createOperations(context: OperationContext): OperationHandlers {
       return { saved: await context.saveReportPdf(report) };
     },
 
+    // The schedule's channels check the request's shape here; the service checks every value
+    // (each run as the pipe case it becomes, each stored sizing against the run's current case).
+    'schedules:open': async (request) => {
+      const projectId = requireId(fields('schedules:open', request, ['projectId'])['projectId'], 'projectId');
+      const schedules = lib().schedules;
+      return { ...schedules.get(projectId), materialIds: schedules.materialIds() };
+    },
+    'schedules:import': async (request) => {
+      const r = fields('schedules:import', request, ['projectId', 'text']);
+      return lib().schedules.importCsv(requireId(r['projectId'], 'projectId'), requireLongText(r['text'], 'text'));
+    },
+    'schedules:update-run': async (request) => {
+      const r = fields('schedules:update-run', request, ['projectId', 'reference', 'run']);
+      const projectId = requireId(r['projectId'], 'projectId');
+      return lib().schedules.updateRun(projectId, requireText(r['reference'], 'reference', { min: 1, max: 200 }), r['run']);
+    },
+    'schedules:remove-runs': async (request) => {
+      const r = fields('schedules:remove-runs', request, ['projectId', 'references']);
+      const projectId = requireId(r['projectId'], 'projectId');
+      const references = r['references'];
+      if (!Array.isArray(references) || references.length > MAX_LIST_REQUEST) {
+        throw new InputError('references', `references must be a list of at most ${MAX_LIST_REQUEST} line references.`);
+      }
+      return { removed: lib().schedules.removeRuns(projectId, references) };
+    },
+    'schedules:store-sizing': async (request) => {
+      const r = fields('schedules:store-sizing', request, ['projectId', 'results']);
+      const projectId = requireId(r['projectId'], 'projectId');
+      const results = r['results'];
+      if (!Array.isArray(results) || results.length > MAX_LIST_REQUEST) {
+        throw new InputError('results', `results must be a list of at most ${MAX_LIST_REQUEST} sized runs.`);
+      }
+      return { stored: lib().schedules.storeSizing(projectId, results) };
+    },
+    'schedules:export': async (request) => {
+      const projectId = requireId(fields('schedules:export', request, ['projectId'])['projectId'], 'projectId');
+      const project = lib().projects.open(projectId);
+      return { fileName: scheduleFileName(project.name, 'schedule'), text: lib().schedules.exportCsv(projectId) };
+    },
+    'schedules:template': async (request) => {
+      const projectId = requireId(fields('schedules:template', request, ['projectId'])['projectId'], 'projectId');
+      const project = lib().projects.open(projectId);
+      return { fileName: scheduleFileName(project.name, 'schedule-template'), text: lib().schedules.template(projectId) };
+    },
+    'schedules:set-settings': async (request) => {
+      const r = fields('schedules:set-settings', request, ['projectId', 'settings']);
+      return lib().schedules.setSettings(requireId(r['projectId'], 'projectId'), r['settings']);
+    },
+
     'settings:letterhead': async (request) => {
       requireNoFields('settings:letterhead', request);
       return lib().letterhead.get();
@@ -316,4 +371,10 @@ function requireLongText(value: unknown, field: string): string {
 function projectFileName(projectName: string): string {
   const stem = projectName.normalize('NFKD').replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'project';
   return `${stem}.lamina.json`;
+}
+
+/** A schedule's CSV file name from the project name: "<project>-schedule.csv". */
+function scheduleFileName(projectName: string, what: string): string {
+  const stem = projectName.normalize('NFKD').replace(/[^\w.-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'project';
+  return `${stem}-${what}.csv`;
 }

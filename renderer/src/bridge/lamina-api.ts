@@ -80,6 +80,16 @@ const httpApi: LaminaApi = {
     report: call('projects:report'),
     saveReportPdf: call('projects:save-report-pdf'),
   },
+  schedules: {
+    open: call('schedules:open'),
+    importCsv: call('schedules:import'),
+    updateRun: call('schedules:update-run'),
+    removeRuns: call('schedules:remove-runs'),
+    storeSizing: call('schedules:store-sizing'),
+    exportCsv: call('schedules:export'),
+    template: call('schedules:template'),
+    setSettings: call('schedules:set-settings'),
+  },
   settings: {
     letterhead: call('settings:letterhead'),
     saveLetterhead: call('settings:save-letterhead'),
