@@ -81,6 +81,16 @@ export function readScheduleCsv(text: string): ScheduleRead {
   return problems.length > 0 ? { ok: false, problems } : { ok: true, system: header.system, runs, lines: runLines };
 }
 
+/**
+ * A value of the file in SI, to 12 significant figures: a conversion from US units is not exact in
+ * binary (28 m written as 91.86351706036745 ft reads back as 27.999999999999996 m), and no
+ * measurement of a run has twelve figures, so rounding there lets an export read back exactly.
+ */
+export function storedValue(shown: number, quantity: NonNullable<ScheduleColumn['quantity']>, system: UnitSystem): number {
+  const si = fromDisplay(shown, quantity, system);
+  return si === 0 ? 0 : Number(si.toPrecision(12));
+}
+
 function readHeader(line: string, problems: ScheduleProblem[]): HeaderMap | null {
   const parsed = csvLineFields(line);
   if ('problem' in parsed) {
@@ -127,7 +137,9 @@ function matchColumn(cell: string): { column: ScheduleColumn; system: UnitSystem
       if (lower === column.name) return { column, system: null };
       continue;
     }
-    for (const system of ['SI', 'IP'] as const) if (lower === columnHeader(column, system).toLowerCase()) return { column, system };
+    // A unit the same in both systems (%) says nothing about which one the file is in.
+    const same = columnHeader(column, 'SI') === columnHeader(column, 'IP');
+    for (const system of ['SI', 'IP'] as const) if (lower === columnHeader(column, system).toLowerCase()) return { column, system: same ? null : system };
   }
   return null;
 }
@@ -170,7 +182,7 @@ function readRun(line: string, lineNumber: number, header: HeaderMap, problems: 
       if (!Number.isInteger(value) || value < 0 || value > MAX_FITTINGS) fail(key, `${shown} must be a whole number from 0 to ${MAX_FITTINGS} (got ${raw}).`);
       return value;
     }
-    const si = fromDisplay(value, column.quantity!, header.system);
+    const si = storedValue(value, column.quantity!, header.system);
     const range = RANGES[key]!;
     const low = range.minExclusive ? si <= range.min : si < range.min;
     const high = range.maxExclusive ? si >= range.max : si > range.max;

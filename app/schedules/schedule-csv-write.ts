@@ -4,7 +4,8 @@
  * fewest digits that read back to the very value stored, so an export re-imports as the same
  * schedule; fields holding a comma, quote or line break are quoted as spreadsheets expect.
  */
-import { fromDisplay, toDisplay, type UnitSystem } from '../base/unit-systems.js';
+import { toDisplay, type UnitSystem } from '../base/unit-systems.js';
+import { storedValue } from './schedule-csv-read.js';
 import type { QuantityName } from '../base/quantities.js';
 import { CRITERION_NAMES } from '../cases/sizing/sizing-words.js';
 import { columnHeader, RESULT_COLUMNS, resultHeader, SCHEDULE_COLUMNS, type ColumnKey } from './schedule-columns.js';
@@ -16,12 +17,12 @@ export function csvField(value: string): string {
   return /[",\r\n]/.test(value) || value !== value.trim() ? `"${value.replace(/"/g, '""')}"` : value;
 }
 
-/** The shortest decimal of the shown value that converts back to exactly `si`. */
+/** The shortest decimal of the shown value that the reader converts back to exactly `si`. */
 export function exactShown(si: number, quantity: QuantityName, system: UnitSystem): string {
   const shown = toDisplay(si, quantity, system);
   for (let digits = 1; digits <= 17; digits++) {
     const text = String(Number(shown.toPrecision(digits)));
-    if (fromDisplay(Number(text), quantity, system) === si) return text;
+    if (storedValue(Number(text), quantity, system) === si) return text;
   }
   return String(shown);
 }
