@@ -387,7 +387,9 @@ describe('(b) ajv and lamina solve agree at every bound of every numeric leaf of
         }
       }
       expect(disagreements).toEqual([]);
-    });
+      // Every probe the command accepts runs the whole case, its sizing included: the freeze example
+      // simulates its water freezing at two thicknesses per probe, about 30 s in all on a busy machine.
+    }, 240_000);
   }
 
   it('every cross-field exception was needed by at least one probe', () => {
