@@ -7,7 +7,8 @@
  *  2. time per unknown from 1e3 to 1e6 nodes (linear growth shows as a flat column);
  *  3. the band solver against ml-matrix's dense LU on the same tridiagonal systems (n = 250, 500, 1000);
  *  4. a 40-case project's report to PDF in Chromium (report-bench.ts);
- *  5. a pipe case sized across 12 thicknesses against one solveCase of it (sizing-bench.ts).
+ *  5. a pipe case sized across 12 thicknesses against one solveCase of it (sizing-bench.ts);
+ *  6. a 500-run schedule sized in one go, and 2,500 to 10,000 runs with their peak heap (schedule-bench.ts).
  */
 import { execFileSync } from 'node:child_process';
 import { readdirSync, readFileSync } from 'node:fs';
@@ -20,6 +21,7 @@ import { BandedMatrix, solveBanded, solveSteady, type SteadyProblem } from '../.
 import { outerSurfaceExchange } from '../../app/physics/index.js';
 import { reportBench } from './report-bench.js';
 import { sizingBench } from './sizing-bench.js';
+import { scheduleBench } from './schedule-bench.js';
 
 function median(values: number[]): number {
   const s = [...values].sort((a, b) => a - b);
@@ -153,3 +155,4 @@ for (const n of [250, 500, 1000]) {
 console.log('');
 await reportBench();
 sizingBench();
+await scheduleBench();
