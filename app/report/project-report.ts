@@ -8,7 +8,7 @@
  */
 import type { UnitSystem } from '../base/unit-systems.js';
 import { GENERAL_CAUTION } from './general-caution.js';
-import type { CaseReport, ReportFigure, ReportVerdict } from './report-model.js';
+import type { CaseReport, ReportFigure, ReportSection, ReportVerdict } from './report-model.js';
 
 export const PAPER_SIZES = ['A4', 'Letter'] as const;
 export type PaperSize = (typeof PAPER_SIZES)[number];
@@ -82,6 +82,8 @@ export interface ProjectReport {
   readonly footer: string;
   /** What made the report ("Lamina 0.1.0"), printed small on the cover. */
   readonly producedBy: string;
+  /** The project's schedule of pipe runs and its bill of quantities, after the cases (absent without a schedule). */
+  readonly schedule?: readonly ReportSection[];
 }
 
 export function buildProjectReport(
@@ -89,6 +91,7 @@ export function buildProjectReport(
   project: ProjectParticulars,
   cases: readonly ReportedCase[],
   producedBy: string,
+  schedule?: { readonly sections: readonly ReportSection[]; readonly caution: string },
 ): ProjectReport {
   const summary = cases.map((c): SummaryLine =>
     'report' in c
@@ -102,8 +105,8 @@ export function buildProjectReport(
         }
       : { caseId: c.id, kind: c.kind, title: c.name, subject: '', keyFigure: null, verdicts: [], error: c.error },
   );
-  const cautions = [...new Set([...cases.flatMap((c) => ('report' in c ? c.report.cautions : [])), GENERAL_CAUTION])];
-  return { letterhead, project, summary, cases, cautions, footer: footerLine(project), producedBy };
+  const cautions = [...new Set([...cases.flatMap((c) => ('report' in c ? c.report.cautions : [])), ...(schedule ? [schedule.caution] : []), GENERAL_CAUTION])];
+  return { letterhead, project, summary, cases, cautions, footer: footerLine(project), producedBy, ...(schedule ? { schedule: schedule.sections } : {}) };
 }
 
 /** "REF-001 revision B", or whichever of the two is given, or the project's name. */

@@ -9,9 +9,11 @@ import { buildProjectReport, type ProjectReport } from '../../app/report/project
 import { caseContext } from '../cases/case-context.js';
 import type { MaterialsService } from './materials-service.js';
 import type { ProjectsService } from './projects-service.js';
+import type { SchedulesService } from './schedules-service.js';
+import { SCHEDULE_CAUTION, scheduleReportSections } from '../../app/schedules/schedule-report.js';
 
 export function projectReport(
-  services: { readonly projects: ProjectsService; readonly materials: MaterialsService },
+  services: { readonly projects: ProjectsService; readonly materials: MaterialsService; readonly schedules?: SchedulesService },
   id: number,
   producedBy: string,
 ): ProjectReport {
@@ -19,5 +21,13 @@ export function projectReport(
   const letterhead = services.projects.letterheadOf(project.id);
   const { name, client, site, reference, revision, revisionNote, date, engineer, checker, unitSystem } = project;
   const cases = reportCases(project.cases, { ...caseContext(services.materials), unitSystem });
-  return buildProjectReport(letterhead, { name, client, site, reference, revision, revisionNote, date, engineer, checker, unitSystem }, cases, producedBy);
+  return buildProjectReport(letterhead, { name, client, site, reference, revision, revisionNote, date, engineer, checker, unitSystem }, cases, producedBy, scheduleOf(services.schedules, project.id));
+}
+
+/** The schedule's sections with the sizing as stored (runs changed since their sizing print as not sized yet). */
+function scheduleOf(schedules: SchedulesService | undefined, projectId: number) {
+  const schedule = schedules?.get(projectId);
+  if (!schedules || !schedule || schedule.runs.length === 0) return undefined;
+  const fresh = new Map(Object.entries(schedule.sizing).filter(([reference]) => !schedule.stale.includes(reference)));
+  return { sections: scheduleReportSections(schedule.runs, fresh, schedules.bill(projectId)), caution: SCHEDULE_CAUTION };
 }

@@ -16,6 +16,9 @@ import { runCase } from '../../app/schedules/schedule-run-case.js';
 import type { ScheduleRun } from '../../app/schedules/schedule-model.js';
 import type { KeyedSizedRun } from '../../app/schedules/size-schedule.js';
 import { caseContext } from '../../main/cases/case-context.js';
+import { projectReport } from '../../main/services/project-report-service.js';
+import { renderReportBody } from '../../app/report/html/render-report.js';
+import { SCHEDULE_CAUTION } from '../../app/schedules/schedule-report.js';
 import { exampleCsv, root, tableOuterDiameter, useScheduleLibrary } from './schedule-fixture.js';
 
 psychrolib.SetUnitSystem(psychrolib.SI);
@@ -118,6 +121,18 @@ describe('a schedule sized in one go', () => {
     const heating = bill.services.find((s) => s.service === 'heating flow')!;
     expect(heating.runs).toBe(runs.filter((r) => r.service === 'heating flow').length);
     expect(bill.notSized).toEqual([]);
+  });
+
+  it('the printed report carries the schedule and the bill after the cases, and the schedule caution', () => {
+    const report = projectReport(library.lamina(), library.projectId(), 'Lamina test');
+    expect(report.schedule!.map((s) => s.heading)).toEqual(['Schedule of pipe runs', 'Bill of quantities']);
+    const runsTable = report.schedule![0]!.blocks.find((b) => b.kind === 'table');
+    expect(runsTable?.kind === 'table' && runsTable.table.rows.map((r) => r[0])).toEqual(runs.map((r) => r.reference));
+    expect(report.cautions).toContain(SCHEDULE_CAUTION);
+    const html = renderReportBody(report);
+    expect(html).toContain('Bill of quantities');
+    expect(html).toContain('The job');
+    expect(html).not.toMatch(/NaN|undefined|Infinity/);
   });
 
   it('an edited run alone is sized again', () => {

@@ -35,6 +35,7 @@ export function renderReportBody(report: ProjectReport): string {
     coverHtml(report) +
     summaryHtml(report, print) +
     report.cases.map((c, i) => caseHtml(c, i, report.cases.length, print, cautions)).join('') +
+    scheduleHtml(report.schedule, print) +
     cautionsHtml(cautions) +
     `</article>`
   );
@@ -150,6 +151,14 @@ function caseHtml(c: ReportedCase, i: number, count: number, print: PrintText, c
   }
   parts.push('</section>');
   return parts.join('');
+}
+
+/** The project's schedule and bill of quantities, after the cases, each section from a new page. */
+function scheduleHtml(sections: ProjectReport['schedule'], print: PrintText): string {
+  if (sections === undefined || sections.length === 0) return '';
+  return sections
+    .map((s) => `<section class="case schedule section-${escapeAttribute(s.id)}"><header class="case-head"><p class="case-number">Schedule</p><h2>${escapeHtml(s.heading)}</h2></header>${s.blocks.map((b) => blockHtml(b, print)).join('')}</section>`)
+    .join('');
 }
 
 function energyBalanceHtml(r: CaseReport, print: PrintText): string {
