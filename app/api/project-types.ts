@@ -78,6 +78,8 @@ export interface CaseDraft {
  * From formatVersion 2 it also carries the letterhead the project's report prints with, so a
  * colleague's copy prints the same; version 1 files have none (and no checker or revision note).
  */
+import type { ScheduleRun, ScheduleSettings } from '../schedules/schedule-model.js';
+
 export interface ProjectFile {
   readonly format: 'lamina-project';
   readonly formatVersion: number;
@@ -86,4 +88,6 @@ export interface ProjectFile {
   readonly letterhead?: Letterhead;
   readonly materials: readonly ({ readonly fileId: number } & MaterialInput)[];
   readonly cases: readonly { readonly name: string; readonly inputs: CaseInputs }[];
+  /** Version 3: the schedule of pipe runs (materials by name) and its settings (null: the shipped defaults). */
+  readonly schedule?: { readonly settings: ScheduleSettings | null; readonly runs: readonly ScheduleRun[] };
 }

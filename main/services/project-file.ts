@@ -9,6 +9,10 @@ import type { ProjectFields } from './project-types.js';
 import { requireBoundedNesting } from '../../app/base/json-depth.js';
 import { InputError } from '../../app/index.js';
 import { rejectUnknownKeys, requireId, requireObject } from './validate.js';
+import type { ScheduleRun, ScheduleSettings } from '../../app/schedules/schedule-model.js';
+import { parseScheduleSettings } from '../../app/schedules/schedule-settings.js';
+import { runFromObject } from '../../app/schedules/run-object.js';
+import { MAX_SCHEDULE_RUNS } from '../../app/schedules/schedule-csv-read.js';
 
 /**
  * The project exchange file: one JSON document holding the project's fields, its cases' inputs
@@ -18,10 +22,12 @@ import { rejectUnknownKeys, requireId, requireObject } from './validate.js';
 export const PROJECT_FILE_FORMAT = 'lamina-project';
 /**
  * The version this Lamina writes. 2 added the project's checker and revision note and the
- * letterhead; version 1 files (no letterhead) are still read.
+ * letterhead; 3 the schedule of pipe runs; version 1 and 2 files are still read.
  */
-export const PROJECT_FILE_VERSION = 2;
-const READABLE_VERSIONS: readonly number[] = [1, 2];
+export const PROJECT_FILE_VERSION = 3;
+const READABLE_VERSIONS: readonly number[] = [1, 2, 3];
+/** Runs of a schedule a file may hold (as many as a schedule may). */
+const MAX_FILE_RUNS = MAX_SCHEDULE_RUNS;
 
 export type { ProjectFile };
 
@@ -31,6 +37,8 @@ export interface CheckedProjectFile {
   readonly letterhead: Letterhead | null;
   readonly materials: readonly { fileId: number; material: MaterialInput }[];
   readonly cases: readonly { name: string; inputs: CaseInputs }[];
+  /** The schedule, checked run by run as the grid checks an edit; null when the file has none. */
+  readonly schedule: { readonly settings: ScheduleSettings | null; readonly runs: readonly ScheduleRun[] } | null;
 }
 
 const MAX_FILE_MATERIALS = 1000;
@@ -59,10 +67,10 @@ export function readProjectFile(value: unknown): CheckedProjectFile {
   if (raw['format'] !== PROJECT_FILE_FORMAT) throw new InputError('format', `format must be "${PROJECT_FILE_FORMAT}"; this is not a Lamina project file.`);
   const version = raw['formatVersion'];
   if (typeof version !== 'number' || !READABLE_VERSIONS.includes(version)) {
-    throw new InputError('formatVersion', `formatVersion must be ${READABLE_VERSIONS.join(' or ')} (the file was written by a Lamina this version cannot read).`);
+    throw new InputError('formatVersion', `formatVersion must be ${READABLE_VERSIONS.slice(0, -1).join(', ')} or ${READABLE_VERSIONS.at(-1)} (the file was written by a Lamina this version cannot read).`);
   }
   const keys = ['format', 'formatVersion', 'exportedAt', 'project', 'materials', 'cases'];
-  rejectUnknownKeys(raw, version >= 2 ? [...keys, 'letterhead'] : keys, 'file');
+  rejectUnknownKeys(raw, version >= 3 ? [...keys, 'letterhead', 'schedule'] : version >= 2 ? [...keys, 'letterhead'] : keys, 'file');
   const project = validateProjectFields(raw['project']);
   const letterhead = raw['letterhead'] === undefined || raw['letterhead'] === null ? null : fileLetterhead(raw['letterhead']);
   const rawMaterials = raw['materials'];
@@ -97,7 +105,25 @@ export function readProjectFile(value: unknown): CheckedProjectFile {
     }
     return { name: draft.name, inputs: validateCaseInputs(draft.inputs) };
   });
-  return { project, letterhead, materials, cases };
+  return { project, letterhead, materials, cases, schedule: raw['schedule'] === undefined ? null : fileSchedule(raw['schedule']) };
+}
+
+function fileSchedule(value: unknown): { settings: ScheduleSettings | null; runs: ScheduleRun[] } {
+  const schedule = requireObject(value, 'schedule');
+  rejectUnknownKeys(schedule, ['settings', 'runs'], 'schedule');
+  const settings = schedule['settings'] === null || schedule['settings'] === undefined ? null : parseScheduleSettings(schedule['settings'], 'schedule.settings');
+  const rawRuns = schedule['runs'];
+  if (!Array.isArray(rawRuns) || rawRuns.length > MAX_FILE_RUNS) throw new InputError('schedule.runs', `schedule.runs must be a list of at most ${MAX_FILE_RUNS} runs.`);
+  const seen = new Set<string>();
+  return {
+    settings,
+    runs: rawRuns.map((r, i) => {
+      const run = runFromObject(r, `schedule.runs[${i}]`);
+      if (seen.has(run.reference.toLowerCase())) throw new InputError(`schedule.runs[${i}].reference`, `schedule.runs[${i}] repeats the reference '${run.reference}'; each run needs its own.`);
+      seen.add(run.reference.toLowerCase());
+      return run;
+    }),
+  };
 }
 
 function fileLetterhead(value: unknown): Letterhead {

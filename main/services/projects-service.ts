@@ -128,6 +128,7 @@ export class ProjectsService {
       // The copy prints as the original does: with the letterhead it carries, if any.
       const copyId = this.insertProject({ ...original, name: checkedName ?? `${original.name} (copy)`.slice(0, PROJECT_LIMITS.name) }, this.ownLetterhead(checkedId));
       original.cases.forEach((c, i) => storeNamingCase(i, c.name, () => this.insertCase(copyId, c.name, c.inputs)));
+      this.copySchedule(checkedId, copyId);
       return this.open(copyId);
     });
   }
@@ -255,7 +256,21 @@ export class ProjectsService {
       letterhead: this.letterheadOf(project.id),
       materials: ids.map((materialId) => ({ fileId: materialId, ...materialInputOf(this.materials.get(materialId)) })),
       cases: cases.map((c) => ({ name: c.name, inputs: c.inputs })),
+      ...this.scheduleOf(project.id),
     };
+  }
+
+  /** The project's schedule for its file (none when it has no runs and default settings). */
+  private scheduleOf(projectId: number): Pick<ProjectFile, 'schedule'> {
+    const settings = (this.db.prepare('SELECT schedule_settings FROM projects WHERE id = ?').get(projectId) as { schedule_settings: string | null }).schedule_settings;
+    const runs = (this.db.prepare('SELECT run FROM schedule_runs WHERE project_id = ? ORDER BY position').all(projectId) as { run: string }[]).map((r) => JSON.parse(r.run));
+    return settings === null && runs.length === 0 ? {} : { schedule: { settings: settings === null ? null : JSON.parse(settings), runs } };
+  }
+
+  /** Copies the schedule (settings, runs and their sizing) of one project to another. */
+  private copySchedule(fromId: number, toId: number): void {
+    this.db.prepare('UPDATE projects SET schedule_settings = (SELECT schedule_settings FROM projects WHERE id = ?) WHERE id = ?').run(fromId, toId);
+    this.db.prepare('INSERT INTO schedule_runs (project_id, reference, position, run, sizing) SELECT ?, reference, position, run, sizing FROM schedule_runs WHERE project_id = ?').run(toId, fromId);
   }
 
   /**
@@ -298,6 +313,11 @@ export class ProjectsService {
         const inputs = validateCaseInputs(remapMaterialIds(c.inputs, (fileId) => idMap.get(fileId)!));
         storeNamingCase(i, c.name, () => this.insertCase(projectId, c.name, inputs));
       });
+      if (parsed.schedule !== null) {
+        if (parsed.schedule.settings !== null) this.db.prepare('UPDATE projects SET schedule_settings = ? WHERE id = ?').run(JSON.stringify(parsed.schedule.settings), projectId);
+        const insert = this.db.prepare('INSERT INTO schedule_runs (project_id, reference, position, run, sizing) VALUES (?, ?, ?, ?, NULL)');
+        parsed.schedule.runs.forEach((run, i) => insert.run(projectId, run.reference, i, JSON.stringify(run)));
+      }
       const replaced = same && choice === 'replace' ? same.id : null;
       if (replaced !== null) this.remove(replaced);
       return { project: this.open(projectId), materialsReused: reused, materialsCreated: created, replaced };

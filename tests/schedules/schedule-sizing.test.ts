@@ -17,6 +17,7 @@ import type { ScheduleRun } from '../../app/schedules/schedule-model.js';
 import type { KeyedSizedRun } from '../../app/schedules/size-schedule.js';
 import { caseContext } from '../../main/cases/case-context.js';
 import { projectReport } from '../../main/services/project-report-service.js';
+import { projectFileFromJson, projectFileToJson } from '../../main/services/project-file.js';
 import { renderReportBody } from '../../app/report/html/render-report.js';
 import { SCHEDULE_CAUTION } from '../../app/schedules/schedule-report.js';
 import { exampleCsv, root, tableOuterDiameter, useScheduleLibrary } from './schedule-fixture.js';
@@ -148,6 +149,21 @@ describe('a schedule sized in one go', () => {
     expect(() => services().updateRun(library.projectId(), run.reference, { ...run, length: -3 })).toThrow('length [m] must be above 0 and at most 100000 (got -3).');
     expect(() => services().updateRun(library.projectId(), run.reference, { ...run, location: 'Roof' })).toThrow(/^location 'Roof' is neither indoor, outdoor nor a condition set of the project/);
     expect(services().get(library.projectId()).runs[0]).toEqual(run);
+  });
+
+  it('the schedule travels with the project: its file (runs and settings) and its duplicate', () => {
+    const projects = library.lamina().projects;
+    const text = projectFileToJson(projects.exportProject(library.projectId()));
+    const file = JSON.parse(text);
+    expect(file.schedule.runs).toEqual(services().get(library.projectId()).runs);
+    const imported = projects.importProject(projectFileFromJson(text), 'copy').project;
+    expect(services().get(imported.id).runs).toEqual(services().get(library.projectId()).runs);
+    const copy = projects.duplicate(library.projectId());
+    expect(services().get(copy.id).runs).toEqual(services().get(library.projectId()).runs);
+    expect(services().get(copy.id).stale).toEqual(services().get(library.projectId()).stale);
+    // A file with a bad run is refused whole, naming the run and the field.
+    file.schedule.runs[1].length = 0;
+    expect(() => projects.importProject(projectFileFromJson(JSON.stringify(file)), 'copy')).toThrow('length [m] must be above 0 and at most 100000 (got 0).');
   });
 
   it('a cancelled sizing keeps the runs done so far and leaves the rest to size', () => {

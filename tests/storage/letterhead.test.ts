@@ -10,7 +10,7 @@ import { describe, expect, it } from 'vitest';
 import { EMPTY_LETTERHEAD, type Letterhead } from '../../app/report/project-report.js';
 import { openLamina } from '../../main/services/lamina-services.js';
 import { MAX_LOGO_BYTES, svgRefusal, validateLetterhead } from '../../main/services/letterhead-validation.js';
-import { projectFileFromJson, projectFileToJson } from '../../main/services/project-file.js';
+import { PROJECT_FILE_VERSION, projectFileFromJson, projectFileToJson } from '../../main/services/project-file.js';
 import { tempDatabasePath } from './temp-folder.js';
 
 const fixture = (name: string) => fs.readFileSync(path.join(__dirname, 'fixtures', name)).toString('base64');
@@ -142,7 +142,7 @@ describe('the letterhead in the library and in project files', () => {
       expect(project.checker).toBe('J. Lindqvist');
       expect(project.revisionNote).toBe('Issued for comment');
       const file = office.projects.exportProject(project.id);
-      expect(file.formatVersion).toBe(2);
+      expect(file.formatVersion).toBe(PROJECT_FILE_VERSION);
       expect(file.letterhead).toEqual(FIRM);
 
       // The colleague's own letterhead stays theirs; the imported project prints with the file's.
@@ -169,7 +169,7 @@ describe('the letterhead in the library and in project files', () => {
       expect(() => colleague.projects.importProject({ ...v1, letterhead: FIRM })).toThrow(/^file\.letterhead is not a known field here/);
       expect(() => colleague.projects.importProject({ ...file, project: { ...file.project, name: 'Bad logo' }, letterhead: withLogo('image/png', JPEG) }))
         .toThrow("The file's letterhead cannot be used: logo is declared image/png but the file is not a PNG image.");
-      expect(() => colleague.projects.importProject({ ...file, formatVersion: 3 })).toThrow('formatVersion must be 1 or 2 (the file was written by a Lamina this version cannot read).');
+      expect(() => colleague.projects.importProject({ ...file, formatVersion: PROJECT_FILE_VERSION + 1 })).toThrow('formatVersion must be 1, 2 or 3 (the file was written by a Lamina this version cannot read).');
     } finally {
       office.close();
       colleague.close();
