@@ -71,6 +71,21 @@ describe('lamina projects schedule', () => {
     expect((await lamina('schedule', '1', 'size')).stdout).toContain('14 runs, 1 sized now.');
   });
 
+  it('prints the schedule settings, sets new ones from a file, and refuses a bad one naming the field', async () => {
+    const settings = JSON.parse((await lamina('schedule', '1', 'settings')).stdout);
+    expect(settings.services.map((s: { service: string }) => s.service)).toContain('chilled water');
+    settings.services.find((s: { service: string }) => s.service === 'heating flow').criteria = { maxSurfaceTemperature: { limit: 45 }, maxHeatLoss: { limit: 25 } };
+    writeFileSync(file('settings.json'), JSON.stringify(settings));
+    expect((await lamina('schedule', '1', 'settings', file('settings.json'))).code).toBe(0);
+    // The heating-flow runs' cases changed: they alone are sized again.
+    expect((await lamina('schedule', '1', 'size')).stdout).toContain('14 runs, 4 sized now.');
+    settings.conditionSets[0].relativeHumidity = 1.5;
+    writeFileSync(file('bad-settings.json'), JSON.stringify(settings));
+    const bad = await lamina('schedule', '1', 'settings', file('bad-settings.json'));
+    expect(bad.code).toBe(2);
+    expect(bad.stderr.trim()).toMatch(/^settings\.conditionSets\[0\]\.relativeHumidity must be/);
+  });
+
   it('writes a template in the project\'s units, and refuses a bad action or id in one line', async () => {
     const template = await lamina('schedule', '1', 'template', '-');
     expect(template.stdout.trim()).toBe('reference,service,pipe series,pipe size,wall thickness [mm],length [m],fluid temperature [°C],location,air temperature [°C],relative humidity [%],wind speed [m/s],orientation,insulation material,insulation thickness [mm],valves,flanges,bends');

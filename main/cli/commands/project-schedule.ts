@@ -3,6 +3,7 @@
  * lamina projects schedule ID size [--format json|text] [--all]
  * lamina projects schedule ID export FILE.csv|-   (the schedule with its results, in the project's units)
  * lamina projects schedule ID template FILE.csv|- (an empty schedule: the header in the project's units)
+ * lamina projects schedule ID settings [FILE.json] (prints the condition sets, services and economics; with a file, sets them)
  *
  * The same checks and sentences as the app: the work is SchedulesService's and the engine's.
  */
@@ -19,7 +20,7 @@ import { EXIT_BAD_INPUT, EXIT_DONE, EXIT_FAILED } from '../exit-code.js';
 import { withServices } from './materials.js';
 import type { Schedule } from '../../services/schedules-service.js';
 
-export const SCHEDULE_USAGE = 'usage: lamina projects schedule ID import FILE.csv | size [--format json|text] [--all] | export FILE.csv|- | template FILE.csv|- [--db PATH]';
+export const SCHEDULE_USAGE = 'usage: lamina projects schedule ID import FILE.csv | size [--format json|text] [--all] | export FILE.csv|- | template FILE.csv|- | settings [FILE.json] [--db PATH]';
 
 export async function projectScheduleCommand(positional: readonly string[], options: ReadonlyMap<string, string>, flags: ReadonlySet<string>, io: CliIO): Promise<number> {
   const [id, action, file] = positional;
@@ -74,6 +75,22 @@ export async function projectScheduleCommand(positional: readonly string[], opti
         return failed.length === 0 ? EXIT_DONE : EXIT_FAILED;
       });
     }
+    case 'settings':
+      return withServices(io, db, ({ schedules }) => {
+        if (file) {
+          let json: unknown;
+          try {
+            json = JSON.parse(readTextFile(path.resolve(io.cwd, file)));
+          } catch (error) {
+            if (!(error instanceof SyntaxError)) throw error;
+            io.stderr(`${file} is not JSON: ${error.message}\n`);
+            return EXIT_BAD_INPUT;
+          }
+          schedules.setSettings(projectId, json);
+          io.stdout(`Set the schedule settings of project ${projectId} from ${file}; runs whose case changed will be sized again.\n`);
+        } else io.stdout(`${JSON.stringify(schedules.settingsOf(projectId), null, 2)}\n`);
+        return EXIT_DONE;
+      });
     default:
       io.stderr(`unknown schedule action "${action}". ${SCHEDULE_USAGE}\n`);
       return EXIT_BAD_INPUT;
