@@ -71,7 +71,11 @@ const engineSize = (reference: string): SizedRun => {
 };
 const row = (reference: string) => page.locator(`tr[data-reference="${reference}"]`);
 const cell = (reference: string, column: string) => row(reference).locator(`td[data-column="${column}"]`);
-const shot = (name: string) => page.screenshot({ path: path.join(resultsFolder, name), fullPage: false });
+/** A screenshot of the window with the schedule's heading at the top (or `at`, when given). */
+const shot = async (name: string, at = '#schedule-heading') => {
+  await page.locator(at).evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await page.screenshot({ path: path.join(resultsFolder, name), fullPage: false });
+};
 /**
  * Time from a key pressed in the filter box to the row count showing its effect, ms, measured in
  * the page ('#' matches no row, Backspace brings them all back).
@@ -223,10 +227,8 @@ describe('the pipe schedule in the app', () => {
     await showOnly('');
     await page.setViewportSize({ width: 1280, height: 720 });
     await shot('schedule-sized-1280x720.png');
-    await page.locator('[data-testid="schedule-bill"]').scrollIntoViewIfNeeded();
-    await shot('schedule-bill-1280x720.png');
+    await shot('schedule-bill-1280x720.png', '[data-testid="schedule-bill"]');
     await page.setViewportSize({ width: 1366, height: 800 });
-    await page.locator('[data-testid="schedule-grid"]').scrollIntoViewIfNeeded();
     await shot('schedule-sized-1366x800.png');
   });
 
@@ -251,11 +253,11 @@ describe('the pipe schedule in the app', () => {
 
   it('keeps a refused edit as typed with the sentence beside it, and re-sizes an edited row alone', async () => {
     const before = schedule();
-    // Arrow keys from the first cell to KY-0003's length, as a keyboard user gets there.
+    // Arrow keys from the first cell to KY-0003's length (reference, service, series, size, length), as a keyboard user gets there.
     await cell('KY-0001', 'reference').click();
     await page.keyboard.press('ArrowDown');
     await page.keyboard.press('ArrowDown');
-    for (let i = 0; i < 5; i++) await page.keyboard.press('ArrowRight');
+    for (let i = 0; i < 4; i++) await page.keyboard.press('ArrowRight');
     await page.keyboard.press('Enter');
     const input = cell('KY-0003', 'length').locator('input');
     await input.fill('-4');

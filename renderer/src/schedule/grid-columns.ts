@@ -122,9 +122,21 @@ export function isFlagged(sized: KeyedSizedRun | undefined): boolean {
   return sized !== undefined && (!sized.ok || sized.basis === 'none-meets' || !sized.criteriaMet);
 }
 
-export function verdictText(sized: KeyedSizedRun | undefined): string {
+/** Every check with its verdict, for the active row's line. */
+export function verdictList(sized: KeyedSizedRun | undefined): string {
   if (!sized || !sized.ok) return '';
   return sized.verdicts.map((v) => `${VERDICT_SIGNS[v.verdict]} ${v.check}`).join('; ');
+}
+
+/** The checks in short, for the grid's cell: what fails, else what warns, else that all pass. */
+export function verdictText(sized: KeyedSizedRun | undefined): string {
+  if (!sized || !sized.ok) return '';
+  const named = (verdict: CheckVerdict) => sized.verdicts.filter((v) => v.verdict === verdict).map((v) => v.check);
+  const fails = named('fail');
+  if (fails.length > 0) return `✗ ${fails.join(', ')}`;
+  const warnings = named('warning');
+  if (warnings.length > 0) return `! ${warnings.join(', ')}`;
+  return sized.verdicts.some((v) => v.verdict === 'pass') ? '✓ all pass' : '– none apply';
 }
 
 function resultNumber(quantity: QuantityName, system: UnitSystem, pick: (s: Extract<KeyedSizedRun, { ok: true }>) => number): Pick<GridColumn, 'text' | 'sortKey' | 'unit' | 'numeric'> {
@@ -143,7 +155,7 @@ function resultNumber(quantity: QuantityName, system: UnitSystem, pick: (s: Extr
 export function resultColumns(system: UnitSystem): GridColumn[] {
   const fresh = (row: GridRow) => (row.stale ? undefined : row.sized);
   return [
-    { id: 'result-thickness', title: 'thickness', editable: false, ...resultNumber('thickness', system, (s) => s.thickness) },
+    { id: 'result-thickness', title: 'chosen thickness', editable: false, ...resultNumber('thickness', system, (s) => s.thickness) },
     { id: 'result-basis', title: 'decided by', unit: '', editable: false, numeric: false, wide: true, text: (row) => basisText(fresh(row)), sortKey: (row) => basisText(fresh(row)) },
     { id: 'result-heat-loss', title: 'heat loss', editable: false, ...resultNumber('heatFlowPerLength', system, (s) => s.heatLossPerMetre) },
     { id: 'result-surface', title: 'surface', editable: false, ...resultNumber('temperature', system, (s) => s.surfaceTemperature) },
