@@ -15,6 +15,7 @@ import type { ScheduleRun, ScheduleSettings } from '../../app/schedules/schedule
 import { writeScheduleCsv } from '../../app/schedules/schedule-csv-write.js';
 import { parseScheduleSettings } from '../../app/schedules/schedule-settings.js';
 import { runFromObject } from '../../app/schedules/run-object.js';
+import { sizedRunFromObject } from '../../app/schedules/sized-run-object.js';
 import type { ScheduleProblem } from '../../app/schedules/schedule-csv-read.js';
 import { caseKeyOf, runsToResize, sizeSchedule, type KeyedSizedRun, type SizingProgress } from '../../app/schedules/size-schedule.js';
 import type { MaterialIdOf } from '../../app/schedules/schedule-run-case.js';
@@ -177,11 +178,7 @@ export class SchedulesService {
     const schedule = this.get(projectId);
     const materialIdOf = this.materialIdOf();
     const current = new Map(schedule.runs.map((r) => [r.reference.toLowerCase(), caseKeyOf(r, schedule.settings, materialIdOf)]));
-    const fresh = results.filter((r): r is KeyedSizedRun => {
-      if (typeof r !== 'object' || r === null) return false;
-      const { reference, caseKey, ok } = r as Record<string, unknown>;
-      return typeof reference === 'string' && typeof caseKey === 'string' && typeof ok === 'boolean' && current.get(reference.toLowerCase()) === caseKey;
-    });
+    const fresh = results.map((r, i) => sizedRunFromObject(r, `results[${i}]`)).filter((r) => current.get(r.reference.toLowerCase()) === r.caseKey);
     inWriteTransaction(this.context, () => {
       const update = this.db.prepare('UPDATE schedule_runs SET sizing = ? WHERE project_id = ? AND reference = ?');
       for (const result of fresh) update.run(JSON.stringify(result), projectId, result.reference);

@@ -166,6 +166,16 @@ describe('a schedule sized in one go', () => {
     expect(() => projects.importProject(projectFileFromJson(JSON.stringify(file)), 'copy')).toThrow('length [m] must be above 0 and at most 100000 (got 0).');
   });
 
+  it('stores a sizing made elsewhere (the app\'s worker) only when checked and made from the run\'s current case', () => {
+    const schedule = services().get(library.projectId());
+    const result = schedule.sizing[schedule.runs[0]!.reference]!;
+    expect(services().storeSizing(library.projectId(), [result])).toBe(1);
+    expect(services().storeSizing(library.projectId(), [{ ...result, caseKey: 'an older case' }])).toBe(0);
+    expect(() => services().storeSizing(library.projectId(), [{ ...result, heatLoss: 'a lot' }])).toThrow('results[0] is not a sized run as the engine writes one: heatLoss is not a finite number.');
+    expect(() => services().storeSizing(library.projectId(), [{ ...result, basis: 'guessed' }])).toThrow(/basis is not chosen, fixed or none-meets/);
+    expect(services().get(library.projectId()).sizing[schedule.runs[0]!.reference]).toEqual(result);
+  });
+
   it('a cancelled sizing keeps the runs done so far and leaves the rest to size', () => {
     let done = 0;
     const outcome = services().size(library.projectId(), { all: true, onProgress: (p) => { done = p.done; }, cancelled: () => done >= 3 });
