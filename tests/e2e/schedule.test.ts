@@ -114,7 +114,7 @@ function allRows(column: string): Promise<{ reference: string; text: string }[]>
     box.scrollTop = 0;
     await frame();
     for (;;) {
-      for (const tr of box.querySelectorAll('tr[data-reference]')) {
+      for (const tr of Array.from(box.querySelectorAll('tr[data-reference]'))) {
         found.set(Number(tr.getAttribute('aria-rowindex')), { reference: tr.getAttribute('data-reference')!, text: tr.querySelector(`td[data-column="${id}"]`)!.textContent!.trim() });
       }
       if (box.scrollTop + box.clientHeight >= box.scrollHeight - 1) break;
