@@ -3,7 +3,8 @@
  * engine's figures for the stored case, the time from a keystroke in a box to the new figures, the solve time the editor shows, and whether
  * each drop-down's chosen label fits its box. Shared by the case-editor and demo-case tests.
  */
-import type { Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
+import { expect } from 'vitest';
 import { solveCase, type CaseReport } from '../../app/index.js';
 import { formatQuantity } from '../../app/report/format-quantity.js';
 import type { UnitSystem } from '../../app/base/unit-systems.js';
@@ -132,3 +133,24 @@ export function clippedChoices(page: Page, root: string, { everyChoice = true, s
 export function scrollsSideways(page: Page): Promise<boolean> {
   return page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth);
 }
+
+/**
+ * A new page on the projects list, with the project opened and its case in the editor (its key
+ * figures shown); `problems` collects the page's console errors and uncaught exceptions.
+ */
+export async function openCaseEditor(browser: Browser, url: string, projectName: string, caseId: number, viewport = { width: 1366, height: 800 }): Promise<{ page: Page; problems: string[] }> {
+  const problems: string[] = [];
+  const page = await browser.newPage({ viewport });
+  page.on('console', (m) => { if (m.type() === 'error') problems.push(m.text()); });
+  page.on('pageerror', (e) => problems.push(e.message));
+  await page.goto(url);
+  await page.locator('[data-testid="project-row"]').getByRole('button', { name: projectName, exact: true }).click();
+  await page.click(`#case-open-${caseId}`);
+  await page.locator('.case-editor .key-figures').waitFor().catch(async (error: unknown) => {
+    throw new Error(`The case did not show its figures: ${(await page.textContent('.case-editor'))?.slice(0, 300)}`, { cause: error });
+  });
+  return { page, problems };
+}
+
+/** Waits until the editor says the case is stored. */
+export const caseSaved = (page: Page) => expect.poll(async () => (await page.locator('[data-testid="case-save-status"]').textContent())?.trim(), { timeout: 10_000 }).toBe('Saved');

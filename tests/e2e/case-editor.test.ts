@@ -12,7 +12,7 @@ import type { Page } from 'playwright-core';
 import type { UnitSystem } from '../../app/base/unit-systems.js';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import { resultsFolder, useBrowserSession } from './browser-session.js';
-import { engineFigures as storedCaseFigures, keystrokeToFigures, median, shownFigures } from './case-editor-page.js';
+import { caseSaved, engineFigures as storedCaseFigures, keystrokeToFigures, median, openCaseEditor, shownFigures } from './case-editor-page.js';
 
 const session = useBrowserSession('lamina-case-editor-e2e-');
 let server: BrowserServer;
@@ -31,22 +31,9 @@ afterAll(async () => {
   await server?.close();
 });
 
-async function openCase(projectName: string, caseId: number, viewport = { width: 1366, height: 800 }): Promise<{ page: Page; problems: string[] }> {
-  const problems: string[] = [];
-  const page = await session.browser().newPage({ viewport });
-  page.on('console', (m) => { if (m.type() === 'error') problems.push(m.text()); });
-  page.on('pageerror', (e) => problems.push(e.message));
-  await page.goto(server.url);
-  await page.locator('[data-testid="project-row"]').getByRole('button', { name: projectName, exact: true }).click();
-  await page.click(`#case-open-${caseId}`);
-  await page.locator('.case-editor .key-figures').waitFor().catch(async (error: unknown) => {
-    await shot(page, 'case-editor-open-failed.png');
-    throw new Error(`The case did not show its figures: ${(await page.textContent('.case-editor'))?.slice(0, 300)}`, { cause: error });
-  });
-  return { page, problems };
-}
+const openCase = (projectName: string, caseId: number, viewport?: { width: number; height: number }) => openCaseEditor(session.browser(), server.url, projectName, caseId, viewport);
 
-const saved = (page: Page) => expect.poll(async () => (await page.locator('[data-testid="case-save-status"]').textContent())?.trim(), { timeout: 10_000 }).toBe('Saved');
+const saved = caseSaved;
 const shot = (page: Page, name: string) => page.screenshot({ path: path.join(resultsFolder, name), fullPage: false });
 
 async function typeInto(page: Page, selector: string, text: string): Promise<void> {

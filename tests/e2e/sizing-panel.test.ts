@@ -14,6 +14,7 @@ import { solveCase, type SolvedCase } from '../../app/index.js';
 import { caseContext } from '../../main/cases/case-context.js';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import { resultsFolder, useBrowserSession } from './browser-session.js';
+import { caseSaved, openCaseEditor } from './case-editor-page.js';
 
 const session = useBrowserSession('lamina-sizing-panel-e2e-');
 let server: BrowserServer;
@@ -51,19 +52,9 @@ function addHotPipe(projectName: string): { projectName: string; caseId: number 
   return { projectName: project.name, caseId: added.id };
 }
 
-async function openCase(projectName: string, caseId: number): Promise<{ page: Page; problems: string[] }> {
-  const problems: string[] = [];
-  const page = await session.browser().newPage({ viewport: { width: 1366, height: 800 } });
-  page.on('console', (m) => { if (m.type() === 'error') problems.push(m.text()); });
-  page.on('pageerror', (e) => problems.push(e.message));
-  await page.goto(server.url);
-  await page.locator('[data-testid="project-row"]').getByRole('button', { name: projectName, exact: true }).click();
-  await page.click(`#case-open-${caseId}`);
-  await page.locator('.case-editor .key-figures').waitFor();
-  return { page, problems };
-}
+const openCase = (projectName: string, caseId: number) => openCaseEditor(session.browser(), server.url, projectName, caseId);
 
-const saved = (page: Page) => expect.poll(async () => (await page.locator('[data-testid="case-save-status"]').textContent())?.trim(), { timeout: 10_000 }).toBe('Saved');
+const saved = caseSaved;
 const panel = (page: Page) => page.locator('#case-section-sizing');
 const shot = (page: Page, name: string) => panel(page).screenshot({ path: path.join(resultsFolder, name) });
 

@@ -16,7 +16,7 @@ import { solveCase } from '../../app/index.js';
 import { caseContext } from '../../main/cases/case-context.js';
 import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
 import { projectRoot, resultsFolder, useBrowserSession } from './browser-session.js';
-import { clippedChoices, engineFigures, shownFigures } from './case-editor-page.js';
+import { caseSaved, clippedChoices, engineFigures, openCaseEditor, shownFigures } from './case-editor-page.js';
 
 const session = useBrowserSession('lamina-wall-bridging-e2e-');
 let server: BrowserServer;
@@ -55,19 +55,9 @@ function addWall(projectName: string): { projectName: string; caseId: number } {
   return { projectName: project.name, caseId: added.id };
 }
 
-async function openCase(projectName: string, caseId: number): Promise<{ page: Page; problems: string[] }> {
-  const problems: string[] = [];
-  const page = await session.browser().newPage({ viewport: { width: 1366, height: 800 } });
-  page.on('console', (m) => { if (m.type() === 'error') problems.push(m.text()); });
-  page.on('pageerror', (e) => problems.push(e.message));
-  await page.goto(server.url);
-  await page.locator('[data-testid="project-row"]').getByRole('button', { name: projectName, exact: true }).click();
-  await page.click(`#case-open-${caseId}`);
-  await page.locator('.case-editor .key-figures').waitFor();
-  return { page, problems };
-}
+const openCase = (projectName: string, caseId: number) => openCaseEditor(session.browser(), server.url, projectName, caseId);
 
-const saved = (page: Page) => expect.poll(async () => (await page.locator('[data-testid="case-save-status"]').textContent())?.trim(), { timeout: 10_000 }).toBe('Saved');
+const saved = caseSaved;
 const layer = (page: Page, i: number) => page.locator(`[data-layer-index="${i}"]`);
 
 describe('a wall’s bridged layer and target U-value', () => {
