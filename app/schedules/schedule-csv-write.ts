@@ -4,7 +4,8 @@
  * fewest digits that read back to the very value stored, so an export re-imports as the same
  * schedule; fields holding a comma, quote or line break are quoted as spreadsheets expect.
  */
-import { toDisplay, type UnitSystem } from '../base/unit-systems.js';
+import { toDisplay, unitLabel, type UnitSystem } from '../base/unit-systems.js';
+import type { BillOfQuantities, EnergyTotals } from './bill-of-quantities.js';
 import { storedValue } from './schedule-csv-read.js';
 import type { QuantityName } from '../base/quantities.js';
 import { CRITERION_NAMES } from '../cases/sizing/sizing-words.js';
@@ -60,4 +61,26 @@ export function writeScheduleCsv(runs: readonly ScheduleRun[], system: UnitSyste
     lines.push(cells.map(csvField).join(','));
   }
   return `${lines.join('\r\n')}\r\n`;
+}
+
+/**
+ * The bill of quantities as CSV in the project's units: one row per material, thickness and pipe
+ * size, then a blank line and the heat and energy per service and for the job, insulated and bare
+ * (with cost and CO₂ when the project gives its economics).
+ */
+export function writeBillCsv(bill: BillOfQuantities, system: UnitSystem): string {
+  const shown = (v: number | null, q: QuantityName) => (v === null ? '' : String(Number(toDisplay(v, q, system).toPrecision(6))));
+  const head = (name: string, q: QuantityName) => `${name} [${unitLabel(q, system)}]`;
+  const lines: string[][] = [
+    ['material', head('thickness', 'thickness'), 'pipe series', 'pipe size', head('pipe outside diameter', 'diameter'), 'runs', head('length', 'length'), head('outer surface', 'area'), 'volume [m³]', 'valves', 'flanges', 'bends', head('fittings as pipe', 'length')],
+    ...bill.lines.map((l) => [l.material, shown(l.thickness, 'thickness'), l.pipeSeries, l.pipeSize, shown(l.pipeOuterDiameter, 'diameter'), String(l.runs), shown(l.length, 'length'), shown(l.outerArea, 'area'), String(Number(l.volume.toPrecision(6))), String(l.fittings.valves), String(l.fittings.flanges), String(l.fittings.bends), shown(l.fittingLength, 'length')]),
+    [],
+    ['service', 'runs', head('length', 'length'), head('heat flow', 'heatFlow'), head('heat flow bare', 'heatFlow'), head('energy', 'energyPerYear'), head('energy bare', 'energyPerYear'),
+      ...(bill.currency === null ? [] : [`cost [${bill.currency}/a]`, `cost bare [${bill.currency}/a]`, head('CO2', 'emissionsPerYear'), head('CO2 bare', 'emissionsPerYear')])],
+    ...[...bill.services.map((s) => ({ name: s.service, t: s as EnergyTotals })), { name: 'the job', t: bill.job }].map(({ name, t }) => [
+      name, String(t.runs), shown(t.length, 'length'), shown(t.heatLoss, 'heatFlow'), shown(t.bareHeatLoss, 'heatFlow'), shown(t.annualEnergy, 'energyPerYear'), shown(t.bareAnnualEnergy, 'energyPerYear'),
+      ...(bill.currency === null ? [] : [String(Number(t.annualCost!.toPrecision(6))), String(Number(t.bareAnnualCost!.toPrecision(6))), shown(t.annualEmissions, 'emissionsPerYear'), shown(t.bareAnnualEmissions, 'emissionsPerYear')]),
+    ]),
+  ];
+  return `${lines.map((cells) => cells.map(csvField).join(',')).join('\r\n')}\r\n`;
 }

@@ -12,7 +12,7 @@ import { InputError } from '../../app/base/input-error.js';
 import { billOfQuantities, parseFittingAllowances, type BillOfQuantities, type FittingAllowances } from '../../app/schedules/bill-of-quantities.js';
 import { importSchedule, runProblem, type ImportSummary } from '../../app/schedules/schedule-import.js';
 import type { ScheduleRun, ScheduleSettings } from '../../app/schedules/schedule-model.js';
-import { writeScheduleCsv } from '../../app/schedules/schedule-csv-write.js';
+import { writeBillCsv, writeScheduleCsv } from '../../app/schedules/schedule-csv-write.js';
 import { parseScheduleSettings } from '../../app/schedules/schedule-settings.js';
 import { runFromObject } from '../../app/schedules/run-object.js';
 import { sizedRunFromObject } from '../../app/schedules/sized-run-object.js';
@@ -201,6 +201,11 @@ export class SchedulesService {
     const schedule = this.get(projectId);
     const fresh = new Map(Object.entries(schedule.sizing).filter(([reference]) => !schedule.stale.includes(reference)));
     return writeScheduleCsv(schedule.runs, schedule.unitSystem, fresh.size > 0 ? fresh : undefined);
+  }
+
+  /** The bill of quantities as CSV in the project's units. */
+  billCsv(projectId: number): string {
+    return writeBillCsv(this.bill(projectId), this.projectRow(projectId).unit_system);
   }
 
   /** An empty schedule in the project's units, with the header only. */

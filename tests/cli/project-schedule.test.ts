@@ -63,6 +63,17 @@ describe('lamina projects schedule', () => {
     expect(again.stdout).toContain('0 added, 0 changed, 14 unchanged, 0 kept');
   });
 
+  it('writes the bill of quantities as CSV: its lengths add up to the schedule\'s', async () => {
+    const bill = await lamina('schedule', '1', 'bill', '-');
+    expect(bill.code).toBe(0);
+    const [header, ...rows] = bill.stdout.split('\r\n\r\n')[0]!.split('\r\n');
+    expect(header).toBe('material,thickness [mm],pipe series,pipe size,pipe outside diameter [mm],runs,length [m],outer surface [m²],volume [m³],valves,flanges,bends,fittings as pipe [m]');
+    const total = rows.reduce((t, r) => t + Number(r.split(',').at(-7)), 0);
+    const original = readScheduleCsv(readFileSync(example, 'utf8'));
+    expect(total).toBeCloseTo(original.ok ? original.runs.reduce((t, r) => t + r.length, 0) : NaN, 6);
+    expect(bill.stdout).toMatch(/\r\nthe job,14,/);
+  });
+
   it('a re-import of changed rows updates them by reference and says what changed', async () => {
     const lines = readFileSync(example, 'utf8').trim().split('\n');
     writeFileSync(file('changed.csv'), [lines[0], lines[1]!.replace(',42,80,', ',48,80,'), lines[2]].join('\n'));

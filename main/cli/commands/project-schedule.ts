@@ -3,6 +3,7 @@
  * lamina projects schedule ID size [--format json|text] [--all]
  * lamina projects schedule ID export FILE.csv|-   (the schedule with its results, in the project's units)
  * lamina projects schedule ID template FILE.csv|- (an empty schedule: the header in the project's units)
+ * lamina projects schedule ID bill FILE.csv|-     (the bill of quantities and the totals per service and for the job)
  * lamina projects schedule ID settings [FILE.json] (prints the condition sets, services and economics; with a file, sets them)
  *
  * The same checks and sentences as the app: the work is SchedulesService's and the engine's.
@@ -20,7 +21,7 @@ import { EXIT_BAD_INPUT, EXIT_DONE, EXIT_FAILED } from '../exit-code.js';
 import { withServices } from './materials.js';
 import type { Schedule } from '../../services/schedules-service.js';
 
-export const SCHEDULE_USAGE = 'usage: lamina projects schedule ID import FILE.csv | size [--format json|text] [--all] | export FILE.csv|- | template FILE.csv|- | settings [FILE.json] [--db PATH]';
+export const SCHEDULE_USAGE = 'usage: lamina projects schedule ID import FILE.csv | size [--format json|text] [--all] | export FILE.csv|- | template FILE.csv|- | bill FILE.csv|- | settings [FILE.json] [--db PATH]';
 
 export async function projectScheduleCommand(positional: readonly string[], options: ReadonlyMap<string, string>, flags: ReadonlySet<string>, io: CliIO): Promise<number> {
   const [id, action, file] = positional;
@@ -48,13 +49,15 @@ export async function projectScheduleCommand(positional: readonly string[], opti
       });
     case 'export':
     case 'template':
+    case 'bill':
       if (!file) return needsFile(io, action);
       return withServices(io, db, ({ schedules }) => {
-        const text = action === 'export' ? schedules.exportCsv(projectId) : schedules.template(projectId);
+        const text = action === 'export' ? schedules.exportCsv(projectId) : action === 'bill' ? schedules.billCsv(projectId) : schedules.template(projectId);
         if (file === '-') io.stdout(text);
         else {
           fs.writeFileSync(path.resolve(io.cwd, file), text);
-          io.stdout(`Wrote the schedule ${action === 'export' ? '' : 'template '}of project ${projectId} to ${file}.\n`);
+          const what = action === 'export' ? 'the schedule' : action === 'bill' ? 'the bill of quantities' : 'the schedule template';
+          io.stdout(`Wrote ${what} of project ${projectId} to ${file}.\n`);
         }
         return EXIT_DONE;
       });

@@ -29,7 +29,7 @@ function caseTitle(inputs: unknown): string | undefined {
  * Every form accepts --db PATH (else LAMINA_DB, else the per-system default).
  */
 const USAGE =
-  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | add-demo | solve ID [--format json|text] | report ID --out FILE.pdf|FILE.html [--paper A4|Letter] | schedule ID import FILE.csv|size|export FILE.csv|template FILE.csv|settings [FILE.json] [--db PATH]';
+  'usage: lamina projects list [--deleted] [--json] | create NAME [--client T] [--site T] [--reference T] [--engineer T] | export ID FILE | import FILE [--on-existing copy|replace] | add-case ID CASE.json [--name NAME] | add-demo | solve ID [--format json|text] | report ID --out FILE.pdf|FILE.html [--paper A4|Letter] | schedule ID import FILE.csv|size|export FILE.csv|template FILE.csv|bill FILE.csv|settings [FILE.json] [--db PATH]';
 
 const CREATE_FIELDS = ['client', 'site', 'reference', 'engineer'] as const;
 
