@@ -12,7 +12,7 @@ import { parseScheduleSettings } from '../../app/schedules/schedule-settings.js'
 import type { ScheduleRun } from '../../app/schedules/schedule-model.js';
 import {
   addConditionSet, addService, boxId, boxOfRefusal, draftOf, editConditionSet, editService, freshName, namesLeftBehind, readDraft, removeConditionSet,
-  removeService, shownPaths, switchCriterion, typeCriterion,
+  refusalInWords, removeService, shownPaths, switchCriterion, typeCriterion,
 } from '../../renderer/src/schedule/schedule-settings-form.js';
 
 const defaults = parseScheduleSettings(JSON.parse(fs.readFileSync(path.join(import.meta.dirname, '..', '..', 'data', 'schedules', 'schedule-defaults.json'), 'utf8')));
@@ -112,5 +112,16 @@ describe('the schedule settings form', () => {
     d = removeService(d, 0);
     expect(namesLeftBehind(d, runs)).toEqual({ locations: [['Plant room', 1], ['plant room', 1]], services: [['heating flow', 3]] });
     expect(namesLeftBehind(draftOf(defaults, 'SI'), runs)).toEqual({ locations: [], services: [] });
+  });
+});
+
+describe('a refusal of the Node side in the form\'s words', () => {
+  it('names entries by their place in the list and fields by their labels', () => {
+    // Sentences as parseScheduleSettings (app/schedules/schedule-settings.ts) writes them.
+    expect(refusalInWords("settings.conditionSets[4] repeats the name 'Plant room'; each needs its own.")).toBe("Condition set 5 repeats the name 'Plant room'; each needs its own.");
+    expect(refusalInWords('settings.services[0].service must not be empty.')).toBe('The name of service 1 must not be empty.');
+    expect(refusalInWords('settings.services[2].criteria.maxHeatLoss.limit must be at least 0.1 W/m (got 0).')).toBe('The most heat lost (or gained) per length of pipe of service 3 must be at least 0.1 W/m (got 0).');
+    expect(refusalInWords('settings.economics.currency must be text.')).toBe('The currency must be text.');
+    expect(refusalInWords('settings.conditionSets[0].colour is not a field.')).toBe('settings.conditionSets[0].colour is not a field.');
   });
 });

@@ -139,7 +139,7 @@ export function draftOf(settings: ScheduleSettings, system: UnitSystem): Setting
     otherCriteria: Object.fromEntries(Object.entries(r.criteria).filter(([c]) => !(SCHEDULE_CRITERIA as readonly string[]).includes(c))),
   }));
   const e = settings.economics;
-  const economics = boxesFrom(ECONOMICS_BOXES, e ?? undefined, system);
+  const economics = boxesFrom(ECONOMICS_BOXES, e === null ? undefined : { ...e }, system);
   return {
     conditionSets,
     services,
@@ -342,3 +342,47 @@ export function namesLeftBehind(draft: SettingsDraft, runs: readonly ScheduleRun
     services: count(runs.map((r) => r.service).filter((s) => !services.has(s.toLowerCase()))),
   };
 }
+
+/** Words for the settings' own fields, by the last segment of the path the Node side names. */
+const FIELD_WORDS: Readonly<Record<string, string>> = {
+  name: 'name', service: 'name', material: 'material', exposure: 'exposure', airTemperature: 'air temperature', relativeHumidity: 'relative humidity',
+  windSpeed: 'wind speed', criteria: 'criteria', currency: 'currency', operatingHours: 'hours in service per year',
+};
+
+function wordsFor(rest: string): string | undefined {
+  const criterion = /^criteria\.(\w+)(?:\.(\w+))?$/.exec(rest);
+  if (criterion && (SCHEDULE_CRITERIA as readonly string[]).includes(criterion[1]!)) {
+    const c = criterion[1] as ScheduleCriterion;
+    const box = criterion[2] === undefined ? undefined : criterionBoxes(c).find((b) => b.key === criterion[2]);
+    return box ? box.label.toLowerCase() : `${CRITERION_WORDS[c].label.toLowerCase()} criterion`;
+  }
+  return FIELD_WORDS[rest] ?? ECONOMICS_BOXES.find((b) => b.key === rest)?.label.toLowerCase();
+}
+
+/**
+ * A refusal of the Node side as a person at the form reads it: each settings path it names
+ * ("settings.conditionSets[4].name") in the form's words ("the name of condition set 5"), the
+ * sentence opening with a capital. A path the form has no words for is left as written.
+ */
+export function refusalInWords(message: string): string {
+  const worded = message.replace(/settings\.(conditionSets|services)\[(\d+)\](?:\.([\w.]+))?|settings\.(operatingHours|economics(?:\.\w+)?)/g, (whole, list?: string, index?: string, rest?: string, top?: string) => {
+    if (top !== undefined) {
+      const words = top === 'economics' ? 'the costs and CO₂' : wordsFor(top.replace(/^economics\./, ''));
+      return words === undefined ? whole : `the ${words}`;
+    }
+    const entry = `${list === 'services' ? 'service' : 'condition set'} ${Number(index) + 1}`;
+    if (rest === undefined) return entry;
+    const words = wordsFor(rest);
+    return words === undefined ? whole : `the ${words} of ${entry}`;
+  });
+  return worded === message ? message : worded.charAt(0).toUpperCase() + worded.slice(1);
+}
+
+/** What each criterion's switch says, in the schedule's terms. */
+export const CRITERION_WORDS: Readonly<Record<ScheduleCriterion, { readonly label: string; readonly hint: string }>> = {
+  maxSurfaceTemperature: { label: 'Safe to touch', hint: 'The outer surface no hotter than the limit (personnel protection).' },
+  noCondensation: { label: 'No condensation', hint: 'The outer surface warmer than the dew point of the surrounding air by the margin.' },
+  maxHeatLoss: { label: 'Heat loss within a limit', hint: 'Heat lost, or gained by a cold line, per length of pipe.' },
+  maxTemperatureDrop: { label: 'Fluid temperature kept along the run', hint: 'The fluid cools (or warms) by no more than the limit over the run, at its mass flow.' },
+  freezeProtection: { label: 'Standing water slow to freeze', hint: 'With the flow stopped in cold air, the water takes at least the given time to reach 0 °C.' },
+};
