@@ -40,11 +40,10 @@ export class SchedulePage {
   private storing: Promise<void> = Promise.resolve();
   private resizeAfter = false;
 
-  constructor(readonly projectId: number) {}
+  /** `units`: the project's units as its editor holds them now (each run's reason reads in them). */
+  constructor(readonly projectId: number, private readonly units: () => UnitSystem) {}
 
-  get unitSystem(): UnitSystem {
-    return this.schedule?.unitSystem ?? 'SI';
-  }
+
 
   /** The grid's rows: each run (as typed, where refused) with its sizing. */
   rows(): GridRow[] {
@@ -177,7 +176,7 @@ export class SchedulePage {
       });
     };
     this.sizer.size(
-      { runs, settings: s.settings, materialIds: s.materialIds, materials: library.materials.map((m) => [m.id, m] as const), pipeSizes: library.pipeSizes, unitSystem: s.unitSystem },
+      { runs, settings: s.settings, materialIds: s.materialIds, materials: library.materials.map((m) => [m.id, m] as const), pipeSizes: library.pipeSizes, unitSystem: this.units() },
       {
         onProgress: (done, total, results) => {
           if (this.progress) this.progress = { ...this.progress, done, total };
