@@ -335,6 +335,25 @@ describe('the pipe schedule in the app', () => {
     await expect.poll(() => schedule().stale.length, { timeout: 20_000 }).toBe(0);
   }, 200_000);
 
+  it('shows and takes values in US units once the project is switched, SI inside (1 ft = 0.3048 m exactly)', async () => {
+    await page.selectOption('#project-unitSystem', 'IP');
+    await expect.poll(() => page.locator('th[data-column="length"] .unit').textContent()).toBe('ft');
+    expect(await page.locator('th[data-column="fluidTemperature"] .unit').textContent()).toBe('°F');
+    // KY-0001: 3 m is 9.84252 ft (to six figures), 70 °C is 158 °F.
+    expect((await cell('KY-0001', 'length').textContent())?.trim()).toBe('9.84252');
+    expect((await cell('KY-0001', 'fluidTemperature').textContent())?.trim()).toBe('158');
+    await cell('KY-0001', 'length').click();
+    await page.keyboard.press('Enter');
+    await cell('KY-0001', 'length').locator('input').fill('10');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => schedule().runs.find((r) => r.reference === 'KY-0001')!.length).toBeCloseTo(3.048, 9);
+    await expect.poll(() => schedule().stale.length, { timeout: 20_000 }).toBe(0);
+    await shot('schedule-us-units-1366x800.png');
+    await page.selectOption('#project-unitSystem', 'SI');
+    await expect.poll(() => page.locator('th[data-column="length"] .unit').textContent()).toBe('m');
+    await expect.poll(() => services().projects.open(projectId).unitSystem, { timeout: 10_000 }).toBe('SI');
+  });
+
   it('exports the schedule, and the file imports again to the same runs', async () => {
     const [download] = await Promise.all([page.waitForEvent('download'), page.click('#schedule-export')]);
     const file = path.join(session.tempFolder(), download.suggestedFilename());
