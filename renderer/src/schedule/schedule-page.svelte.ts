@@ -24,6 +24,8 @@ export interface RowRefusal {
 
 /** Results stored per request while sizing (a cancel keeps every chunk already stored). */
 const STORE_CHUNK = 25;
+/** The grid and the bar take the worker's news at most this often (ms), so typing meanwhile stays quick. */
+const SHOW_EVERY = 150;
 
 export class SchedulePage {
   schedule = $state.raw<OpenedSchedule | undefined>(undefined);
@@ -163,6 +165,16 @@ export class SchedulePage {
     this.notice = undefined;
     let buffer: KeyedSizedRun[] = [];
     let stored = 0;
+    // The worker's news, shown together on a timer rather than message by message.
+    let unshown: KeyedSizedRun[] = [];
+    let latest = { done: 0, total: runs.length };
+    let showTimer: ReturnType<typeof setTimeout> | undefined;
+    const show = () => {
+      showTimer = undefined;
+      if (this.progress) this.progress = { ...this.progress, ...latest };
+      if (unshown.length > 0) this.takeResults(unshown);
+      unshown = [];
+    };
     const flush = () => {
       const chunk = buffer;
       buffer = [];
@@ -179,13 +191,16 @@ export class SchedulePage {
       { runs, settings: s.settings, materialIds: s.materialIds, materials: library.materials.map((m) => [m.id, m] as const), pipeSizes: library.pipeSizes, unitSystem: this.units() },
       {
         onProgress: (done, total, results) => {
-          if (this.progress) this.progress = { ...this.progress, done, total };
+          latest = { done, total };
+          unshown.push(...results);
+          showTimer ??= setTimeout(show, SHOW_EVERY);
           if (results.length === 0) return;
-          this.takeResults(results);
           buffer.push(...results);
           if (buffer.length >= STORE_CHUNK) flush();
         },
         onFinished: (complete) => {
+          clearTimeout(showTimer);
+          show();
           flush();
           void this.storing.then(async () => {
             const total = this.progress?.total ?? runs.length;
@@ -199,6 +214,8 @@ export class SchedulePage {
           });
         },
         onFailure: (message) => {
+          clearTimeout(showTimer);
+          show();
           flush();
           void this.storing.then(() => {
             this.progress = undefined;
