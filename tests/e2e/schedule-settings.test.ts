@@ -1,0 +1,116 @@
+/**
+ * The schedule's conditions and services edited in real Chromium, on the browser-mode server with
+ * a real SQLite library in a temporary folder: the shipped example schedule is imported and sized,
+ * the 'heating flow' touch limit lowered to 45 °C and a condition set added in the page's form,
+ * saved, and checked where it is stored (the settings the command line prints); the heating-flow
+ * runs, and only they, then show as waiting to be sized again. A humidity of 150 % is refused
+ * beside its box with the text kept, and a repeated name is refused by the Node side beside the
+ * name's box. Screenshots at 1366×800 go to test-results/. The scenario of the example schedule is
+ * invented; the touch limit of 45 °C is a choice of this test, not a requirement.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { startBrowserServer, type BrowserServer } from '../../main/server/browser-server.js';
+import { projectRoot, resultsFolder, useBrowserSession } from './browser-session.js';
+
+const session = useBrowserSession('lamina-schedule-settings-e2e-');
+let server: BrowserServer;
+let page: Page;
+let projectId: number;
+const problems: string[] = [];
+const services = () => server.library.library();
+const settings = () => services().schedules.settingsOf(projectId);
+const shot = (name: string) => page.screenshot({ path: path.join(resultsFolder, name), fullPage: false });
+const scrollTo = (selector: string) => page.locator(selector).evaluate((el) => el.scrollIntoView({ block: 'start' }));
+const refusalBeside = (id: string) => page.locator(`#${id}-error`);
+/** The references of the grid's rows marked as waiting to be sized. */
+const staleRows = () => page.locator('tr.run-row.stale').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-reference')).sort());
+const heatingFlow = () => services().schedules.get(projectId).runs.filter((r) => r.service === 'heating flow').map((r) => r.reference).sort();
+
+beforeAll(async () => {
+  server = await startBrowserServer({ port: 0, databasePath: path.join(session.tempFolder(), 'lamina.sqlite'), dailyBackups: false });
+  projectId = services().projects.create({ name: 'Orchard Vale clinic' }).id;
+  const imported = services().schedules.importCsv(projectId, fs.readFileSync(path.join(projectRoot, 'data', 'schedules', 'example-schedule.csv'), 'utf8'));
+  expect(imported.ok).toBe(true);
+  page = await session.browser().newPage({ viewport: { width: 1366, height: 800 } });
+  // A refused save is logged by the browser as a failed request (status 400); anything else is a problem.
+  page.on('console', (m) => { if (m.type() === 'error' && !/status of 400/.test(m.text())) problems.push(m.text()); });
+  page.on('pageerror', (e) => problems.push(e.message));
+  await page.goto(server.url);
+  await page.locator('[data-testid="project-row"]').getByRole('button', { name: 'Orchard Vale clinic', exact: true }).click();
+  await page.click('#project-schedule');
+  await page.locator('[data-testid="schedule-grid"]').waitFor();
+});
+afterAll(async () => {
+  await page?.close();
+  await server?.close();
+});
+
+describe('the schedule settings in the app', () => {
+  it('sizes the imported example schedule, so that no run waits', async () => {
+    await page.click('#schedule-size');
+    await expect.poll(() => page.locator('[data-testid="schedule-notice"]').textContent(), { timeout: 120_000 }).toMatch(/^Sized \d+ runs?\.$/);
+    expect(services().schedules.get(projectId).stale).toEqual([]);
+    expect(await staleRows()).toEqual([]);
+  });
+
+  it('lowers the heating-flow touch limit to 45 °C and adds a condition set; the heating-flow runs then wait to be sized again', async () => {
+    await page.click('[data-testid="schedule-settings"] > summary');
+    const index = settings().services.findIndex((s) => s.service === 'heating flow');
+    expect(index).toBeGreaterThanOrEqual(0);
+    await scrollTo('[data-testid="schedule-settings"]');
+    await shot('schedule-settings-open-1366x800.png');
+
+    await page.fill(`#schedule-settings-services-${index}-criteria-maxSurfaceTemperature-limit`, '45');
+    await page.click('#schedule-settings-add-set');
+    const added = settings().conditionSets.length; // the new set's place in the list
+    await page.fill(`#schedule-settings-conditionSets-${added}-name`, 'Loading bay');
+    await page.selectOption(`#schedule-settings-conditionSets-${added}-exposure`, 'outdoor');
+    await page.fill(`#schedule-settings-conditionSets-${added}-airTemperature`, '2');
+    await page.fill(`#schedule-settings-conditionSets-${added}-relativeHumidity`, '90');
+    await page.fill(`#schedule-settings-conditionSets-${added}-windSpeed`, '4');
+    await page.click('#schedule-settings-save');
+    await page.locator('[data-testid="schedule-settings-saved"]').waitFor();
+
+    const stored = settings();
+    expect(stored.services[index]!.criteria).toEqual({ maxSurfaceTemperature: { limit: 45 } });
+    expect(stored.conditionSets.at(-1)).toEqual({ name: 'Loading bay', airTemperature: 2, relativeHumidity: 0.9, exposure: 'outdoor', windSpeed: 4 });
+    // Only the heating-flow runs' criteria changed, so they alone wait; the grid shows them so.
+    expect(services().schedules.get(projectId).stale.sort()).toEqual(heatingFlow());
+    await expect.poll(staleRows).toEqual(heatingFlow());
+    const waiting = heatingFlow().length;
+    expect(await page.locator('[data-testid="schedule-settings-saved"]').textContent()).toContain(`${waiting} runs wait to be sized again`);
+    expect(await page.locator('#schedule-size').textContent()).toContain(`Size ${waiting} unsized runs`);
+    await scrollTo('#schedule-settings-save');
+    await shot('schedule-settings-saved-1366x800.png');
+  });
+
+  it('refuses a humidity of 150 % beside its box and keeps what was typed; nothing is stored', async () => {
+    const before = settings();
+    await page.fill('#schedule-settings-conditionSets-0-relativeHumidity', '150');
+    await page.click('#schedule-settings-save');
+    await expect.poll(() => refusalBeside('schedule-settings-conditionSets-0-relativeHumidity').textContent()).toBe('Relative humidity may not be 150 %: allowed above 0 to 100 %.');
+    expect(await page.inputValue('#schedule-settings-conditionSets-0-relativeHumidity')).toBe('150');
+    expect(await page.locator('[data-testid="schedule-settings-refusal"]').textContent()).toContain('Nothing was saved');
+    expect(settings()).toEqual(before);
+    await page.locator('#schedule-settings-conditionSets-0-relativeHumidity').evaluate((el) => el.scrollIntoView({ block: 'center' }));
+    await shot('schedule-settings-refused-humidity-1366x800.png');
+    await page.fill('#schedule-settings-conditionSets-0-relativeHumidity', '50');
+  });
+
+  it('shows the Node side\'s refusal of a repeated name beside the name box', async () => {
+    const before = settings();
+    const last = before.conditionSets.length - 1;
+    await page.fill(`#schedule-settings-conditionSets-${last}-name`, 'plant room');
+    await page.click('#schedule-settings-save');
+    // The sentence of parseScheduleSettings, in the form's words (app/schedules/schedule-settings.ts).
+    await expect.poll(() => refusalBeside(`schedule-settings-conditionSets-${last}-name`).textContent()).toBe(`Condition set ${last + 1} repeats the name 'plant room'; each needs its own.`);
+    expect(await page.inputValue(`#schedule-settings-conditionSets-${last}-name`)).toBe('plant room');
+    expect(settings()).toEqual(before);
+    await page.locator(`#schedule-settings-conditionSets-${last}-name`).evaluate((el) => el.scrollIntoView({ block: 'center' }));
+    await shot('schedule-settings-refused-name-1366x800.png');
+    expect(problems).toEqual([]);
+  });
+});
