@@ -368,4 +368,18 @@ describe('the pipe schedule in the app', () => {
     expect(problems).toEqual([]);
     expect(refusedCalls).toEqual(['400 /api/schedules-update-run']);
   });
+
+  it('removes the selected runs after asking, and keeps the others', async () => {
+    await showOnly('KY-019');
+    await cell('KY-0190', 'reference').click();
+    await page.keyboard.press('Shift+ArrowDown');
+    await page.click('#schedule-remove-rows');
+    const question = page.locator('[data-testid="schedule-remove-question"]');
+    expect(await question.textContent()).toContain('KY-0190, KY-0191');
+    await page.click('#schedule-remove-confirm');
+    await expect.poll(() => schedule().runs.length).toBe(198);
+    expect(schedule().runs.some((r) => r.reference === 'KY-0190' || r.reference === 'KY-0191')).toBe(false);
+    await expect.poll(() => page.locator('[data-testid="schedule-row-count"]').textContent()).toBe('8 of 198 runs');
+    await showOnly('');
+  });
 });

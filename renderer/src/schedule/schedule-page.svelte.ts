@@ -141,6 +141,21 @@ export class SchedulePage {
     }
   }
 
+  async removeRuns(references: readonly string[]): Promise<void> {
+    if (this.progress) return this.refuse('Wait for the sizing to finish (or cancel it) before removing runs.');
+    try {
+      const { removed } = await laminaApi().schedules.removeRuns({ projectId: this.projectId, references });
+      for (const reference of references) {
+        this.drafts = without(this.drafts, reference);
+        this.refusals = without(this.refusals, reference);
+      }
+      this.done(`Removed ${removed} ${removed === 1 ? 'run' : 'runs'} from the schedule.`);
+      await this.open();
+    } catch (error) {
+      this.refuse(`Nothing was removed: ${messageOf(error)}`);
+    }
+  }
+
   /** Sizes every stale run in the worker, storing results as they come. */
   async sizeStale(): Promise<void> {
     if (this.progress) {
