@@ -62,6 +62,12 @@ describe('the schedule settings in the app', () => {
     expect(index).toBeGreaterThanOrEqual(0);
     await scrollTo('[data-testid="schedule-settings"]');
     await shot('schedule-settings-open-1366x800.png');
+    await scrollTo('#schedule-settings-services-0-service');
+    await shot('schedule-settings-services-1366x800.png');
+    await page.check(`#schedule-settings-services-${index}-criteria-freezeProtection`);
+    await scrollTo(`#schedule-settings-services-${index}-criteria-freezeProtection`);
+    await shot('schedule-settings-freezing-1366x800.png');
+    await page.uncheck(`#schedule-settings-services-${index}-criteria-freezeProtection`);
 
     await page.fill(`#schedule-settings-services-${index}-criteria-maxSurfaceTemperature-limit`, '45');
     await page.click('#schedule-settings-add-set');
@@ -78,7 +84,7 @@ describe('the schedule settings in the app', () => {
     expect(stored.services[index]!.criteria).toEqual({ maxSurfaceTemperature: { limit: 45 } });
     expect(stored.conditionSets.at(-1)).toEqual({ name: 'Loading bay', airTemperature: 2, relativeHumidity: 0.9, exposure: 'outdoor', windSpeed: 4 });
     // Only the heating-flow runs' criteria changed, so they alone wait; the grid shows them so.
-    expect(services().schedules.get(projectId).stale.sort()).toEqual(heatingFlow());
+    expect([...services().schedules.get(projectId).stale].sort()).toEqual(heatingFlow());
     await expect.poll(staleRows).toEqual(heatingFlow());
     const waiting = heatingFlow().length;
     expect(await page.locator('[data-testid="schedule-settings-saved"]').textContent()).toContain(`${waiting} runs wait to be sized again`);

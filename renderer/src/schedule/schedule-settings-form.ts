@@ -13,7 +13,8 @@ import { unitLabel, type UnitSystem } from '../../../app/base/unit-systems.js';
 import { INPUT_LIMITS } from '../../../app/cases/insulated/insulated-inputs.js';
 import type { ConditionSet, ScheduleEconomics, ScheduleRun, ScheduleSettings, ServiceRule } from '../../../app/schedules/schedule-model.js';
 import type { NumberField } from '../case-editor/case-form-fields.js';
-import { boxText, rangeHint, storedValueFor } from '../case-editor/field-text.js';
+import { DEFAULT_TOUCH_LIMIT } from '../../../app/checks/personnel-protection.js';
+import { boxText, hintValue, rangeHint, storedValueFor } from '../case-editor/field-text.js';
 import { criterionFields } from '../case-editor/sizing-fields.js';
 
 /** The criteria a service may size to: a case's, less the economic thickness (a schedule sizes to physical criteria). */
@@ -31,6 +32,8 @@ export interface SettingsBox {
   readonly initial: number;
   /** May be left empty (the criterion then takes the engine's own value). */
   readonly optional: boolean;
+  /** What an empty box means, in the project's units ("60 °C, the usual touch limit"). */
+  readonly emptyMeans?: (system: UnitSystem) => string;
 }
 
 const [tMin, tMax] = INPUT_LIMITS.airTemperature;
@@ -59,7 +62,14 @@ export const MAX_NAME = 80;
 export function criterionBoxes(criterion: ScheduleCriterion): readonly SettingsBox[] {
   return criterionFields(criterion, 'pipe')
     .filter((f): f is NumberField => f.type === 'number')
-    .map((f) => ({ key: f.path.slice(f.path.lastIndexOf('.') + 1), label: f.label, quantity: f.quantity, range: f.range, initial: f.initial, optional: f.whenEmpty !== undefined }));
+    .map((f) => {
+      const key = f.path.slice(f.path.lastIndexOf('.') + 1);
+      // A run's case has no touch limit of its own, so an empty limit is the engine's default one.
+      const emptyMeans = f.whenEmpty === undefined ? undefined
+        : criterion === 'maxSurfaceTemperature' ? (system: UnitSystem) => `${hintValue(DEFAULT_TOUCH_LIMIT, 'temperature', system)}, the engine's usual touch limit`
+        : (system: UnitSystem) => f.whenEmpty!({}, { pipeSizes: [], unitSystem: system });
+      return { key, label: f.label, quantity: f.quantity, range: f.range, initial: f.initial, optional: emptyMeans !== undefined, ...(emptyMeans ? { emptyMeans } : {}) };
+    });
 }
 
 export interface ConditionSetDraft {
