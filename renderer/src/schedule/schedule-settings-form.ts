@@ -66,7 +66,7 @@ export function criterionBoxes(criterion: ScheduleCriterion): readonly SettingsB
       const key = f.path.slice(f.path.lastIndexOf('.') + 1);
       // A run's case has no touch limit of its own, so an empty limit is the engine's default one.
       const emptyMeans = f.whenEmpty === undefined ? undefined
-        : criterion === 'maxSurfaceTemperature' ? (system: UnitSystem) => `${hintValue(DEFAULT_TOUCH_LIMIT, 'temperature', system)}, the engine's usual touch limit`
+        : criterion === 'maxSurfaceTemperature' ? (system: UnitSystem) => `${hintValue(DEFAULT_TOUCH_LIMIT, 'temperature', system)}, Lamina's usual touch limit`
         : (system: UnitSystem) => f.whenEmpty!({}, { pipeSizes: [], unitSystem: system });
       return { key, label: f.label, quantity: f.quantity, range: f.range, initial: f.initial, optional: emptyMeans !== undefined, ...(emptyMeans ? { emptyMeans } : {}) };
     });
