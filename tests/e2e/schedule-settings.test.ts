@@ -79,6 +79,8 @@ describe('the schedule settings in the app', () => {
     await page.fill(`#schedule-settings-conditionSets-${added}-windSpeed`, '4');
     await page.click('#schedule-settings-save');
     await page.locator('[data-testid="schedule-settings-saved"]').waitFor();
+    // The sizing's earlier notice ("Sized 14 runs.") no longer stands beside runs that now wait.
+    expect(await page.locator('[data-testid="schedule-notice"]').count()).toBe(0);
 
     const stored = settings();
     expect(stored.services[index]!.criteria).toEqual({ maxSurfaceTemperature: { limit: 45 } });
@@ -99,7 +101,7 @@ describe('the schedule settings in the app', () => {
     await page.click('#schedule-settings-save');
     await expect.poll(() => refusalBeside('schedule-settings-conditionSets-0-relativeHumidity').textContent()).toBe('Relative humidity may not be 150 %: allowed above 0 to 100 %.');
     expect(await page.inputValue('#schedule-settings-conditionSets-0-relativeHumidity')).toBe('150');
-    expect(await page.locator('[data-testid="schedule-settings-refusal"]').textContent()).toContain('Nothing was saved');
+    expect(await page.locator('[data-testid="schedule-settings-refusal"]').textContent()).toBe('Nothing was saved: correct the box marked above.');
     expect(settings()).toEqual(before);
     await page.locator('#schedule-settings-conditionSets-0-relativeHumidity').evaluate((el) => el.scrollIntoView({ block: 'center' }));
     await shot('schedule-settings-refused-humidity-1366x800.png');
