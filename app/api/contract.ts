@@ -120,6 +120,8 @@ export interface ApiChannels {
   'schedules:store-sizing': { readonly request: { readonly projectId: number; readonly results: readonly KeyedSizedRun[] }; readonly response: { readonly stored: number } };
   /** The schedule with the results of its up-to-date sizings, as CSV in the project's units. */
   'schedules:export': { readonly request: { readonly projectId: number }; readonly response: { readonly fileName: string; readonly text: string } };
+  /** The bill of quantities as CSV, in the project's units. */
+  'schedules:export-bill': { readonly request: { readonly projectId: number }; readonly response: { readonly fileName: string; readonly text: string } };
   /** An empty schedule (header only) in the project's units. */
   'schedules:template': { readonly request: { readonly projectId: number }; readonly response: { readonly fileName: string; readonly text: string } };
   'schedules:set-settings': { readonly request: { readonly projectId: number; readonly settings: ScheduleSettings }; readonly response: ScheduleSettings };
@@ -199,6 +201,7 @@ export interface LaminaApi {
     removeRuns: ApiCall<'schedules:remove-runs'>;
     storeSizing: ApiCall<'schedules:store-sizing'>;
     exportCsv: ApiCall<'schedules:export'>;
+    exportBill: ApiCall<'schedules:export-bill'>;
     template: ApiCall<'schedules:template'>;
     setSettings: ApiCall<'schedules:set-settings'>;
   };

@@ -64,6 +64,7 @@ const api: LaminaApi = {
     removeRuns: (request) => invoke('schedules:remove-runs', request),
     storeSizing: (request) => invoke('schedules:store-sizing', request),
     exportCsv: (request) => invoke('schedules:export', request),
+    exportBill: (request) => invoke('schedules:export-bill', request),
     template: (request) => invoke('schedules:template', request),
     setSettings: (request) => invoke('schedules:set-settings', request),
   },

@@ -37,7 +37,7 @@ export const API_CHANNELS = [
   'projects:update-case', 'projects:remove-case', 'projects:move-case', 'projects:export-file', 'projects:import-file', 'projects:add-demo',
   'projects:report', 'projects:save-report-pdf',
   'schedules:open', 'schedules:import', 'schedules:update-run', 'schedules:remove-runs', 'schedules:store-sizing',
-  'schedules:export', 'schedules:template', 'schedules:set-settings',
+  'schedules:export', 'schedules:export-bill', 'schedules:template', 'schedules:set-settings',
   'settings:letterhead', 'settings:save-letterhead',
   'backups:list', 'backups:create', 'backups:restore',
 ] as const satisfies readonly ApiChannel[];
@@ -260,6 +260,11 @@ export function createOperations(context: OperationContext): OperationHandlers {
       const projectId = requireId(fields('schedules:export', request, ['projectId'])['projectId'], 'projectId');
       const project = lib().projects.open(projectId);
       return { fileName: scheduleFileName(project.name, 'schedule'), text: lib().schedules.exportCsv(projectId) };
+    },
+    'schedules:export-bill': async (request) => {
+      const projectId = requireId(fields('schedules:export-bill', request, ['projectId'])['projectId'], 'projectId');
+      const project = lib().projects.open(projectId);
+      return { fileName: scheduleFileName(project.name, 'bill-of-quantities'), text: lib().schedules.billCsv(projectId) };
     },
     'schedules:template': async (request) => {
       const projectId = requireId(fields('schedules:template', request, ['projectId'])['projectId'], 'projectId');

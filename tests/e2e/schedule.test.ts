@@ -369,6 +369,29 @@ describe('the pipe schedule in the app', () => {
     expect(refusedCalls).toEqual(['400 /api/schedules-update-run']);
   });
 
+  it('puts the schedule and the bill of quantities into the printed report', async () => {
+    await page.click('#schedule-close');
+    await page.click('#project-report');
+    const report = page.locator('[data-testid="report-preview"] .lamina-report');
+    await report.waitFor();
+    const runsSection = report.locator('.section-schedule-runs');
+    await expect.poll(() => runsSection.locator('tbody tr').count()).toBe(schedule().runs.length);
+    // Every run's reference, in the schedule's order, and the bill's job total as the service adds it up.
+    const references = await runsSection.locator('tbody tr td:first-child').allTextContents();
+    expect(references.map((r) => r.trim())).toEqual(schedule().runs.map((r) => r.reference));
+    const bill = report.locator('.section-schedule-bill');
+    expect(await bill.locator('h2').textContent()).toBe('Bill of quantities');
+    const lines = services().schedules.bill(projectId).lines.length;
+    expect(await bill.locator('table').first().locator('tbody tr').count()).toBe(lines);
+    expect(await bill.textContent()).toContain('The job');
+    expect(await report.textContent()).not.toMatch(/NaN|undefined|Infinity/);
+    await bill.scrollIntoViewIfNeeded();
+    await page.screenshot({ path: path.join(resultsFolder, 'schedule-in-report-1366x800.png') });
+    await page.click('#report-close');
+    await page.click('#project-schedule');
+    await page.locator('[data-testid="schedule-grid"]').waitFor();
+  });
+
   it('removes the selected runs after asking, and keeps the others', async () => {
     await showOnly('KY-019');
     await cell('KY-0190', 'reference').click();

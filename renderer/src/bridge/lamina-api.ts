@@ -87,6 +87,7 @@ const httpApi: LaminaApi = {
     removeRuns: call('schedules:remove-runs'),
     storeSizing: call('schedules:store-sizing'),
     exportCsv: call('schedules:export'),
+    exportBill: call('schedules:export-bill'),
     template: call('schedules:template'),
     setSettings: call('schedules:set-settings'),
   },
