@@ -68,6 +68,10 @@ describe('the schedule settings in the app', () => {
     await scrollTo(`#schedule-settings-services-${index}-criteria-freezeProtection`);
     await shot('schedule-settings-freezing-1366x800.png');
     await page.uncheck(`#schedule-settings-services-${index}-criteria-freezeProtection`);
+    await page.check('#schedule-settings-economics');
+    await page.locator('#schedule-settings-economics').evaluate((el) => el.scrollIntoView({ block: 'center' }));
+    await shot('schedule-settings-economics-1366x800.png');
+    await page.uncheck('#schedule-settings-economics');
 
     await page.fill(`#schedule-settings-services-${index}-criteria-maxSurfaceTemperature-limit`, '45');
     await page.click('#schedule-settings-add-set');
@@ -91,7 +95,7 @@ describe('the schedule settings in the app', () => {
     const waiting = heatingFlow().length;
     expect(await page.locator('[data-testid="schedule-settings-saved"]').textContent()).toContain(`${waiting} runs wait to be sized again`);
     expect(await page.locator('#schedule-size').textContent()).toContain(`Size ${waiting} unsized runs`);
-    await scrollTo('#schedule-settings-save');
+    await page.locator('#schedule-settings-add-service').evaluate((el) => el.scrollIntoView({ block: 'center' }));
     await shot('schedule-settings-saved-1366x800.png');
   });
 

@@ -81,7 +81,7 @@ describe('the schedule settings form', () => {
     expect(Object.fromEntries(r.errors)).toEqual({
       'conditionSets[1].relativeHumidity': 'Relative humidity may not be 150 %: allowed above 0 to 100 %.',
       'conditionSets[2].airTemperature': 'Air temperature must be a number in °C.',
-      'operatingHours': 'Hours in service per year may not be 9000 h: allowed 0 to 8784 h.',
+      'operatingHours': 'Operating hours per year may not be 9000 h: allowed 0 to 8784 h.',
     });
     expect(d.conditionSets[1]!.texts['relativeHumidity']).toBe('150');
   });

@@ -47,7 +47,7 @@ export const CONDITION_BOXES: readonly SettingsBox[] = [
 /** Outdoors only: a set indoors is in still air. */
 export const WIND_BOX: SettingsBox = { key: 'windSpeed', label: 'Wind speed', quantity: 'windSpeed', range: { min: wMin, max: wMax, unit: 'm/s', quantity: 'windSpeed' }, initial: 3, optional: false };
 
-export const HOURS_BOX: SettingsBox = { key: 'operatingHours', label: 'Hours in service per year', quantity: 'hours', range: { min: hMin, max: hMax, unit: 'h' }, initial: 8760, optional: false };
+export const HOURS_BOX: SettingsBox = { key: 'operatingHours', label: 'Operating hours per year', quantity: 'hours', range: { min: hMin, max: hMax, unit: 'h' }, initial: 8760, optional: false };
 
 /** Starting values of the economics are placeholders (common practice, no source): the job's own figures replace them. */
 export const ECONOMICS_BOXES: readonly SettingsBox[] = [
@@ -356,7 +356,7 @@ export function namesLeftBehind(draft: SettingsDraft, runs: readonly ScheduleRun
 /** Words for the settings' own fields, by the last segment of the path the Node side names. */
 const FIELD_WORDS: Readonly<Record<string, string>> = {
   name: 'name', service: 'name', material: 'material', exposure: 'exposure', airTemperature: 'air temperature', relativeHumidity: 'relative humidity',
-  windSpeed: 'wind speed', criteria: 'criteria', currency: 'currency', operatingHours: 'hours in service per year',
+  windSpeed: 'wind speed', criteria: 'criteria', currency: 'currency', operatingHours: 'operating hours per year',
 };
 
 function wordsFor(rest: string): string | undefined {
