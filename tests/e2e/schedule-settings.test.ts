@@ -112,6 +112,18 @@ describe('the schedule settings in the app', () => {
     await page.fill('#schedule-settings-conditionSets-0-relativeHumidity', '50');
   });
 
+  it('warns, before a save, of the runs a renamed condition set leaves behind, and Discard brings the stored settings back', async () => {
+    await page.fill('#schedule-settings-conditionSets-0-name', 'Boiler house');
+    const warning = page.locator('[data-testid="schedule-settings-left-behind"]');
+    const plantRoom = services().schedules.get(projectId).runs.filter((r) => r.location === 'Plant room').length;
+    await expect.poll(() => warning.locator('p').first().textContent()).toBe(`${plantRoom} runs name the condition set 'Plant room', which this list no longer has.`);
+    await warning.evaluate((el) => el.scrollIntoView({ block: 'center' }));
+    await shot('schedule-settings-left-behind-1366x800.png');
+    await page.click('#schedule-settings-discard');
+    expect(await page.inputValue('#schedule-settings-conditionSets-0-name')).toBe('Plant room');
+    expect(await warning.count()).toBe(0);
+  });
+
   it('shows the Node side\'s refusal of a repeated name beside the name box', async () => {
     const before = settings();
     const last = before.conditionSets.length - 1;

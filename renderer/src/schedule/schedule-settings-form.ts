@@ -53,7 +53,7 @@ export const HOURS_BOX: SettingsBox = { key: 'operatingHours', label: 'Operating
 export const ECONOMICS_BOXES: readonly SettingsBox[] = [
   { key: 'energyPrice', label: 'Energy price per kWh bought (fuel or electricity)', quantity: 'pricePerEnergy', range: { min: 0, max: 100, unit: 'per kWh' }, initial: 0.1, optional: false },
   { key: 'generationEfficiency', label: 'Efficiency of heat generation (or COP of cooling)', quantity: 'factor', range: { min: 0.05, max: 10, unit: '' }, initial: 0.9, optional: false },
-  { key: 'emissionFactor', label: 'CO₂ per kWh of fuel or electricity', quantity: 'emissionFactor', range: { min: 0, max: 5, unit: 'kg/kWh', quantity: 'emissionFactor' }, initial: 0.2, optional: false },
+  { key: 'emissionFactor', label: 'CO₂ per energy bought (fuel or electricity)', quantity: 'emissionFactor', range: { min: 0, max: 5, unit: 'kg/kWh', quantity: 'emissionFactor' }, initial: 0.2, optional: false },
 ];
 export const MAX_CURRENCY = 12;
 export const MAX_NAME = 80;
