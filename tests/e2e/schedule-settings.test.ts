@@ -109,7 +109,10 @@ describe('the schedule settings in the app', () => {
     expect(settings()).toEqual(before);
     await page.locator('#schedule-settings-conditionSets-0-relativeHumidity').evaluate((el) => el.scrollIntoView({ block: 'center' }));
     await shot('schedule-settings-refused-humidity-1366x800.png');
+    // Typing in the box again takes its message away; the others (none here) would stay until the next Save.
     await page.fill('#schedule-settings-conditionSets-0-relativeHumidity', '50');
+    expect(await refusalBeside('schedule-settings-conditionSets-0-relativeHumidity').count()).toBe(0);
+    expect(await page.locator('[data-testid="schedule-settings-refusal"]').count()).toBe(0);
   });
 
   it('warns, before a save, of the runs a renamed condition set leaves behind, and Discard brings the stored settings back', async () => {
