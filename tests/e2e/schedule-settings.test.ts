@@ -48,6 +48,31 @@ afterAll(async () => {
   await server?.close();
 });
 
+describe('the schedule settings in US customary units', () => {
+  it('shows the stored °C as °F and stores a touch limit typed as 113 °F as 45 °C', async () => {
+    // (113 − 32) × 5/9 = 45 exactly: the Fahrenheit scale's definition. 25 °C = 77 °F likewise.
+    const us = services().projects.create({ name: 'Orchard Vale clinic, US drawings', unitSystem: 'IP' }).id;
+    const usPage = await session.browser().newPage({ viewport: { width: 1366, height: 800 } });
+    try {
+      await usPage.goto(server.url);
+      await usPage.locator('[data-testid="project-row"]').getByRole('button', { name: 'Orchard Vale clinic, US drawings', exact: true }).click();
+      await usPage.click('#project-schedule');
+      await usPage.click('[data-testid="schedule-settings"] > summary');
+      expect(await usPage.inputValue('#schedule-settings-conditionSets-0-airTemperature')).toBe('77');
+      expect(await usPage.locator('label[for="schedule-settings-conditionSets-0-airTemperature"]').textContent()).toBe('Air temperature, °F');
+      const index = services().schedules.settingsOf(us).services.findIndex((s) => s.service === 'heating flow');
+      await usPage.fill(`#schedule-settings-services-${index}-criteria-maxSurfaceTemperature-limit`, '113');
+      await usPage.click('#schedule-settings-save');
+      await usPage.locator('[data-testid="schedule-settings-saved"]').waitFor();
+      expect(services().schedules.settingsOf(us).services[index]!.criteria).toEqual({ maxSurfaceTemperature: { limit: 45 } });
+      // Untouched boxes keep every stored digit: the rest is as shipped.
+      expect(services().schedules.settingsOf(us).conditionSets).toEqual(services().schedules.settingsOf(services().projects.create({ name: 'Fresh' }).id).conditionSets);
+    } finally {
+      await usPage.close();
+    }
+  });
+});
+
 describe('the schedule settings in the app', () => {
   it('sizes the imported example schedule, so that no run waits', async () => {
     await page.click('#schedule-size');
