@@ -369,6 +369,18 @@ describe('the pipe schedule in the app', () => {
     expect(refusedCalls).toEqual(['400 /api/schedules-update-run']);
   });
 
+  it('downloads the bill of quantities as CSV, its lengths adding up to the schedule\'s', async () => {
+    const [download] = await Promise.all([page.waitForEvent('download'), page.click('#schedule-export-bill')]);
+    expect(download.suggestedFilename()).toBe('Kestrel-Yard-depot-bill-of-quantities.csv');
+    const file = path.join(session.tempFolder(), download.suggestedFilename());
+    await download.saveAs(file);
+    const [header, ...rows] = fs.readFileSync(file, 'utf8').split('\r\n\r\n')[0]!.split('\r\n');
+    expect(header).toMatch(/^material,thickness \[mm\],pipe series,pipe size,/);
+    // The length column counted from the right (material names may hold a quoted comma).
+    const total = rows.reduce((t, r) => t + Number(r.split(',').at(-7)), 0);
+    expect(total).toBeCloseTo(schedule().runs.reduce((t, r) => t + r.length, 0), 3);
+  });
+
   it('puts the schedule and the bill of quantities into the printed report', async () => {
     await page.click('#schedule-close');
     await page.click('#project-report');

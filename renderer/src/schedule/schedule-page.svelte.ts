@@ -103,10 +103,12 @@ export class SchedulePage {
     }
   }
 
-  /** The schedule as CSV (with results) or the empty template, as a download made in the page. */
-  async download(which: 'export' | 'template'): Promise<{ fileName: string; text: string } | undefined> {
+  /** The schedule as CSV (with results), the empty template or the bill of quantities, as a download made in the page. */
+  async download(which: 'export' | 'template' | 'bill'): Promise<{ fileName: string; text: string } | undefined> {
     try {
-      const file = which === 'export' ? await laminaApi().schedules.exportCsv({ projectId: this.projectId }) : await laminaApi().schedules.template({ projectId: this.projectId });
+      const request = { projectId: this.projectId };
+      const api = laminaApi().schedules;
+      const file = which === 'export' ? await api.exportCsv(request) : which === 'bill' ? await api.exportBill(request) : await api.template(request);
       const link = document.createElement('a');
       link.href = URL.createObjectURL(new Blob([file.text], { type: 'text/csv' }));
       link.download = file.fileName;
@@ -114,7 +116,7 @@ export class SchedulePage {
       setTimeout(() => URL.revokeObjectURL(link.href), 1000);
       return file;
     } catch (error) {
-      this.refuse(`The ${which === 'export' ? 'schedule' : 'template'} could not be made: ${messageOf(error)}`);
+      this.refuse(`The ${which === 'export' ? 'schedule' : which === 'bill' ? 'bill of quantities' : 'template'} could not be made: ${messageOf(error)}`);
       return undefined;
     }
   }
