@@ -10,16 +10,16 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { InputError } from '../../app/base/input-error.js';
 import { billOfQuantities, parseFittingAllowances, type BillOfQuantities, type FittingAllowances } from '../../app/schedules/bill-of-quantities.js';
-import { importSchedule, runProblem, type ImportSummary } from '../../app/schedules/schedule-import.js';
+import { importSchedule, runProblem } from '../../app/schedules/schedule-import.js';
+import type { Schedule, ScheduleImportOutcome } from '../../app/api/schedule-types.js';
+import type { UnitSystem } from '../../app/base/unit-systems.js';
 import type { ScheduleRun, ScheduleSettings } from '../../app/schedules/schedule-model.js';
 import { writeBillCsv, writeScheduleCsv } from '../../app/schedules/schedule-csv-write.js';
 import { parseScheduleSettings } from '../../app/schedules/schedule-settings.js';
 import { runFromObject } from '../../app/schedules/run-object.js';
 import { sizedRunFromObject } from '../../app/schedules/sized-run-object.js';
-import type { ScheduleProblem } from '../../app/schedules/schedule-csv-read.js';
 import { caseKeyOf, runsToResize, sizeSchedule, type KeyedSizedRun, type SizingProgress } from '../../app/schedules/size-schedule.js';
 import type { MaterialIdOf } from '../../app/schedules/schedule-run-case.js';
-import type { UnitSystem } from '../../app/base/unit-systems.js';
 import { caseContext } from '../cases/case-context.js';
 import { inWriteTransaction, type DatabaseContext } from './database-context.js';
 import type { MaterialsService } from './materials-service.js';
@@ -42,20 +42,7 @@ export function fittingAllowances(): FittingAllowances {
   return allowances;
 }
 
-export interface Schedule {
-  readonly projectId: number;
-  readonly unitSystem: UnitSystem;
-  readonly settings: ScheduleSettings;
-  readonly runs: readonly ScheduleRun[];
-  /** The last sizing of each run, by reference; absent for a run never sized. */
-  readonly sizing: Readonly<Record<string, KeyedSizedRun>>;
-  /** References of runs whose case changed since they were sized (or never were). */
-  readonly stale: readonly string[];
-}
-
-export type ScheduleImportOutcome =
-  | { readonly ok: true; readonly summary: ImportSummary; readonly runs: number }
-  | { readonly ok: false; readonly problems: readonly ScheduleProblem[]; readonly more: number };
+export type { Schedule, ScheduleImportOutcome } from '../../app/api/schedule-types.js';
 
 interface RunRow {
   readonly reference: string;
