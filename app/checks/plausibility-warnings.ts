@@ -24,14 +24,11 @@ export interface LayerTemperatureSpan {
   readonly maxServiceTemperature?: number | null;
 }
 
-/** A value as entered, with the true minus sign. */
-const signed = (value: number) => String(value).replace(/^-/, '\u2212');
-
 /** One warning per layer whose λ(θ) is read where neither its data nor its service range reaches; `text` writes its figures. */
 export function conductivityUseWarnings(spans: readonly LayerTemperatureSpan[], text: QuantityText = SI_TEXT): string[] {
   const celsius = (t: number) => text.keepingSi(`${numberText(t, { decimals: 1 })} °C`, t, 'temperature');
-  const given = (t: number) => text.keepingSi(`${signed(t)} °C`, t, 'temperature');
-  const span = (a: number, b: number) => (text.system === 'SI' ? `${signed(a)} to ${signed(b)} °C` : `${text.number(a, 'temperature')} to ${text.figure(b, 'temperature')}`);
+  const given = (t: number) => text.given(t, 'temperature');
+  const span = (a: number, b: number) => `${text.givenNumber(a, 'temperature')} to ${text.given(b, 'temperature')}`;
   const warnings: string[] = [];
   for (const s of spans) {
     const m = s.conductivity;

@@ -28,6 +28,11 @@ export function exactShown(si: number, quantity: QuantityName, system: UnitSyste
   return String(shown);
 }
 
+/** A result in the file's units to 6 significant figures: results are read, not read back. */
+function sixFigures(si: number, quantity: QuantityName, system: UnitSystem): string {
+  return String(Number(toDisplay(si, quantity, system).toPrecision(6)));
+}
+
 function cellOf(run: ScheduleRun, key: ColumnKey, quantity: QuantityName | undefined, system: UnitSystem): string {
   const value = key === 'valves' || key === 'flanges' || key === 'bends' ? run.fittings[key] : run[key];
   if (value === null) return '';
@@ -38,7 +43,7 @@ function cellOf(run: ScheduleRun, key: ColumnKey, quantity: QuantityName | undef
 function resultCells(sized: SizedRun | undefined, system: UnitSystem): string[] {
   if (sized === undefined) return RESULT_COLUMNS.map(() => '');
   if (!sized.ok) return RESULT_COLUMNS.map((c) => (c.name === 'reason' ? sized.reason : c.name === 'basis' ? 'not sized' : ''));
-  const shown = (v: number, q: QuantityName) => String(Number(toDisplay(v, q, system).toPrecision(6)));
+  const shown = (v: number, q: QuantityName) => sixFigures(v, q, system);
   return [
     shown(sized.thickness, 'thickness'),
     sized.basis === 'none-meets' ? 'none meets' : sized.basis,
@@ -69,7 +74,7 @@ export function writeScheduleCsv(runs: readonly ScheduleRun[], system: UnitSyste
  * (with cost and CO₂ when the project gives its economics).
  */
 export function writeBillCsv(bill: BillOfQuantities, system: UnitSystem): string {
-  const shown = (v: number | null, q: QuantityName) => (v === null ? '' : String(Number(toDisplay(v, q, system).toPrecision(6))));
+  const shown = (v: number | null, q: QuantityName) => (v === null ? '' : sixFigures(v, q, system));
   const head = (name: string, q: QuantityName) => `${name} [${unitLabel(q, system)}]`;
   const lines: string[][] = [
     ['material', head('thickness', 'thickness'), 'pipe series', 'pipe size', head('pipe outside diameter', 'diameter'), 'runs', head('length', 'length'), head('outer surface', 'area'), 'volume [m³]', 'valves', 'flanges', 'bends', head('fittings as pipe', 'length')],

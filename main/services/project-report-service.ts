@@ -11,6 +11,7 @@ import type { MaterialsService } from './materials-service.js';
 import type { ProjectsService } from './projects-service.js';
 import type { SchedulesService } from './schedules-service.js';
 import { SCHEDULE_CAUTION, scheduleReportSections } from '../../app/schedules/schedule-report.js';
+import { upToDateSizing } from '../../app/schedules/up-to-date-sizing.js';
 
 export function projectReport(
   services: { readonly projects: ProjectsService; readonly materials: MaterialsService; readonly schedules?: SchedulesService },
@@ -28,6 +29,5 @@ export function projectReport(
 function scheduleOf(schedules: SchedulesService | undefined, projectId: number) {
   const schedule = schedules?.get(projectId);
   if (!schedules || !schedule || schedule.runs.length === 0) return undefined;
-  const fresh = new Map(Object.entries(schedule.sizing).filter(([reference]) => !schedule.stale.includes(reference)));
-  return { sections: scheduleReportSections(schedule.runs, fresh, schedules.bill(projectId)), caution: SCHEDULE_CAUTION };
+  return { sections: scheduleReportSections(schedule.runs, upToDateSizing(schedule.sizing, schedule.stale), schedules.billOf(schedule)), caution: SCHEDULE_CAUTION };
 }

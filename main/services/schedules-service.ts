@@ -18,6 +18,7 @@ import { writeBillCsv, writeScheduleCsv } from '../../app/schedules/schedule-csv
 import { parseScheduleSettings } from '../../app/schedules/schedule-settings.js';
 import { runFromObject } from '../../app/schedules/run-object.js';
 import { sizedRunFromObject } from '../../app/schedules/sized-run-object.js';
+import { upToDateSizing } from '../../app/schedules/up-to-date-sizing.js';
 import { caseKeyOf, runsToResize, sizeSchedule, type KeyedSizedRun, type SizingProgress } from '../../app/schedules/size-schedule.js';
 import type { MaterialIdOf } from '../../app/schedules/schedule-run-case.js';
 import { caseContext } from '../cases/case-context.js';
@@ -84,7 +85,9 @@ export class SchedulesService {
     const rows = this.db.prepare('SELECT reference, run, sizing FROM schedule_runs WHERE project_id = ? ORDER BY position').all(projectId) as RunRow[];
     const runs = rows.map((r) => JSON.parse(r.run) as ScheduleRun);
     const sizing: Record<string, KeyedSizedRun> = {};
-    for (const r of rows) if (r.sizing !== null) sizing[(JSON.parse(r.run) as ScheduleRun).reference] = JSON.parse(r.sizing) as KeyedSizedRun;
+    rows.forEach((r, i) => {
+      if (r.sizing !== null) sizing[runs[i]!.reference] = JSON.parse(r.sizing) as KeyedSizedRun;
+    });
     const stale = runsToResize(runs, new Map(Object.entries(sizing)), settings, this.materialIdOf()).map((r) => r.reference);
     return { projectId, unitSystem: row.unit_system, settings, runs, sizing, stale };
   }
@@ -120,8 +123,10 @@ export class SchedulesService {
     }
     const problem = runProblem(checked, schedule.settings, this.materialIdOf(), caseContext(this.materials));
     if (problem) throw new InputError(problem.column, problem.message);
-    const runs = schedule.runs.map((r, i) => (i === index ? checked : r));
-    inWriteTransaction(this.context, () => this.storeRuns(projectId, runs, schedule.sizing));
+    // One row rewritten in place; its last sizing stays and reads as stale through its caseKey.
+    inWriteTransaction(this.context, () => {
+      this.db.prepare('UPDATE schedule_runs SET reference = ?, run = ? WHERE project_id = ? AND reference = ?').run(checked.reference, JSON.stringify(checked), projectId, schedule.runs[index]!.reference);
+    });
     return checked;
   }
 
@@ -146,7 +151,8 @@ export class SchedulesService {
    */
   size(projectId: number, options: { readonly all?: boolean; readonly onProgress?: (p: SizingProgress) => void; readonly cancelled?: () => boolean } = {}): { sized: number; complete: boolean } {
     const schedule = this.get(projectId);
-    const toSize = options.all ? schedule.runs : schedule.runs.filter((r) => schedule.stale.includes(r.reference));
+    const stale = new Set(schedule.stale);
+    const toSize = options.all ? schedule.runs : schedule.runs.filter((r) => stale.has(r.reference));
     const { results, complete } = sizeSchedule(toSize, schedule.settings, this.materialIdOf(), caseContext(this.materials), options);
     inWriteTransaction(this.context, () => {
       const update = this.db.prepare('UPDATE schedule_runs SET sizing = ? WHERE project_id = ? AND reference = ?');
@@ -179,14 +185,17 @@ export class SchedulesService {
   }
 
   bill(projectId: number): BillOfQuantities {
-    const schedule = this.get(projectId);
-    const fresh = new Map(Object.entries(schedule.sizing).filter(([reference]) => !schedule.stale.includes(reference)));
-    return billOfQuantities(schedule.runs, fresh, fittingAllowances(), schedule.settings.economics);
+    return this.billOf(this.get(projectId));
+  }
+
+  /** The bill of a schedule already read (its up-to-date sizings only). */
+  billOf(schedule: Schedule): BillOfQuantities {
+    return billOfQuantities(schedule.runs, upToDateSizing(schedule.sizing, schedule.stale), fittingAllowances(), schedule.settings.economics);
   }
 
   exportCsv(projectId: number): string {
     const schedule = this.get(projectId);
-    const fresh = new Map(Object.entries(schedule.sizing).filter(([reference]) => !schedule.stale.includes(reference)));
+    const fresh = upToDateSizing(schedule.sizing, schedule.stale);
     return writeScheduleCsv(schedule.runs, schedule.unitSystem, fresh.size > 0 ? fresh : undefined);
   }
 

@@ -11,7 +11,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { numberText } from '../../../app/base/number-text.js';
-import { displayPrecision, toDisplay, unitLabel, type UnitSystem } from '../../../app/base/unit-systems.js';
+import type { UnitSystem } from '../../../app/base/unit-systems.js';
+import { formatQuantityNumber, quantityUnit } from '../../../app/report/format-quantity.js';
 import type { QuantityName } from '../../../app/base/quantities.js';
 import { CRITERION_NAMES } from '../../../app/cases/sizing/sizing-words.js';
 import type { BillOfQuantities, EnergyTotals } from '../../../app/schedules/bill-of-quantities.js';
@@ -70,7 +71,7 @@ export async function projectScheduleCommand(positional: readonly string[], opti
       return withServices(io, db, ({ schedules }) => {
         const { sized } = schedules.size(projectId, { all: flags.has('all') });
         const schedule = schedules.get(projectId);
-        const bill = schedules.bill(projectId);
+        const bill = schedules.billOf(schedule);
         if (format === 'json') io.stdout(`${JSON.stringify({ projectId, sizedNow: sized, runs: schedule.runs.map((r) => ({ run: r, sizing: schedule.sizing[r.reference] ?? null })), bill }, null, 2)}\n`);
         else io.stdout(scheduleText(schedule, bill, sized));
         const failed = Object.values(schedule.sizing).filter((s) => !s.ok);
@@ -105,8 +106,8 @@ function needsFile(io: CliIO, action: string): number {
   return EXIT_BAD_INPUT;
 }
 
-const figure = (value: number, quantity: QuantityName, system: UnitSystem) => numberText(toDisplay(value, quantity, system), displayPrecision(quantity, system));
-const unit = (quantity: QuantityName, system: UnitSystem) => unitLabel(quantity, system);
+const figure = (value: number, quantity: QuantityName, system: UnitSystem) => formatQuantityNumber(value, quantity, system);
+const unit = (quantity: QuantityName, system: UnitSystem) => quantityUnit(quantity, system);
 
 /** Columns padded to their widest cell, figures to the right. */
 function table(header: readonly string[], rows: readonly (readonly string[])[], numeric: readonly boolean[]): string {

@@ -5,6 +5,7 @@
  * edited row is sized again alone (started by itself once the edit is stored); results are stored
  * in chunks as they come, so Cancel keeps what was done.
  */
+import { upToDateSizing } from '../../../app/schedules/up-to-date-sizing.js';
 import type { PipeSize } from '../../../app/index.js';
 import type { KeyedSizedRun, Material, OpenedSchedule, ScheduleImportOutcome, ScheduleProblem, ScheduleRun, UnitSystem } from '../../../app/api/contract.js';
 import { laminaApi, messageOf } from '../bridge/lamina-api.js';
@@ -60,10 +61,7 @@ export class SchedulePage {
 
   /** The sizings that are for their runs' current inputs (the bill counts only these). */
   freshSizing(): Map<string, KeyedSizedRun> {
-    const s = this.schedule;
-    if (!s) return new Map();
-    const stale = new Set(s.stale);
-    return new Map(Object.entries(s.sizing).filter(([reference]) => !stale.has(reference)));
+    return this.schedule ? upToDateSizing(this.schedule.sizing, this.schedule.stale) : new Map();
   }
 
   async open(): Promise<void> {
