@@ -196,7 +196,9 @@ describe('the pipe schedule in the app', () => {
     await page.fill('#schedule-filter', '');
     await page.locator('#schedule-progress-bar').waitFor({ state: 'detached', timeout: 240_000 });
     const seen = await page.evaluate(() => (window as unknown as { progressSeen: { value: number; max: number }[] }).progressSeen);
-    expect(seen.length).toBeGreaterThan(10);
+    // The bar moved through values between start and end (how many depends on the machine's speed:
+    // results reach the page in batches every 150 ms).
+    expect(seen.some((p) => p.value > 0 && p.value < 200)).toBe(true);
     expect(seen.every((p) => p.max === 200)).toBe(true);
     expect(Math.max(...seen.map((p) => p.value))).toBe(200);
     const sizingMs = await page.evaluate(() => performance.now()) - clickedAt;
