@@ -6,9 +6,23 @@
  */
 import { InputError } from '../base/input-error.js';
 import { isObject, rejectUnknownKeys, requireArray, requireNumberIn, requireObject, requireOneOf, requireString } from '../base/field-checks.js';
+import type { NumberRange } from '../base/number-range.js';
 import { INPUT_LIMITS } from '../cases/insulated/insulated-inputs.js';
 import { parseSizingOptions } from '../cases/sizing/sizing-options.js';
 import type { ConditionSet, ScheduleEconomics, ScheduleSettings, ServiceRule } from './schedule-model.js';
+
+/** The allowed range of each number of the settings, in SI; the settings form shows the same. */
+export const SCHEDULE_SETTING_RANGES = {
+  airTemperature: { min: INPUT_LIMITS.airTemperature[0], max: INPUT_LIMITS.airTemperature[1], unit: '°C', quantity: 'temperature' },
+  relativeHumidity: { min: 0, minExclusive: true, max: 1, unit: '' },
+  windSpeed: { min: INPUT_LIMITS.windSpeed[0], max: INPUT_LIMITS.windSpeed[1], unit: 'm/s', quantity: 'windSpeed' },
+  operatingHours: { min: INPUT_LIMITS.operatingHours[0], max: INPUT_LIMITS.operatingHours[1], unit: 'h' },
+  energyPrice: { min: 0, max: 100, unit: 'per kWh' },
+  generationEfficiency: { min: 0.05, max: 10, unit: '' },
+  emissionFactor: { min: 0, max: 5, unit: 'kg/kWh', quantity: 'emissionFactor' },
+} as const satisfies Record<string, NumberRange>;
+export const MAX_CURRENCY_LENGTH = 12;
+const R = SCHEDULE_SETTING_RANGES;
 
 export const MAX_CONDITION_SETS = 50;
 export const MAX_SERVICES = 50;
@@ -36,14 +50,12 @@ function parseConditionSet(value: unknown, field: string): ConditionSet {
     throw new InputError(`${field}.name`, `${field}.name may not be '${name}': a run's location names indoor and outdoor without a set.`);
   }
   const exposure = requireOneOf(`${field}.exposure`, set['exposure'], ['indoor', 'outdoor'] as const);
-  const [tMin, tMax] = INPUT_LIMITS.airTemperature;
-  const [wMin, wMax] = INPUT_LIMITS.windSpeed;
   return {
     name,
-    airTemperature: requireNumberIn(`${field}.airTemperature`, set['airTemperature'], { min: tMin, max: tMax, unit: '°C', quantity: 'temperature' }),
-    relativeHumidity: requireNumberIn(`${field}.relativeHumidity`, set['relativeHumidity'], { min: 0, minExclusive: true, max: 1, unit: '' }),
+    airTemperature: requireNumberIn(`${field}.airTemperature`, set['airTemperature'], R.airTemperature),
+    relativeHumidity: requireNumberIn(`${field}.relativeHumidity`, set['relativeHumidity'], R.relativeHumidity),
     exposure,
-    windSpeed: exposure === 'indoor' ? 0 : requireNumberIn(`${field}.windSpeed`, set['windSpeed'], { min: wMin, max: wMax, unit: 'm/s', quantity: 'windSpeed' }),
+    windSpeed: exposure === 'indoor' ? 0 : requireNumberIn(`${field}.windSpeed`, set['windSpeed'], R.windSpeed),
   };
 }
 
@@ -67,10 +79,10 @@ function parseEconomics(value: unknown, field: string): ScheduleEconomics | null
   const e = requireObject(value, field);
   rejectUnknownKeys(e, ['energyPrice', 'generationEfficiency', 'emissionFactor', 'currency'], field);
   return {
-    energyPrice: requireNumberIn(`${field}.energyPrice`, e['energyPrice'], { min: 0, max: 100, unit: 'per kWh' }),
-    generationEfficiency: requireNumberIn(`${field}.generationEfficiency`, e['generationEfficiency'], { min: 0.05, max: 10, unit: '' }),
-    emissionFactor: requireNumberIn(`${field}.emissionFactor`, e['emissionFactor'], { min: 0, max: 5, unit: 'kg/kWh', quantity: 'emissionFactor' }),
-    currency: requireString(e['currency'], `${field}.currency`, 12),
+    energyPrice: requireNumberIn(`${field}.energyPrice`, e['energyPrice'], R.energyPrice),
+    generationEfficiency: requireNumberIn(`${field}.generationEfficiency`, e['generationEfficiency'], R.generationEfficiency),
+    emissionFactor: requireNumberIn(`${field}.emissionFactor`, e['emissionFactor'], R.emissionFactor),
+    currency: requireString(e['currency'], `${field}.currency`, MAX_CURRENCY_LENGTH),
   };
 }
 
@@ -85,11 +97,10 @@ export function parseScheduleSettings(value: unknown, field = 'settings'): Sched
     if (seen.has(s.service.toLowerCase())) throw new InputError(`${field}.services[${i}].service`, `${field}.services[${i}] repeats the service '${s.service}'; each needs its own.`);
     seen.add(s.service.toLowerCase());
   });
-  const [hMin, hMax] = INPUT_LIMITS.operatingHours;
   return {
     conditionSets,
     services,
-    operatingHours: requireNumberIn(`${field}.operatingHours`, value['operatingHours'], { min: hMin, max: hMax, unit: 'h' }),
+    operatingHours: requireNumberIn(`${field}.operatingHours`, value['operatingHours'], R.operatingHours),
     economics: parseEconomics(value['economics'], `${field}.economics`),
   };
 }

@@ -10,7 +10,7 @@
 import { isInRange, type NumberRange } from '../../../app/base/number-range.js';
 import type { QuantityName } from '../../../app/base/quantities.js';
 import { unitLabel, type UnitSystem } from '../../../app/base/unit-systems.js';
-import { INPUT_LIMITS } from '../../../app/cases/insulated/insulated-inputs.js';
+import { MAX_CURRENCY_LENGTH, SCHEDULE_SETTING_RANGES } from '../../../app/schedules/schedule-settings.js';
 import type { ConditionSet, ScheduleEconomics, ScheduleRun, ScheduleSettings, ServiceRule } from '../../../app/schedules/schedule-model.js';
 import type { NumberField } from '../case-editor/case-form-fields.js';
 import { DEFAULT_TOUCH_LIMIT } from '../../../app/checks/personnel-protection.js';
@@ -36,26 +36,24 @@ export interface SettingsBox {
   readonly emptyMeans?: (system: UnitSystem) => string;
 }
 
-const [tMin, tMax] = INPUT_LIMITS.airTemperature;
-const [wMin, wMax] = INPUT_LIMITS.windSpeed;
-const [hMin, hMax] = INPUT_LIMITS.operatingHours;
+const R = SCHEDULE_SETTING_RANGES;
 
 export const CONDITION_BOXES: readonly SettingsBox[] = [
-  { key: 'airTemperature', label: 'Air temperature', quantity: 'temperature', range: { min: tMin, max: tMax, unit: '°C', quantity: 'temperature' }, initial: 20, optional: false },
-  { key: 'relativeHumidity', label: 'Relative humidity', quantity: 'relativeHumidity', range: { min: 0, minExclusive: true, max: 1, unit: '' }, initial: 0.5, optional: false },
+  { key: 'airTemperature', label: 'Air temperature', quantity: 'temperature', range: R.airTemperature, initial: 20, optional: false },
+  { key: 'relativeHumidity', label: 'Relative humidity', quantity: 'relativeHumidity', range: R.relativeHumidity, initial: 0.5, optional: false },
 ];
 /** Outdoors only: a set indoors is in still air. */
-export const WIND_BOX: SettingsBox = { key: 'windSpeed', label: 'Wind speed', quantity: 'windSpeed', range: { min: wMin, max: wMax, unit: 'm/s', quantity: 'windSpeed' }, initial: 3, optional: false };
+export const WIND_BOX: SettingsBox = { key: 'windSpeed', label: 'Wind speed', quantity: 'windSpeed', range: R.windSpeed, initial: 3, optional: false };
 
-export const HOURS_BOX: SettingsBox = { key: 'operatingHours', label: 'Operating hours per year', quantity: 'hours', range: { min: hMin, max: hMax, unit: 'h' }, initial: 8760, optional: false };
+export const HOURS_BOX: SettingsBox = { key: 'operatingHours', label: 'Operating hours per year', quantity: 'hours', range: R.operatingHours, initial: 8760, optional: false };
 
 /** Starting values of the economics are placeholders (common practice, no source): the job's own figures replace them. */
 export const ECONOMICS_BOXES: readonly SettingsBox[] = [
-  { key: 'energyPrice', label: 'Energy price per kWh bought (fuel or electricity)', quantity: 'pricePerEnergy', range: { min: 0, max: 100, unit: 'per kWh' }, initial: 0.1, optional: false },
-  { key: 'generationEfficiency', label: 'Efficiency of heat generation (or COP of cooling)', quantity: 'factor', range: { min: 0.05, max: 10, unit: '' }, initial: 0.9, optional: false },
-  { key: 'emissionFactor', label: 'CO₂ per energy bought (fuel or electricity)', quantity: 'emissionFactor', range: { min: 0, max: 5, unit: 'kg/kWh', quantity: 'emissionFactor' }, initial: 0.2, optional: false },
+  { key: 'energyPrice', label: 'Energy price per kWh bought (fuel or electricity)', quantity: 'pricePerEnergy', range: R.energyPrice, initial: 0.1, optional: false },
+  { key: 'generationEfficiency', label: 'Efficiency of heat generation (or COP of cooling)', quantity: 'factor', range: R.generationEfficiency, initial: 0.9, optional: false },
+  { key: 'emissionFactor', label: 'CO₂ per energy bought (fuel or electricity)', quantity: 'emissionFactor', range: R.emissionFactor, initial: 0.2, optional: false },
 ];
-export const MAX_CURRENCY = 12;
+export const MAX_CURRENCY = MAX_CURRENCY_LENGTH;
 export const MAX_NAME = 80;
 
 /** A criterion's boxes: the sizing panel's own fields (labels, quantities, ranges), keyed by their last segment. */
