@@ -103,3 +103,13 @@ export function shownSizingPaths(kind: CaseKindName, doc: Json): string[] {
   if (kind === 'wall' || sizingBlock(doc) === undefined) return [];
   return sizingPaths(kind, (c) => criterionOn(doc, c), economicsOn(doc), seriesChoice(doc) === 'range');
 }
+
+/** What each criterion's switch says, as a stranger would read it (the sizing panel and the schedule's services). */
+export const CRITERION_SWITCHES: Readonly<Record<SizingCriterionName, { readonly label: string; readonly hint: string }>> = {
+  maxSurfaceTemperature: { label: 'Safe to touch', hint: 'The outer surface no hotter than a limit (personnel protection).' },
+  noCondensation: { label: 'No condensation on the surface', hint: 'The outer surface stays warmer than the dew point of the air by a margin (cold and chilled lines).' },
+  maxHeatLoss: { label: 'Heat loss within a limit', hint: 'Heat lost, or gained by a cold line, no more than a limit.' },
+  maxTemperatureDrop: { label: 'Fluid temperature kept along the run', hint: 'The fluid cools (or warms) by no more than a limit from one end of the run to the other, at its mass flow.' },
+  freezeProtection: { label: 'Water does not freeze too soon', hint: 'With the flow stopped in cold air, the water takes at least a given time to reach 0 °C, and, if given, to freeze in part.' },
+  economic: { label: 'Least lifecycle cost', hint: 'The thickness whose installed cost plus the energy lost over the years costs least (needs the costs below).' },
+};

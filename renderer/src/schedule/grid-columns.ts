@@ -4,6 +4,7 @@
  * how a run shows in it, how typed text becomes the run's value, and what it sorts by (numbers as
  * numbers). The texts of a cell are what copy puts on the clipboard and paste reads back.
  */
+import { CRITERION_NAMES } from '../../../app/cases/sizing/sizing-words.js';
 import { SCHEDULE_COLUMNS, type ColumnKey } from '../../../app/schedules/schedule-columns.js';
 import type { KeyedSizedRun, ScheduleRun } from '../../../app/api/contract.js';
 import type { CheckVerdict } from '../../../app/checks/check-result.js';
@@ -97,14 +98,6 @@ export function withCellText(run: ScheduleRun, column: EditableColumn, text: str
   return { ok: true, run: { ...run, [key]: value } as ScheduleRun };
 }
 
-const CRITERION_WORDS: Readonly<Record<string, string>> = {
-  maxSurfaceTemperature: 'touch temperature',
-  noCondensation: 'no condensation',
-  maxHeatLoss: 'heat-loss limit',
-  maxTemperatureDrop: 'temperature drop',
-  freezeProtection: 'freeze protection',
-  economic: 'least lifecycle cost',
-};
 
 const VERDICT_SIGNS: Readonly<Record<CheckVerdict, string>> = { pass: '✓', fail: '✗', warning: '!', 'not-applicable': '–' };
 
@@ -114,7 +107,8 @@ export function basisText(sized: KeyedSizedRun | undefined): string {
   if (!sized.ok) return 'cannot size';
   if (sized.basis === 'fixed') return sized.criteriaMet ? 'fixed' : 'fixed, falls short';
   if (sized.basis === 'none-meets') return 'none meets';
-  return sized.governing ? (CRITERION_WORDS[sized.governing] ?? sized.governing) : 'chosen';
+  // The engine's names, as the report and the command line write them.
+  return sized.governing ? CRITERION_NAMES[sized.governing] : 'chosen';
 }
 
 /** True for a row whose result needs the reader's attention (flagged in the grid). */

@@ -15,7 +15,7 @@ import type { ConditionSet, ScheduleEconomics, ScheduleRun, ScheduleSettings, Se
 import type { NumberField } from '../case-editor/case-form-fields.js';
 import { DEFAULT_TOUCH_LIMIT } from '../../../app/checks/personnel-protection.js';
 import { boxText, hintValue, rangeHint, storedValueFor } from '../case-editor/field-text.js';
-import { criterionFields } from '../case-editor/sizing-fields.js';
+import { CRITERION_SWITCHES, criterionFields } from '../case-editor/sizing-fields.js';
 
 /** The criteria a service may size to: a case's, less the economic thickness (a schedule sizes to physical criteria). */
 export const SCHEDULE_CRITERIA = ['maxSurfaceTemperature', 'noCondensation', 'maxHeatLoss', 'maxTemperatureDrop', 'freezeProtection'] as const;
@@ -386,11 +386,5 @@ export function refusalInWords(message: string): string {
   return worded === message ? message : worded.charAt(0).toUpperCase() + worded.slice(1);
 }
 
-/** What each criterion's switch says, in the schedule's terms. */
-export const CRITERION_WORDS: Readonly<Record<ScheduleCriterion, { readonly label: string; readonly hint: string }>> = {
-  maxSurfaceTemperature: { label: 'Safe to touch', hint: 'The outer surface no hotter than the limit (personnel protection).' },
-  noCondensation: { label: 'No condensation', hint: 'The outer surface warmer than the dew point of the surrounding air by the margin.' },
-  maxHeatLoss: { label: 'Heat loss within a limit', hint: 'Heat lost, or gained by a cold line, per length of pipe.' },
-  maxTemperatureDrop: { label: 'Fluid temperature kept along the run', hint: 'The fluid cools (or warms) by no more than the limit over the run, at its mass flow.' },
-  freezeProtection: { label: 'Standing water slow to freeze', hint: 'With the flow stopped in cold air, the water takes at least the given time to reach 0 °C.' },
-};
+/** What each criterion's switch says: the sizing panel's words. */
+export const CRITERION_WORDS: Readonly<Record<ScheduleCriterion, { readonly label: string; readonly hint: string }>> = CRITERION_SWITCHES;
