@@ -132,6 +132,7 @@ describe('a schedule sized in one go', () => {
     expect(report.cautions).toContain(SCHEDULE_CAUTION);
     const html = renderReportBody(report);
     expect(html).toContain('Bill of quantities');
+    expect(html).toContain('and the schedule of pipe runs with its bill of quantities, in SI units');
     expect(html).toContain('The job');
     expect(html).not.toMatch(/NaN|undefined|Infinity/);
   });

@@ -90,7 +90,7 @@ function coverHtml(report: ProjectReport): string {
   return (
     `<section class="cover">${letterhead}<div class="cover-title"><p class="report-kind">Heat and moisture calculation report</p>` +
     `<h1>${escapeHtml(p.name.trim() || 'Project')}</h1></div><dl class="particulars">${rows}</dl>${revision}` +
-    `<p class="cover-contents">${report.cases.length} ${report.cases.length === 1 ? 'case' : 'cases'}, in ${units}. The cautions at the end of this report apply to every case.</p>` +
+    `<p class="cover-contents">${report.cases.length} ${report.cases.length === 1 ? 'case' : 'cases'}${report.schedule?.length ? ' and the schedule of pipe runs with its bill of quantities' : ''}, in ${units}. The cautions at the end of this report apply to every case.</p>` +
     `<p class="produced-by">Produced with ${escapeHtml(report.producedBy)}.</p></section>`
   );
 }
